@@ -1,0 +1,177 @@
+package lotgate.sampling;
+
+/**
+ * The operating characteristics of a plan under a model: probability of acceptance (the OC curve,
+ * one minus the power of the test), average outgoing quality (AOQ) and average total inspection
+ * (ATI) under rectifying inspection, where rejected lots are inspected 100% and nonconforming units
+ * found are replaced by good ones.
+ *
+ * @param lotSize the lot size N, or 0 when unknown (AOQ is then the limit for a very large lot and
+ *                ATI cannot be computed)
+ */
+public record OperatingCharacteristic(Plan plan, OcModel model, int lotSize) {
+
+    public OperatingCharacteristic {
+        if (lotSize < 0) {
+            throw new IllegalArgumentException("lot size must not be negative, got " + lotSize);
+        }
+        if (model instanceof OcModel.Hypergeometric h && h.lotSize() != lotSize) {
+            throw new IllegalArgumentException("the hypergeometric model is tied to lot size " + h.lotSize()
+                    + ", not " + lotSize);
+        }
+        if (lotSize > 0 && plan.maxSampleSize() > lotSize) {
+            throw new IllegalArgumentException("the plan may inspect " + plan.maxSampleSize()
+                    + " units, more than the lot size " + lotSize);
+        }
+    }
+
+    /** The characteristics for the model's own lot size (type A), or for none (type B). */
+    public static OperatingCharacteristic of(Plan plan, OcModel model) {
+        return new OperatingCharacteristic(plan, model, model.lotSize());
+    }
+
+    /** P(accept) at a quality level. */
+    public static double acceptance(Plan plan, OcModel model, double quality) {
+        return plan.acceptance(model, quality);
+    }
+
+    /** P(reject) at a quality level, computed as its own tail and not as 1 - P(accept). */
+    public static double rejection(Plan plan, OcModel model, double quality) {
+        return plan.rejection(model, quality);
+    }
+
+    public double acceptance(double quality) {
+        return acceptance(plan, model, quality);
+    }
+
+    /**
+     * Average outgoing quality: the expected fraction nonconforming (or nonconformities per unit)
+     * that leaves inspection. Accepted lots keep what was not inspected; rejected lots leave clean.
+     */
+    public double aoq(double quality) {
+        return plan.averageOutgoingQuality(model, quality, lotSize);
+    }
+
+    /** Average total inspection per lot: n + (1 - Pa)(N - n); needs a lot size. */
+    public double ati(double quality) {
+        if (lotSize == 0) {
+            throw new IllegalStateException("ATI needs a lot size");
+        }
+        return plan.averageTotalInspection(model, quality, lotSize);
+    }
+
+    public double rejection(double quality) {
+        return rejection(plan, model, quality);
+    }
+
+    /**
+     * The quality level at which P(accept) falls to the target. For a finite lot the curve is a
+     * staircase over whole numbers D, and the result is the largest D/N whose P(accept) is still at
+     * least the target.
+     */
+    public double qualityAt(double targetAcceptance) {
+        if (!(targetAcceptance > 0 && targetAcceptance < 1)) {
+            throw new IllegalArgumentException("target probability must lie strictly between 0 and 1");
+        }
+        if (model instanceof OcModel.Hypergeometric h) {
+            int good = 0;
+            int bad = h.lotSize();
+            if (acceptance(1.0) >= targetAcceptance) {
+                return 1.0;
+            }
+            while (bad - good > 1) {
+                int mid = good + (bad - good) / 2;
+                if (acceptance((double) mid / h.lotSize()) >= targetAcceptance) {
+                    good = mid;
+                } else {
+                    bad = mid;
+                }
+            }
+            return (double) good / h.lotSize();
+        }
+        double low = 0;
+        double high = Math.min(1.0, model.maxQuality());
+        while (acceptance(high) >= targetAcceptance) {
+            low = high;
+            high *= 2;
+        }
+        for (int i = 0; i < 200 && high - low > 1e-15 * high; i++) {
+            double mid = 0.5 * (low + high);
+            if (acceptance(mid) >= targetAcceptance) {
+                low = mid;
+            } else {
+                high = mid;
+            }
+        }
+        return 0.5 * (low + high);
+    }
+
+    /** The average outgoing quality limit: the largest AOQ over all incoming quality levels. */
+    public Aoql aoql() {
+        double top = qualityAt(1e-9);
+        if (model instanceof OcModel.Hypergeometric h) {
+            return integerAoql(h, (int) Math.round(top * h.lotSize()));
+        }
+        int steps = 400;
+        double best = 0;
+        int bestIndex = 0;
+        for (int i = 1; i <= steps; i++) {
+            double value = aoq(top * i / steps);
+            if (value > best) {
+                best = value;
+                bestIndex = i;
+            }
+        }
+        // Golden-section refinement in the bracket around the best grid point (AOQ is unimodal there).
+        double low = top * Math.max(0, bestIndex - 1) / steps;
+        double high = top * Math.min(steps, bestIndex + 1) / steps;
+        double ratio = (Math.sqrt(5) - 1) / 2;
+        double x1 = high - ratio * (high - low);
+        double x2 = low + ratio * (high - low);
+        double f1 = aoq(x1);
+        double f2 = aoq(x2);
+        while (high - low > 1e-13 * high) {
+            if (f1 < f2) {
+                low = x1;
+                x1 = x2;
+                f1 = f2;
+                x2 = low + ratio * (high - low);
+                f2 = aoq(x2);
+            } else {
+                high = x2;
+                x2 = x1;
+                f2 = f1;
+                x1 = high - ratio * (high - low);
+                f1 = aoq(x1);
+            }
+        }
+        double at = 0.5 * (low + high);
+        return new Aoql(at, aoq(at));
+    }
+
+    private Aoql integerAoql(OcModel.Hypergeometric h, int topDefectives) {
+        int n = h.lotSize();
+        int stride = Math.max(1, topDefectives / 2000);
+        int bestD = 0;
+        double best = 0;
+        for (int d = 0; d <= topDefectives; d += stride) {
+            double value = aoq((double) d / n);
+            if (value > best) {
+                best = value;
+                bestD = d;
+            }
+        }
+        for (int d = Math.max(0, bestD - stride); d <= Math.min(n, bestD + stride); d++) {
+            double value = aoq((double) d / n);
+            if (value > best) {
+                best = value;
+                bestD = d;
+            }
+        }
+        return new Aoql((double) bestD / n, best);
+    }
+
+    /** The AOQL and the incoming quality level at which it occurs. */
+    public record Aoql(double quality, double limit) {
+    }
+}
