@@ -1,5 +1,8 @@
 package lotgate.sampling;
 
+import java.util.ArrayList;
+import java.util.List;
+
 /**
  * The operating characteristics of a plan under a model: probability of acceptance (the OC curve,
  * one minus the power of the test), average outgoing quality (AOQ) and average total inspection
@@ -169,6 +172,48 @@ public record OperatingCharacteristic(Plan plan, OcModel model, int lotSize) {
             }
         }
         return new Aoql((double) bestD / n, best);
+    }
+
+    /**
+     * The curves at evenly spaced quality levels from 0 to the given level. For a finite lot each level
+     * is moved to the nearest whole number of nonconforming units, and repeated levels are dropped.
+     */
+    public List<CurvePoint> curve(double upTo, int intervals) {
+        if (!(upTo > 0) || intervals < 1) {
+            throw new IllegalArgumentException("a curve needs a positive range and at least one interval");
+        }
+        List<CurvePoint> points = new ArrayList<>();
+        int lastDefectives = -1;
+        for (int i = 0; i <= intervals; i++) {
+            double quality = upTo * i / intervals;
+            int defectives = -1;
+            if (model instanceof OcModel.Hypergeometric h) {
+                defectives = h.defectives(quality);
+                if (defectives == lastDefectives) {
+                    continue;
+                }
+                lastDefectives = defectives;
+                quality = (double) defectives / h.lotSize();
+            }
+            points.add(new CurvePoint(quality, defectives, acceptance(quality), aoq(quality),
+                    lotSize > 0 ? ati(quality) : Double.NaN));
+        }
+        return points;
+    }
+
+    /**
+     * A range for the curves that shows where P(accept) falls to 1%, and the LTPD if given (0 for none),
+     * rounded up to 1, 2, 2.5 or 5 times a power of ten.
+     */
+    public double suggestedRange(double ltpd) {
+        double top = Math.max(qualityAt(0.01), 1.25 * ltpd);
+        double power = Math.pow(10, Math.floor(Math.log10(top)));
+        for (double step : new double[] {1, 2, 2.5, 5, 10}) {
+            if (step * power >= top * (1 - 1e-12)) {
+                return Math.min(step * power, model.maxQuality());
+            }
+        }
+        return Math.min(10 * power, model.maxQuality());
     }
 
     /** The AOQL and the incoming quality level at which it occurs. */

@@ -1,0 +1,13 @@
+package lotgate.cli;
+
+/** The cautions lotgate prints where sampling can let a harmful unit through. */
+final class Cautions {
+    static final String ZERO_ACCEPTANCE = String.join("\n",
+            "Caution: a zero-acceptance plan (c = 0) is common practice for critical characteristics, but no",
+            "sampling plan can show that a lot is free of nonconforming units. Where a nonconforming unit could",
+            "hurt someone, the customer's requirements, local codes and licensed practice decide whether",
+            "sampling is allowed at all; they often call for 100% inspection or proven process control.");
+
+    private Cautions() {
+    }
+}

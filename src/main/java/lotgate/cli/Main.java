@@ -1,0 +1,118 @@
+package lotgate.cli;
+
+import java.io.PrintWriter;
+import lotgate.files.InputFileException;
+import lotgate.files.OutputFileException;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/** The lotgate command: acceptance sampling plans for lots, from design to lot sentencing. */
+@Command(name = "lotgate",
+        mixinStandardHelpOptions = true,
+        versionProvider = Version.class,
+        description = {
+                "Acceptance sampling of manufacturing lots: design exact sampling plans from the producer's",
+                "and consumer's risks, study their OC, AOQ and ATI curves, and save them under plans/.",
+                ""},
+        subcommands = {DesignCommand.class, CurveCommand.class, CompareCommand.class, ShowCommand.class,
+                DemoCommand.class, CommandLine.HelpCommand.class},
+        footerHeading = "%nExit codes:%n",
+        footer = {
+                "  0  done (sentencing: lot accepted)      1  lot rejected",
+                "  2  bad option or value                  3  input file missing, unreadable or invalid",
+                "  4  incomplete sample                    5  no sampling plan meets the request",
+                "  6  an output file cannot be written    70  internal fault (rerun with --debug)"})
+public final class Main implements Runnable {
+
+    @Option(names = "--debug", scope = CommandLine.ScopeType.INHERIT,
+            description = "Show the full stack trace when something fails.")
+    boolean debug;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        throw new CommandLine.ParameterException(spec.commandLine(), "name a command, e.g. 'lotgate design --help'");
+    }
+
+    public static void main(String[] args) {
+        System.exit(run(new PrintWriter(System.out, true), new PrintWriter(System.err, true), args));
+    }
+
+    /** Runs lotgate with the given streams and returns its exit code. */
+    public static int run(PrintWriter out, PrintWriter err, String... args) {
+        CommandLine cli = commandLine();
+        cli.setOut(out);
+        cli.setErr(err);
+        return cli.execute(args);
+    }
+
+    static CommandLine commandLine() {
+        CommandLine cli = new CommandLine(new Main());
+        cli.setParameterExceptionHandler(Main::usageError);
+        cli.setExecutionExceptionHandler(Main::failure);
+        cli.setCaseInsensitiveEnumValuesAllowed(true);
+        return cli;
+    }
+
+    private static int usageError(CommandLine.ParameterException e, String[] args) {
+        CommandLine cli = e.getCommandLine();
+        PrintWriter err = cli.getErr();
+        err.println("lotgate: " + e.getMessage() + " (see '" + cli.getCommandSpec().qualifiedName() + " --help')");
+        if (debugRequested(args)) {
+            e.printStackTrace(err);
+        }
+        err.flush();
+        return ExitCode.USAGE;
+    }
+
+    private static int failure(Exception e, CommandLine cli, CommandLine.ParseResult parsed) {
+        PrintWriter err = cli.getErr();
+        int code;
+        String message;
+        if (e instanceof InputFileException) {
+            code = ExitCode.BAD_INPUT;
+            message = e.getMessage();
+        } else if (e instanceof OutputFileException) {
+            code = ExitCode.CANNOT_WRITE;
+            message = e.getMessage();
+        } else if (e instanceof Failure f) {
+            code = f.exitCode();
+            message = f.getMessage();
+        } else {
+            code = ExitCode.INTERNAL;
+            message = "internal fault: " + e + " (rerun with --debug and report it)";
+        }
+        err.println("lotgate: " + message);
+        if (debugRequested(parsed.originalArgs().toArray(String[]::new))) {
+            e.printStackTrace(err);
+        }
+        err.flush();
+        return code;
+    }
+
+    private static boolean debugRequested(String[] args) {
+        for (String arg : args) {
+            if (arg.equals("--debug")) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** A failure with a message for the user and the exit code it stands for. */
+    static final class Failure extends RuntimeException {
+        private final int exitCode;
+
+        Failure(int exitCode, String message) {
+            super(message);
+            this.exitCode = exitCode;
+        }
+
+        int exitCode() {
+            return exitCode;
+        }
+    }
+}

@@ -1,0 +1,87 @@
+package lotgate.cli;
+
+import java.math.BigDecimal;
+import picocli.CommandLine.ITypeConverter;
+import picocli.CommandLine.TypeConversionException;
+
+/**
+ * Parsing of the values a quality engineer types: quality levels and risks as "1%", "0.5%" or a
+ * fraction such as "0.01", and whole numbers.
+ */
+final class Values {
+    private Values() {
+    }
+
+    /** A fraction from "1%" or "0.01"; a bare value of 1 or more is refused with a hint. */
+    static double fraction(String text) {
+        String trimmed = text.trim();
+        boolean percent = trimmed.endsWith("%");
+        String number = percent ? trimmed.substring(0, trimmed.length() - 1).trim() : trimmed;
+        BigDecimal value;
+        try {
+            value = new BigDecimal(number);
+        } catch (NumberFormatException e) {
+            throw new TypeConversionException("'" + text + "' is not a number; write a percent such as 1% or a"
+                    + " fraction such as 0.01");
+        }
+        if (percent) {
+            value = value.movePointLeft(2);
+        } else if (value.compareTo(BigDecimal.ONE) >= 0) {
+            throw new TypeConversionException("'" + text + "' is not a fraction below 1; did you mean "
+                    + value.stripTrailingZeros().toPlainString() + "%?");
+        }
+        if (value.signum() <= 0) {
+            throw new TypeConversionException("'" + text + "' must be above 0");
+        }
+        return value.doubleValue();
+    }
+
+    /** Quality levels: fractions nonconforming, or nonconformities per unit for the Poisson model. */
+    static final class Quality implements ITypeConverter<Double> {
+        @Override
+        public Double convert(String text) {
+            return fraction(text);
+        }
+    }
+
+    /** Risks alpha and beta: strictly between 0% and 100%. */
+    static final class Risk implements ITypeConverter<Double> {
+        @Override
+        public Double convert(String text) {
+            double value = fraction(text);
+            if (value >= 1) {
+                throw new TypeConversionException("'" + text + "' is not a risk; give a value between 0% and 100%,"
+                        + " such as 5%");
+            }
+            return value;
+        }
+    }
+
+    /** Whole numbers of 1 or more (sample and lot sizes). */
+    static final class Count implements ITypeConverter<Integer> {
+        @Override
+        public Integer convert(String text) {
+            return wholeNumber(text, 1);
+        }
+    }
+
+    /** Whole numbers of 0 or more (acceptance numbers). */
+    static final class Acceptance implements ITypeConverter<Integer> {
+        @Override
+        public Integer convert(String text) {
+            return wholeNumber(text, 0);
+        }
+    }
+
+    private static int wholeNumber(String text, int least) {
+        try {
+            int value = Integer.parseInt(text.trim().replace("_", ""));
+            if (value < least) {
+                throw new TypeConversionException("'" + text + "' must be a whole number of " + least + " or more");
+            }
+            return value;
+        } catch (NumberFormatException e) {
+            throw new TypeConversionException("'" + text + "' is not a whole number of " + least + " or more");
+        }
+    }
+}

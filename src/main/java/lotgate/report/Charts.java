@@ -1,0 +1,217 @@
+package lotgate.report;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.geom.Rectangle2D;
+import java.text.DecimalFormat;
+import java.text.DecimalFormatSymbols;
+import java.util.List;
+import java.util.Locale;
+import java.util.function.ToDoubleFunction;
+import lotgate.sampling.CurvePoint;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.annotations.XYTextAnnotation;
+import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.plot.CombinedDomainXYPlot;
+import org.jfree.chart.plot.ValueMarker;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.title.TextTitle;
+import org.jfree.chart.ui.RectangleAnchor;
+import org.jfree.chart.ui.TextAnchor;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
+
+/**
+ * Builds the OC, AOQ and ATI charts from computed curve points; the numbers come from the sampling
+ * core, the charts only draw them.
+ */
+public final class Charts {
+    private static final Color[] PALETTE = {
+            new Color(0x1f, 0x4e, 0x99), new Color(0xc0, 0x39, 0x2b), new Color(0x2e, 0x8b, 0x57),
+            new Color(0x8e, 0x44, 0xad), new Color(0xd3, 0x84, 0x00), new Color(0x34, 0x49, 0x5e)};
+    private static final Color MARK = new Color(0x55, 0x55, 0x55);
+    private static final Font LABEL = new Font(Font.SANS_SERIF, Font.PLAIN, 11);
+
+    /** A point the plan was asked to pass through or stay clear of: the AQL and LTPD requests. */
+    public record RiskMark(String label, double quality, double acceptance) {
+    }
+
+    private Charts() {
+    }
+
+    /** The x-axis title for fractions nonconforming or nonconformities per unit. */
+    public static String qualityAxis(boolean perUnit) {
+        return perUnit ? "Incoming quality (nonconformities per 100 units)" : "Incoming quality (% nonconforming)";
+    }
+
+    public static JFreeChart oc(String title, boolean perUnit, List<ChartCurve> curves, List<RiskMark> marks) {
+        XYPlot plot = ocPlot(perUnit, curves, marks);
+        plot.getDomainAxis().setRange(0, widest(curves));
+        return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, true));
+    }
+
+    public static JFreeChart aoq(String title, boolean perUnit, ChartCurve curve, double aoql, double aoqlAt) {
+        XYPlot plot = aoqPlot(perUnit, curve, aoql, aoqlAt, true);
+        plot.getDomainAxis().setRange(0, widest(List.of(curve)));
+        return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, true));
+    }
+
+    public static JFreeChart ati(String title, boolean perUnit, ChartCurve curve, int sampleSize, int lotSize) {
+        XYPlot plot = atiPlot(perUnit, curve, sampleSize, lotSize, true);
+        plot.getDomainAxis().setRange(0, widest(List.of(curve)));
+        return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, true));
+    }
+
+    /** Adds a line under the title, such as the model and lot size. */
+    public static JFreeChart withSubtitle(JFreeChart chart, String subtitle) {
+        TextTitle line = new TextTitle(subtitle, new Font(Font.SANS_SERIF, Font.PLAIN, 13));
+        chart.addSubtitle(0, line);
+        return chart;
+    }
+
+    private static double widest(List<ChartCurve> curves) {
+        double widest = 0;
+        for (ChartCurve curve : curves) {
+            for (CurvePoint point : curve.points()) {
+                widest = Math.max(widest, point.quality());
+            }
+        }
+        return widest > 0 ? widest : 1;
+    }
+
+    /** OC, AOQ and (with a lot size) ATI stacked over one quality axis. */
+    public static JFreeChart all(String title, boolean perUnit, ChartCurve curve, List<RiskMark> marks,
+            double aoql, double aoqlAt, int sampleSize, int lotSize) {
+        NumberAxis shared = qualityAxisOf(perUnit);
+        shared.setRange(0, widest(List.of(curve)));
+        CombinedDomainXYPlot combined = new CombinedDomainXYPlot(shared);
+        combined.setGap(14);
+        combined.add(ocPlot(perUnit, List.of(curve), marks), 3);
+        combined.add(aoqPlot(perUnit, curve, aoql, aoqlAt, false), 2);
+        if (lotSize > 0) {
+            combined.add(atiPlot(perUnit, curve, sampleSize, lotSize, false), 2);
+        }
+        return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, combined, true));
+    }
+
+    private static XYPlot ocPlot(boolean perUnit, List<ChartCurve> curves, List<RiskMark> marks) {
+        XYSeriesCollection data = new XYSeriesCollection();
+        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
+        for (int i = 0; i < curves.size(); i++) {
+            data.addSeries(series(curves.get(i), CurvePoint::acceptance));
+            renderer.setSeriesPaint(i, PALETTE[i % PALETTE.length]);
+            renderer.setSeriesStroke(i, new BasicStroke(2f));
+        }
+        XYPlot plot = new XYPlot(data, qualityAxisOf(perUnit), percentAxis("Probability of acceptance"), renderer);
+        plot.getRangeAxis().setRange(0, 1.02);
+        if (!marks.isEmpty()) {
+            XYSeriesCollection points = new XYSeriesCollection();
+            XYSeries asked = new XYSeries("Design points (AQL, LTPD)");
+            for (RiskMark mark : marks) {
+                asked.add(mark.quality(), mark.acceptance());
+                XYTextAnnotation text = new XYTextAnnotation("  " + mark.label(), mark.quality(), mark.acceptance());
+                text.setFont(LABEL);
+                text.setTextAnchor(mark.acceptance() > 0.5 ? TextAnchor.TOP_LEFT : TextAnchor.BOTTOM_LEFT);
+                plot.addAnnotation(text);
+            }
+            points.addSeries(asked);
+            XYLineAndShapeRenderer dots = new XYLineAndShapeRenderer(false, true);
+            dots.setSeriesPaint(0, MARK);
+            dots.setSeriesShape(0, new Rectangle2D.Double(-4, -4, 8, 8));
+            plot.setDataset(1, points);
+            plot.setRenderer(1, dots);
+        }
+        return style(plot);
+    }
+
+    private static XYPlot aoqPlot(boolean perUnit, ChartCurve curve, double aoql, double aoqlAt, boolean legend) {
+        XYSeriesCollection data = new XYSeriesCollection(series(curve, CurvePoint::aoq));
+        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
+        renderer.setSeriesVisibleInLegend(0, legend);
+        renderer.setSeriesPaint(0, PALETTE[0]);
+        renderer.setSeriesStroke(0, new BasicStroke(2f));
+        String outgoing = perUnit ? "Average outgoing quality (per 100 units)" : "Average outgoing quality";
+        XYPlot plot = new XYPlot(data, qualityAxisOf(perUnit), percentAxis(outgoing), renderer);
+        ValueMarker limit = new ValueMarker(aoql, PALETTE[1], new BasicStroke(1.2f, BasicStroke.CAP_BUTT,
+                BasicStroke.JOIN_MITER, 10f, new float[] {6f, 4f}, 0f));
+        limit.setLabel("AOQL " + percent(aoql) + " at incoming " + percent(aoqlAt) + "  ");
+        limit.setLabelFont(LABEL);
+        limit.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
+        limit.setLabelTextAnchor(TextAnchor.BOTTOM_RIGHT);
+        plot.addRangeMarker(limit);
+        plot.getRangeAxis().setUpperMargin(0.2);
+        return style(plot);
+    }
+
+    private static XYPlot atiPlot(boolean perUnit, ChartCurve curve, int sampleSize, int lotSize, boolean legend) {
+        XYSeriesCollection data = new XYSeriesCollection(series(curve, CurvePoint::ati));
+        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
+        renderer.setSeriesVisibleInLegend(0, legend);
+        renderer.setSeriesPaint(0, PALETTE[2]);
+        renderer.setSeriesStroke(0, new BasicStroke(2f));
+        NumberAxis units = new NumberAxis("Units inspected per lot");
+        units.setRange(0, lotSize * 1.05);
+        XYPlot plot = new XYPlot(data, qualityAxisOf(perUnit), units, renderer);
+        for (double level : new double[] {sampleSize, lotSize}) {
+            ValueMarker marker = new ValueMarker(level, MARK, new BasicStroke(0.8f));
+            marker.setLabel((level == lotSize ? "whole lot N = " : "sample n = ") + (int) level + "  ");
+            marker.setLabelFont(LABEL);
+            marker.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
+            marker.setLabelTextAnchor(TextAnchor.BOTTOM_RIGHT);
+            plot.addRangeMarker(marker);
+        }
+        return style(plot);
+    }
+
+    private static XYSeries series(ChartCurve curve, ToDoubleFunction<CurvePoint> value) {
+        XYSeries series = new XYSeries(curve.label(), false, true);
+        for (CurvePoint point : curve.points()) {
+            series.add(point.quality(), value.applyAsDouble(point));
+        }
+        return series;
+    }
+
+    private static NumberAxis qualityAxisOf(boolean perUnit) {
+        NumberAxis axis = percentAxis(qualityAxis(perUnit));
+        if (perUnit) {
+            DecimalFormat perHundred = new DecimalFormat("0.###", DecimalFormatSymbols.getInstance(Locale.ROOT));
+            perHundred.setMultiplier(100);
+            axis.setNumberFormatOverride(perHundred);
+        }
+        axis.setLowerBound(0);
+        axis.setLowerMargin(0);
+        return axis;
+    }
+
+    private static NumberAxis percentAxis(String label) {
+        NumberAxis axis = new NumberAxis(label);
+        DecimalFormat percent = new DecimalFormat("0.###'%'", DecimalFormatSymbols.getInstance(Locale.ROOT));
+        percent.setMultiplier(100);
+        axis.setNumberFormatOverride(percent);
+        axis.setAutoRangeIncludesZero(true);
+        return axis;
+    }
+
+    private static String percent(double fraction) {
+        DecimalFormat format = new DecimalFormat("0.####'%'", DecimalFormatSymbols.getInstance(Locale.ROOT));
+        format.setMultiplier(100);
+        return format.format(fraction);
+    }
+
+    private static XYPlot style(XYPlot plot) {
+        plot.setBackgroundPaint(Color.WHITE);
+        plot.setDomainGridlinePaint(new Color(0xdd, 0xdd, 0xdd));
+        plot.setRangeGridlinePaint(new Color(0xdd, 0xdd, 0xdd));
+        plot.setOutlinePaint(new Color(0xaa, 0xaa, 0xaa));
+        return plot;
+    }
+
+    private static JFreeChart finish(JFreeChart chart) {
+        chart.setBackgroundPaint(Color.WHITE);
+        chart.setAntiAlias(true);
+        return chart;
+    }
+
+}
