@@ -21,11 +21,13 @@ import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /** Puts several plans side by side: their risks at the same AQL and LTPD, key levels, and one OC chart. */
-@Command(name = "compare", mixinStandardHelpOptions = true, sortOptions = false,
+@Command(name = "compare", mixinStandardHelpOptions = true, sortOptions = false, usageHelpAutoWidth = true,
+        header = "Compare plans side by side and on one OC chart.",
         description = {
-                "Compare plans at the same quality levels: P(accept) at the AQL and the LTPD, the producer's",
-                "and consumer's risks there, the quality levels at 95%, 50% and 10% acceptance, and the AOQL.",
-                "Each PLAN is a saved plan file or a plan written as n,c (such as 45,0), under --model.",
+                "Compares plans at the same quality levels: P(accept) at the AQL and the LTPD, the producer's and"
+                        + " consumer's risks there, the quality levels at 95%%, 50%% and 10%% acceptance, and the"
+                        + " AOQL. Each PLAN is a saved plan file or a plan written as n,c (such as 45,0), under"
+                        + " --model.",
                 ""})
 final class CompareCommand implements Runnable {
 

@@ -22,11 +22,12 @@ import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /** Tabulates and draws a plan's OC, AOQ and ATI curves with their key quality levels. */
-@Command(name = "curve", mixinStandardHelpOptions = true, sortOptions = false,
+@Command(name = "curve", mixinStandardHelpOptions = true, sortOptions = false, usageHelpAutoWidth = true,
+        header = "Tabulate and draw a plan's OC, AOQ and ATI curves.",
         description = {
-                "Show a plan's operating characteristics over a range of incoming quality levels:",
-                "P(accept) (the OC curve), AOQ, and ATI when the lot size is known; the quality levels at",
-                "P(accept) = 95%, 50% (indifference quality) and 10%; and the AOQL.",
+                "Shows a plan's operating characteristics over a range of incoming quality levels: P(accept)"
+                        + " (the OC curve), AOQ, and ATI when the lot size is known; the quality levels at"
+                        + " P(accept) = 95%%, 50%% (indifference quality) and 10%%; and the AOQL.",
                 "",
                 "Give a saved plan file, or the plan as --sample-size and --acceptance with a model.",
                 ""})
@@ -55,7 +56,7 @@ final class CurveCommand implements Runnable {
     Double ltpd;
 
     @Option(names = "--up-to", paramLabel = "LEVEL", converter = Values.Quality.class,
-            description = "Highest incoming quality in the table and charts (default: where P(accept) is 1%).")
+            description = "Highest incoming quality in the table and charts (default: where P(accept) is 1%%).")
     Double upTo;
 
     @Option(names = "--steps", paramLabel = "K", defaultValue = "20", converter = Values.Count.class,

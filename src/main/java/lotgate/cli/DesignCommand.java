@@ -25,19 +25,20 @@ import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /** Designs a single-sampling plan from the two risks, or evaluates one given as n and c, and saves it. */
-@Command(name = "design", mixinStandardHelpOptions = true, sortOptions = false,
+@Command(name = "design", mixinStandardHelpOptions = true, sortOptions = false, usageHelpAutoWidth = true,
+        header = "Design a single-sampling plan from the producer's and consumer's risks.",
         description = {
-                "Find the single-sampling plan (n, c) with the smallest sample size n whose producer's risk",
-                "P(reject | AQL) is at most alpha and whose consumer's risk P(accept | LTPD) is at most beta,",
-                "computed exactly. With --acceptance alone: the smallest n for that acceptance number that meets",
-                "the LTPD point. With --sample-size and --acceptance: the risks of that plan.",
+                "Finds the plan (n, c) with the smallest sample size n whose producer's risk P(reject | AQL) is at"
+                        + " most alpha and whose consumer's risk P(accept | LTPD) is at most beta, computed exactly."
+                        + " With --acceptance alone: the smallest n for that acceptance number that meets the LTPD"
+                        + " point. With --sample-size and --acceptance: the risks of that plan.",
                 "",
-                "Quality levels and risks are written as percent (1%, 0.65%) or as fractions (0.01).",
+                "Quality levels and risks are written as percent (1%%, 0.65%%) or as fractions (0.01).",
                 ""})
 final class DesignCommand implements Runnable {
 
     @Option(names = "--aql", required = true, paramLabel = "LEVEL", converter = Values.Quality.class,
-            description = "Acceptable quality level: lots this good should pass (e.g. 1%).")
+            description = "Acceptable quality level: lots this good should pass (e.g. 1%%).")
     double aql;
 
     @Option(names = "--alpha", paramLabel = "RISK", defaultValue = "5%", converter = Values.Risk.class,
@@ -45,7 +46,7 @@ final class DesignCommand implements Runnable {
     double alpha;
 
     @Option(names = "--ltpd", required = true, paramLabel = "LEVEL", converter = Values.Quality.class,
-            description = "Lot tolerance percent defective: lots this bad should fail (e.g. 5%).")
+            description = "Lot tolerance percent defective: lots this bad should fail (e.g. 5%%).")
     double ltpd;
 
     @Option(names = "--beta", paramLabel = "RISK", defaultValue = "10%", converter = Values.Risk.class,
@@ -56,8 +57,8 @@ final class DesignCommand implements Runnable {
     ModelOptions models;
 
     @Option(names = {"-c", "--acceptance"}, paramLabel = "C", converter = Values.Acceptance.class,
-            description = {"Fix the acceptance number (e.g. 0 for a zero-acceptance plan) and find the",
-                    "smallest n that meets the LTPD point."})
+            description = "Fix the acceptance number (e.g. 0 for a zero-acceptance plan) and find the smallest n"
+                    + " that meets the LTPD point.")
     Integer acceptance;
 
     @Option(names = {"-n", "--sample-size"}, paramLabel = "N", converter = Values.Count.class,
@@ -131,7 +132,8 @@ final class DesignCommand implements Runnable {
         PrintWriter out = spec.commandLine().getOut();
         if (outcome instanceof SingleDesign.NotFound none) {
             printNoPlan(out, none.reason(), model, lotSize);
-            throw new Main.Failure(ExitCode.NO_PLAN, "no sampling plan meets the request: " + none.reason());
+            throw new Main.Failure(ExitCode.NO_PLAN, format.kind == OutputFormat.Kind.text ? null
+                    : "no sampling plan meets the request: " + none.reason());
         }
         SingleDesign.Found found = (SingleDesign.Found) outcome;
         SavedPlan saved = null;

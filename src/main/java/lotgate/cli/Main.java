@@ -11,18 +11,22 @@ import picocli.CommandLine.Option;
 @Command(name = "lotgate",
         mixinStandardHelpOptions = true,
         versionProvider = Version.class,
-        description = {
-                "Acceptance sampling of manufacturing lots: design exact sampling plans from the producer's",
-                "and consumer's risks, study their OC, AOQ and ATI curves, and save them under plans/.",
-                ""},
+        usageHelpAutoWidth = true,
+        description = {"Acceptance sampling of manufacturing lots: design exact sampling plans from the producer's"
+                + " and consumer's risks, study their OC, AOQ and ATI curves, and save them under plans/ so that"
+                + " every inspector applies the same plan.", ""},
         subcommands = {DesignCommand.class, CurveCommand.class, CompareCommand.class, ShowCommand.class,
                 DemoCommand.class, CommandLine.HelpCommand.class},
         footerHeading = "%nExit codes:%n",
         footer = {
-                "  0  done (sentencing: lot accepted)      1  lot rejected",
-                "  2  bad option or value                  3  input file missing, unreadable or invalid",
-                "  4  incomplete sample                    5  no sampling plan meets the request",
-                "  6  an output file cannot be written    70  internal fault (rerun with --debug)"})
+                "   0  done (sentencing: lot accepted)",
+                "   1  lot rejected",
+                "   2  bad option or value",
+                "   3  input file missing, unreadable or invalid",
+                "   4  incomplete sample",
+                "   5  no sampling plan meets the request",
+                "   6  an output file cannot be written",
+                "  70  internal fault (rerun with --debug)"})
 public final class Main implements Runnable {
 
     @Option(names = "--debug", scope = CommandLine.ScopeType.INHERIT,
@@ -60,7 +64,15 @@ public final class Main implements Runnable {
     private static int usageError(CommandLine.ParameterException e, String[] args) {
         CommandLine cli = e.getCommandLine();
         PrintWriter err = cli.getErr();
-        err.println("lotgate: " + e.getMessage() + " (see '" + cli.getCommandSpec().qualifiedName() + " --help')");
+        String message = e.getMessage();
+        if (e instanceof CommandLine.UnmatchedArgumentException unmatched && !unmatched.getUnmatched().isEmpty()) {
+            String first = unmatched.getUnmatched().get(0);
+            message = cli.getParent() == null && !first.startsWith("-")
+                    ? "unknown command '" + first + "'; the commands are "
+                            + String.join(", ", cli.getSubcommands().keySet())
+                    : "unknown option or extra argument '" + first + "'";
+        }
+        err.println("lotgate: " + message + " (see '" + cli.getCommandSpec().qualifiedName() + " --help')");
         if (debugRequested(args)) {
             e.printStackTrace(err);
         }
@@ -85,7 +97,9 @@ public final class Main implements Runnable {
             code = ExitCode.INTERNAL;
             message = "internal fault: " + e + " (rerun with --debug and report it)";
         }
-        err.println("lotgate: " + message);
+        if (message != null) {
+            err.println("lotgate: " + message);
+        }
         if (debugRequested(parsed.originalArgs().toArray(String[]::new))) {
             e.printStackTrace(err);
         }
@@ -102,7 +116,10 @@ public final class Main implements Runnable {
         return false;
     }
 
-    /** A failure with a message for the user and the exit code it stands for. */
+    /**
+     * A failure with the exit code it stands for and a message for the user, or null when the
+     * command's own output has said it already.
+     */
     static final class Failure extends RuntimeException {
         private final int exitCode;
 

@@ -10,14 +10,14 @@ final class ModelOptions {
     enum ModelName { binomial, hypergeometric, poisson }
 
     @Option(names = {"-m", "--model"}, paramLabel = "MODEL",
-            description = {"OC model: binomial (units from a process or a large lot, type B; the default),",
-                    "hypergeometric (an isolated lot of --lot-size units, type A), or poisson",
-                    "(nonconformities per unit rather than nonconforming units)."})
+            description = "OC model: binomial (units from a process or a large lot, type B; the default),"
+                    + " hypergeometric (an isolated lot of --lot-size units, type A), or poisson (nonconformities"
+                    + " per unit rather than nonconforming units).")
     ModelName model;
 
     @Option(names = {"-N", "--lot-size"}, paramLabel = "N", converter = Values.Count.class,
-            description = {"Lot size N: required by the hypergeometric model; with the others it is used",
-                    "for AOQ and ATI and bounds the sample."})
+            description = "Lot size N: required by the hypergeometric model; with the others it is used for AOQ"
+                    + " and ATI and bounds the sample.")
     Integer lotSize;
 
     /** The same lot size without a model, for saved plans that carry their own model. */

@@ -13,9 +13,11 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** Checks a saved plan file (format, ranges, fingerprint, recorded risks) and prints what it says. */
-@Command(name = "show", mixinStandardHelpOptions = true,
-        description = {"Check a saved plan file and print it: the plan, what it was designed for, what it",
-                "achieves and its fingerprint. A changed or inconsistent file is refused (exit code 3).", ""})
+@Command(name = "show", mixinStandardHelpOptions = true, usageHelpAutoWidth = true,
+        header = "Check a saved plan file and print what it says.",
+        description = {"Checks a saved plan file (format, ranges, fingerprint, recorded risks) and prints the plan,"
+                + " what it was designed for, what it achieves and its fingerprint. A changed or inconsistent file"
+                + " is refused (exit code 3).", ""})
 final class ShowCommand implements Runnable {
 
     @Parameters(index = "0", paramLabel = "PLAN", description = "A saved plan file (plans/*.json).")

@@ -44,11 +44,17 @@ public final class SinglePlanDesigner {
             return new SingleDesign.NotFound("a lot of " + lotSize + " units is too small to tell the AQL from the"
                     + " LTPD: both stand for " + Math.round(aqlPoint * lotSize) + " nonconforming units");
         }
+        // n_c never falls as c grows, so each search starts where the last one ended and gallops up by
+        // about the last increase; the answer is exactly the same as a search from scratch.
+        int previous = 0;
+        int stride = 1;
         for (int c = 0; c < largestSample(); c++) {
-            int n = smallestSampleFor(c, ltpdPoint, points.beta());
+            int n = smallestSampleFor(c, ltpdPoint, points.beta(), Math.max(c, previous - 1), stride);
             if (n < 0) {
                 break;
             }
+            stride = Math.max(1, n - previous);
+            previous = n;
             if (model.moreThan(n, c, aqlPoint) <= points.alpha()) {
                 SinglePlan plan = new SinglePlan(n, c);
                 return new SingleDesign.Found(plan, PlanRisks.of(plan, model, points),
@@ -65,7 +71,7 @@ public final class SinglePlanDesigner {
      * achieved risks (a zero-acceptance plan when c = 0). The AQL in the points is only evaluated.
      */
     public SingleDesign designForAcceptanceNumber(int c, RiskPoints points) {
-        int n = smallestSampleFor(c, model.consumerPoint(points.ltpd()), points.beta());
+        int n = smallestSampleFor(c, model.consumerPoint(points.ltpd()), points.beta(), c, c + 1);
         if (n < 0) {
             return new SingleDesign.NotFound("no plan with acceptance number " + c + " and a sample of at most "
                     + largestSample() + " units meets the consumer's risk");
@@ -74,21 +80,26 @@ public final class SinglePlanDesigner {
         return new SingleDesign.Found(plan, PlanRisks.of(plan, model, points), List.of());
     }
 
-    /** The smallest n > c with P(X <= c | quality) <= beta, or -1 if none within the largest sample. */
-    int smallestSampleFor(int c, double quality, double beta) {
+    /**
+     * The smallest n > c with P(X <= c | quality) <= beta, or -1 if none within the largest sample.
+     *
+     * @param infeasible a sample size known to fail (at least c)
+     * @param stride     the first step of the galloping search above it
+     */
+    int smallestSampleFor(int c, double quality, double beta, int infeasible, int stride) {
         int limit = largestSample();
         if (c >= limit || model.atMost(limit, c, quality) > beta) {
             return -1;
         }
-        int infeasible = c;
         int feasible = limit;
-        // Grow a bracket from below first: the answer is usually far below the limit.
-        for (int probe = Math.max(c + 1, 2 * c + 1); probe < feasible; probe = (int) Math.min(feasible, 2L * probe)) {
-            if (model.atMost(probe, c, quality) <= beta) {
-                feasible = probe;
+        // Gallop up from the known failure, doubling the step: the answer is usually close above it.
+        long step = Math.max(1, stride);
+        for (long probe = infeasible + step; probe < feasible; step *= 2, probe = infeasible + step) {
+            if (model.atMost((int) probe, c, quality) <= beta) {
+                feasible = (int) probe;
                 break;
             }
-            infeasible = probe;
+            infeasible = (int) probe;
         }
         while (feasible - infeasible > 1) {
             int mid = infeasible + (feasible - infeasible) / 2;
