@@ -114,10 +114,9 @@ final class CompareCommand implements Runnable {
     private static void printText(PrintWriter out, List<Row> rows, double atAql, double atLtpd) {
         out.println("Plans compared at AQL " + Percent.level(atAql) + " and LTPD " + Percent.level(atLtpd));
         out.println();
-        out.printf("  %-34s %-15s %11s %11s %10s %10s %10s %10s%n", "", "", "P(accept)", "P(accept)",
-                "P(accept)", "P(accept)", "P(accept)", "");
+        out.printf("  %-34s %-15s %23s %32s%n", "", "", "----- P(accept) -----", "-- quality where P(accept) is --");
         out.printf("  %-34s %-15s %11s %11s %10s %10s %10s %10s%n", "plan", "model", "at AQL", "at LTPD",
-                "95% at", "50% at", "10% at", "AOQL");
+                "95%", "50%", "10%", "AOQL");
         for (Row row : rows) {
             out.printf("  %-34s %-15s %11s %11s %10s %10s %10s %10s%n", CurveCommand.planLabel(row.choice()),
                     row.choice().model().name(), Percent.probability(row.atAql()), Percent.probability(row.atLtpd()),
@@ -126,7 +125,6 @@ final class CompareCommand implements Runnable {
         }
         out.println();
         out.println("  Producer's risk = 100% - P(accept) at the AQL; consumer's risk = P(accept) at the LTPD.");
-        out.println("  \"95% at\": the incoming quality at which P(accept) falls to 95%, and so on.");
         out.println("  AOQL is for the lot size of each plan, or for a very large lot where none is given.");
         for (Row row : rows) {
             if (row.choice().saved() != null) {

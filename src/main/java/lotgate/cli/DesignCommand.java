@@ -230,15 +230,15 @@ final class DesignCommand implements Runnable {
         }
         out.println();
         String unit = model.countsUnits() ? "" : " per unit";
-        out.printf("  %-6s %-22s %-11s %-24s %s%n", "point", "quality", "P(accept)", "risk", "allowed");
+        out.printf("  %-6s %-22s %-11s %-24s %-8s%n", "point", "quality", "P(accept)", "risk", "allowed");
         out.printf("  %-6s %-22s %-11s %-24s %s%n", "AQL", Percent.level(points.aql()) + unit + pointNote(model,
                 risks.aqlPoint(), lotSize), Percent.probability(1 - risks.producerRisk()),
                 "producer's " + Percent.probability(risks.producerRisk()),
-                Percent.level(points.alpha()) + verdict(risks.producerRisk() <= points.alpha()));
+                String.format("%-8s%s", Percent.level(points.alpha()), verdict(risks.producerRisk() <= points.alpha())));
         out.printf("  %-6s %-22s %-11s %-24s %s%n", "LTPD", Percent.level(points.ltpd()) + unit + pointNote(model,
                 risks.ltpdPoint(), lotSize), Percent.probability(risks.consumerRisk()),
                 "consumer's " + Percent.probability(risks.consumerRisk()),
-                Percent.level(points.beta()) + verdict(risks.consumerRisk() <= points.beta()));
+                String.format("%-8s%s", Percent.level(points.beta()), verdict(risks.consumerRisk() <= points.beta())));
         if (!found.otherAcceptanceNumbers().isEmpty()) {
             out.println();
             out.println("  At n = " + plan.n() + " these acceptance numbers meet both risks too: c = "
@@ -263,7 +263,7 @@ final class DesignCommand implements Runnable {
     }
 
     private static String verdict(boolean met) {
-        return met ? "  met" : "  NOT MET";
+        return met ? "met" : "NOT MET";
     }
 
     private static ObjectNode json(SingleDesign.Found found, OcModel model, int lotSize, RiskPoints points,

@@ -1,0 +1,66 @@
+package lotgate.bench;
+
+import java.util.concurrent.TimeUnit;
+import lotgate.sampling.OcModel;
+import lotgate.sampling.RiskPoints;
+import lotgate.sampling.SingleDesign;
+import lotgate.sampling.SinglePlanDesigner;
+import org.openjdk.jmh.annotations.Benchmark;
+import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Param;
+import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.Setup;
+import org.openjdk.jmh.annotations.State;
+
+/** Single-plan design by the bisection search against a naive scan of every n and, at each n, every c. */
+@State(Scope.Benchmark)
+@BenchmarkMode(Mode.AverageTime)
+@OutputTimeUnit(TimeUnit.MILLISECONDS)
+public class DesignBenchmark {
+
+    /** model:aql:ltpd:lotSize */
+    @Param({"binomial:0.01:0.05:0", "binomial:0.0001:0.0005:0", "hypergeometric:0.0001:0.0005:10000000"})
+    public String request;
+
+    private OcModel model;
+    private int lotSize;
+    private RiskPoints points;
+
+    @Setup
+    public void setUp() {
+        String[] parts = request.split(":");
+        lotSize = Integer.parseInt(parts[3]);
+        model = OcModel.of(parts[0], lotSize);
+        points = new RiskPoints(Double.parseDouble(parts[1]), 0.05, Double.parseDouble(parts[2]), 0.10);
+    }
+
+    @Benchmark
+    public SingleDesign bisection() {
+        return new SinglePlanDesigner(model, lotSize).design(points);
+    }
+
+    @Benchmark
+    public int naiveScan() {
+        return naiveSmallestSample(model, points);
+    }
+
+    /** The baseline: every n from 1 upward, and at each n the acceptance numbers upward. */
+    static int naiveSmallestSample(OcModel model, RiskPoints points) {
+        double aqlPoint = model.producerPoint(points.aql());
+        double ltpdPoint = model.consumerPoint(points.ltpd());
+        int limit = model.lotSize() > 0 ? model.lotSize() : SinglePlanDesigner.MAX_SAMPLE_SIZE;
+        for (int n = 1; n <= limit; n++) {
+            for (int c = 0; c < n; c++) {
+                if (model.moreThan(n, c, aqlPoint) <= points.alpha()) {
+                    if (model.atMost(n, c, ltpdPoint) <= points.beta()) {
+                        return n;
+                    }
+                    break;
+                }
+            }
+        }
+        return -1;
+    }
+}
