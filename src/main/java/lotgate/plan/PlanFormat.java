@@ -34,13 +34,15 @@ import lotgate.sampling.RiskPoints;
 import lotgate.sampling.SinglePlan;
 
 /**
- * Reads and writes plan files (format "lotgate-plan", version 1) and computes their fingerprint:
- * the SHA-256 of the canonical form, which is the file's JSON without the fingerprint field, with
- * object keys sorted, no white space, and numbers as Jackson writes Java doubles and ints.
+ * Reads and writes plan files (format "lotgate-plan"; writes version 2, reads 1 and 2) and computes
+ * their fingerprint: the SHA-256 of the canonical form, which is the file's JSON without the
+ * fingerprint field, with object keys sorted, no white space, and numbers as Jackson writes Java
+ * doubles and ints. Version 1 held one plan for every nonconformity; version 2 holds a list of
+ * criteria per defect class.
  */
 public final class PlanFormat {
     public static final String FORMAT = "lotgate-plan";
-    public static final int VERSION = 1;
+    public static final int VERSION = 2;
     /** A plan file is a few hundred bytes; anything this large is not one. */
     private static final long LARGEST_FILE = 1 << 20;
     /** Relative agreement required between recorded and recomputed risks. */
@@ -52,21 +54,33 @@ public final class PlanFormat {
             .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
             .enable(SerializationFeature.INDENT_OUTPUT)
             .build();
-    private static final Set<String> TOP_FIELDS = Set.of("format", "formatVersion", "name", "description", "created",
-            "plan", "model", "lotSize", "designedFor", "achieved", "fingerprint");
+    private static final Set<String> TOP_FIELDS_V1 = Set.of("format", "formatVersion", "name", "description",
+            "created", "plan", "model", "lotSize", "designedFor", "achieved", "fingerprint");
+    private static final Set<String> TOP_FIELDS_V2 = Set.of("format", "formatVersion", "name", "description",
+            "created", "model", "lotSize", "classes", "fingerprint");
+    private static final Set<String> CLASS_FIELDS = Set.of("class", "plan", "designedFor", "achieved");
+
+    /** What a new plan file holds for one defect class before its risks are computed. */
+    public record ClassDraft(DefectClass defectClass, Plan plan, RiskPoints designedFor, String method) {
+    }
 
     private PlanFormat() {
     }
 
-    /** A new saved plan with its fingerprint computed. */
+    /** A new saved plan with one set of criteria for every nonconformity, its fingerprint computed. */
     public static SavedPlan seal(String name, String description, Instant created, Plan plan, OcModel model,
             int lotSize, RiskPoints designedFor, String method) {
-        PlanRisks achieved = PlanRisks.of(plan, model, designedFor);
-        SavedPlan unsealed = new SavedPlan(name, description, created, plan, model, lotSize, designedFor, method,
-                achieved, "");
-        String fingerprint = fingerprintOf(toJson(unsealed));
-        return new SavedPlan(name, description, created, plan, model, lotSize, designedFor, method, achieved,
-                fingerprint);
+        return seal(name, description, created, model, lotSize,
+                List.of(new ClassDraft(DefectClass.ANY, plan, designedFor, method)));
+    }
+
+    /** A new saved plan with criteria per defect class, its risks and fingerprint computed. */
+    public static SavedPlan seal(String name, String description, Instant created, OcModel model, int lotSize,
+            List<ClassDraft> drafts) {
+        List<ClassPlan> classes = drafts.stream().map(d -> new ClassPlan(d.defectClass(), d.plan(), d.designedFor(),
+                d.method(), PlanRisks.of(d.plan(), model, d.designedFor()))).toList();
+        SavedPlan unsealed = new SavedPlan(name, description, created, model, lotSize, classes, "");
+        return new SavedPlan(name, description, created, model, lotSize, classes, fingerprintOf(toJson(unsealed)));
     }
 
     public static void write(Path file, SavedPlan plan) {
@@ -90,29 +104,45 @@ public final class PlanFormat {
         root.put("name", saved.name());
         root.put("description", saved.description());
         root.put("created", saved.created().toString());
-        ObjectNode plan = root.putObject("plan");
-        plan.put("scheme", saved.plan().scheme());
-        if (saved.plan() instanceof SinglePlan single) {
-            plan.put("n", single.n());
-            plan.put("c", single.c());
-        }
         root.put("model", saved.model().name());
         if (saved.lotSize() > 0) {
             root.put("lotSize", saved.lotSize());
         }
-        ObjectNode design = root.putObject("designedFor");
-        design.put("aql", saved.designedFor().aql());
-        design.put("alpha", saved.designedFor().alpha());
-        design.put("ltpd", saved.designedFor().ltpd());
-        design.put("beta", saved.designedFor().beta());
-        design.put("method", saved.method());
-        ObjectNode achieved = root.putObject("achieved");
-        achieved.put("producerRisk", saved.achieved().producerRisk());
-        achieved.put("consumerRisk", saved.achieved().consumerRisk());
+        var classes = root.putArray("classes");
+        for (ClassPlan criteria : saved.classes()) {
+            ObjectNode entry = classes.addObject();
+            entry.put("class", criteria.defectClass().label());
+            entry.set("plan", planJson(criteria.plan()));
+            ObjectNode design = entry.putObject("designedFor");
+            design.put("aql", criteria.designedFor().aql());
+            design.put("alpha", criteria.designedFor().alpha());
+            design.put("ltpd", criteria.designedFor().ltpd());
+            design.put("beta", criteria.designedFor().beta());
+            design.put("method", criteria.method());
+            ObjectNode achieved = entry.putObject("achieved");
+            achieved.put("producerRisk", criteria.achieved().producerRisk());
+            achieved.put("consumerRisk", criteria.achieved().consumerRisk());
+        }
         if (!saved.fingerprint().isEmpty()) {
             root.put("fingerprint", saved.fingerprint());
         }
         return root;
+    }
+
+    /** A plan's stage structure as JSON, as plan files and records hold it. */
+    public static ObjectNode planJson(Plan plan) {
+        ObjectNode node = JsonNodeFactory.instance.objectNode();
+        node.put("scheme", plan.scheme());
+        if (plan instanceof SinglePlan single) {
+            node.put("n", single.n());
+            node.put("c", single.c());
+        }
+        return node;
+    }
+
+    /** The plan file's JSON, for embedding in decision records. */
+    public static ObjectNode json(SavedPlan plan) {
+        return toJson(plan);
     }
 
     /** SHA-256 over the canonical form of a plan file's JSON, as "sha256:" and 64 hexadecimal digits. */
@@ -189,20 +219,22 @@ public final class PlanFormat {
             if (!FORMAT.equals(root.path("format").asText(null))) {
                 throw invalid("not a plan file: field 'format' must be \"" + FORMAT + "\"");
             }
-            JsonNode version = root.get("formatVersion");
-            if (version == null || !version.canConvertToExactIntegral()) {
+            JsonNode versionNode = root.get("formatVersion");
+            if (versionNode == null || !versionNode.canConvertToExactIntegral()) {
                 throw invalid("field 'formatVersion' must be a whole number");
             }
-            if (version.asInt() > VERSION) {
-                throw invalid("written in plan format version " + version.asInt() + " by a newer lotgate; this one"
+            int version = versionNode.asInt();
+            if (version > VERSION) {
+                throw invalid("written in plan format version " + version + " by a newer lotgate; this one"
                         + " reads versions up to " + VERSION);
             }
-            if (version.asInt() < 1) {
-                throw invalid("field 'formatVersion' must be 1 or more, got " + version.asInt());
+            if (version < 1) {
+                throw invalid("field 'formatVersion' must be 1 or more, got " + version);
             }
+            Set<String> allowed = version == 1 ? TOP_FIELDS_V1 : TOP_FIELDS_V2;
             for (Iterator<String> it = root.fieldNames(); it.hasNext();) {
                 String field = it.next();
-                if (!TOP_FIELDS.contains(field)) {
+                if (!allowed.contains(field)) {
                     throw invalid("unknown field '" + field + "'");
                 }
             }
@@ -217,31 +249,76 @@ public final class PlanFormat {
             }
             int lotSize = root.has("lotSize") ? wholeNumber(root, "lotSize", 1) : 0;
             OcModel model = model(lotSize);
-            Plan plan = plan(lotSize);
-            JsonNode design = object(root, "designedFor");
-            RiskPoints points;
-            try {
-                points = new RiskPoints(number(design, "designedFor.aql"), number(design, "designedFor.alpha"),
-                        number(design, "designedFor.ltpd"), number(design, "designedFor.beta"));
-            } catch (IllegalArgumentException e) {
-                throw invalid("field 'designedFor': " + e.getMessage());
-            }
-            String method = text(design, "designedFor.method");
-            if (!Set.of(SavedPlan.SMALLEST_SAMPLE, SavedPlan.FIXED_ACCEPTANCE, SavedPlan.GIVEN).contains(method)) {
-                throw invalid("field 'designedFor.method' must be " + SavedPlan.SMALLEST_SAMPLE + ", "
-                        + SavedPlan.FIXED_ACCEPTANCE + " or " + SavedPlan.GIVEN + ", got \"" + method + "\"");
+            List<ClassPlan> classes = new java.util.ArrayList<>();
+            if (version == 1) {
+                classes.add(criteria(root, "", DefectClass.ANY, model, lotSize));
+            } else {
+                JsonNode list = field(root, "classes");
+                if (!list.isArray() || list.isEmpty()) {
+                    throw invalid("field 'classes' must be a list of at least one defect class");
+                }
+                for (int i = 0; i < list.size(); i++) {
+                    JsonNode entry = list.get(i);
+                    String prefix = "classes[" + i + "].";
+                    if (!entry.isObject()) {
+                        throw invalid("field '" + prefix.substring(0, prefix.length() - 1) + "' must be an object");
+                    }
+                    for (Iterator<String> it = entry.fieldNames(); it.hasNext();) {
+                        String field = it.next();
+                        if (!CLASS_FIELDS.contains(field)) {
+                            throw invalid("unknown field '" + prefix + field + "'");
+                        }
+                    }
+                    String label = text(entry, prefix + "class");
+                    DefectClass defectClass = DefectClass.of(label);
+                    if (defectClass == null) {
+                        throw invalid("field '" + prefix + "class' must be any, critical, major or minor, got \""
+                                + label + "\"");
+                    }
+                    if (classes.stream().anyMatch(c -> c.defectClass() == defectClass)) {
+                        throw invalid("defect class " + label + " appears twice in 'classes'");
+                    }
+                    classes.add(criteria(entry, prefix, defectClass, model, lotSize));
+                }
+                if (classes.size() > 1 && classes.stream().anyMatch(c -> c.defectClass() == DefectClass.ANY)) {
+                    throw invalid("class 'any' cannot be combined with other defect classes");
+                }
             }
             String expected = fingerprintOf(root);
             if (!expected.equals(fingerprint)) {
                 throw invalid("the fingerprint does not match the content: the file was changed after it was"
                         + " saved; save it again with 'lotgate design ... --save'");
             }
-            JsonNode achievedNode = object(root, "achieved");
-            PlanRisks achieved = PlanRisks.of(plan, model, points);
-            checkRisk("achieved.producerRisk", number(achievedNode, "achieved.producerRisk"), achieved.producerRisk());
-            checkRisk("achieved.consumerRisk", number(achievedNode, "achieved.consumerRisk"), achieved.consumerRisk());
-            return new SavedPlan(name, description, created, plan, model, lotSize, points, method, achieved,
-                    fingerprint);
+            for (ClassPlan criteria : classes) {
+                String prefix = version == 1 ? "" : "classes[" + classes.indexOf(criteria) + "].";
+                JsonNode container = version == 1 ? root : root.get("classes").get(classes.indexOf(criteria));
+                JsonNode achievedNode = object(container, prefix + "achieved");
+                checkRisk(prefix + "achieved.producerRisk", number(achievedNode, prefix + "achieved.producerRisk"),
+                        criteria.achieved().producerRisk());
+                checkRisk(prefix + "achieved.consumerRisk", number(achievedNode, prefix + "achieved.consumerRisk"),
+                        criteria.achieved().consumerRisk());
+            }
+            return new SavedPlan(name, description, created, model, lotSize, classes, fingerprint);
+        }
+
+        private ClassPlan criteria(JsonNode container, String prefix, DefectClass defectClass, OcModel model,
+                int lotSize) {
+            Plan plan = plan(container, prefix, lotSize);
+            JsonNode design = object(container, prefix + "designedFor");
+            RiskPoints points;
+            try {
+                points = new RiskPoints(number(design, prefix + "designedFor.aql"),
+                        number(design, prefix + "designedFor.alpha"), number(design, prefix + "designedFor.ltpd"),
+                        number(design, prefix + "designedFor.beta"));
+            } catch (IllegalArgumentException e) {
+                throw invalid("field '" + prefix + "designedFor': " + e.getMessage());
+            }
+            String method = text(design, prefix + "designedFor.method");
+            if (!Set.of(SavedPlan.SMALLEST_SAMPLE, SavedPlan.FIXED_ACCEPTANCE, SavedPlan.GIVEN).contains(method)) {
+                throw invalid("field '" + prefix + "designedFor.method' must be " + SavedPlan.SMALLEST_SAMPLE + ", "
+                        + SavedPlan.FIXED_ACCEPTANCE + " or " + SavedPlan.GIVEN + ", got \"" + method + "\"");
+            }
+            return new ClassPlan(defectClass, plan, points, method, PlanRisks.of(plan, model, points));
         }
 
         private void checkRisk(String field, double recorded, double recomputed) {
@@ -263,25 +340,26 @@ public final class PlanFormat {
             return OcModel.of(name, lotSize);
         }
 
-        private Plan plan(int lotSize) {
-            JsonNode plan = object(root, "plan");
-            String scheme = text(plan, "plan.scheme");
+        private Plan plan(JsonNode container, String prefix, int lotSize) {
+            JsonNode plan = object(container, prefix + "plan");
+            String scheme = text(plan, prefix + "plan.scheme");
             if (!scheme.equals("single")) {
-                throw invalid("field 'plan.scheme' must be single, got \"" + scheme + "\"");
+                throw invalid("field '" + prefix + "plan.scheme' must be single, got \"" + scheme + "\"");
             }
-            int n = wholeNumber(plan, "plan.n", 1);
-            int c = wholeNumber(plan, "plan.c", 0);
+            int n = wholeNumber(plan, prefix + "plan.n", 1);
+            int c = wholeNumber(plan, prefix + "plan.c", 0);
             if (c >= n) {
-                throw invalid("field 'plan.c' must be below plan.n = " + n + ", got " + c);
+                throw invalid("field '" + prefix + "plan.c' must be below plan.n = " + n + ", got " + c);
             }
             if (lotSize > 0 && n > lotSize) {
-                throw invalid("field 'plan.n' = " + n + " exceeds the lot size " + lotSize);
+                throw invalid("field '" + prefix + "plan.n' = " + n + " exceeds the lot size " + lotSize);
             }
             return new SinglePlan(n, c);
         }
 
         private JsonNode field(JsonNode parent, String path) {
             String leaf = path.substring(path.lastIndexOf('.') + 1);
+            leaf = leaf.contains("]") ? leaf.substring(leaf.indexOf(']') + 1) : leaf;
             JsonNode value = parent.get(leaf);
             if (value == null || value.isNull()) {
                 throw invalid("field '" + path + "' is missing");

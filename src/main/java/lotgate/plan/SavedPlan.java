@@ -1,6 +1,7 @@
 package lotgate.plan;
 
 import java.time.Instant;
+import java.util.List;
 import java.util.Objects;
 import lotgate.sampling.OcModel;
 import lotgate.sampling.Plan;
@@ -8,14 +9,15 @@ import lotgate.sampling.PlanRisks;
 import lotgate.sampling.RiskPoints;
 
 /**
- * A plan as saved under plans/: the plan, the model it was designed under, what it was designed for
- * and what it achieves, with the fingerprint that every decision made with it quotes.
+ * A plan as saved under plans/: the acceptance criteria per defect class (or one set for every
+ * nonconformity alike), the model they were designed under, with the fingerprint that every decision
+ * made with the plan quotes.
  *
  * @param lotSize the lot size the plan was designed for, or 0 for none
- * @param method  how the plan was obtained: {@link #SMALLEST_SAMPLE}, {@link #FIXED_ACCEPTANCE} or {@link #GIVEN}
+ * @param classes one entry per defect class, in the order critical, major, minor (or one "any")
  */
-public record SavedPlan(String name, String description, Instant created, Plan plan, OcModel model, int lotSize,
-        RiskPoints designedFor, String method, PlanRisks achieved, String fingerprint) {
+public record SavedPlan(String name, String description, Instant created, OcModel model, int lotSize,
+        List<ClassPlan> classes, String fingerprint) {
 
     public static final String SMALLEST_SAMPLE = "smallest-sample";
     public static final String FIXED_ACCEPTANCE = "fixed-acceptance-number";
@@ -25,12 +27,51 @@ public record SavedPlan(String name, String description, Instant created, Plan p
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(description, "description");
         Objects.requireNonNull(created, "created");
-        Objects.requireNonNull(plan, "plan");
         Objects.requireNonNull(model, "model");
-        Objects.requireNonNull(designedFor, "designedFor");
-        Objects.requireNonNull(method, "method");
-        Objects.requireNonNull(achieved, "achieved");
         Objects.requireNonNull(fingerprint, "fingerprint");
+        classes = List.copyOf(classes);
+        if (classes.isEmpty()) {
+            throw new IllegalArgumentException("a plan needs criteria for at least one defect class");
+        }
+    }
+
+    /** Whether the plan counts every nonconformity alike (one class, "any"). */
+    public boolean unclassified() {
+        return classes.size() == 1 && classes.get(0).defectClass() == DefectClass.ANY;
+    }
+
+    /** The criteria for a defect class, or null if the plan has none for it. */
+    public ClassPlan criteria(DefectClass defectClass) {
+        return classes.stream().filter(c -> c.defectClass() == defectClass).findFirst().orElse(null);
+    }
+
+    /** The number of units a lot's sample must hold: the largest sample of any class. */
+    public int sampleSize() {
+        return classes.stream().mapToInt(c -> c.plan().maxSampleSize()).max().orElseThrow();
+    }
+
+    private ClassPlan only() {
+        if (classes.size() != 1) {
+            throw new IllegalStateException("plan " + name + " has criteria for several defect classes");
+        }
+        return classes.get(0);
+    }
+
+    /** The sampling plan of a plan with a single class. */
+    public Plan plan() {
+        return only().plan();
+    }
+
+    public RiskPoints designedFor() {
+        return only().designedFor();
+    }
+
+    public String method() {
+        return only().method();
+    }
+
+    public PlanRisks achieved() {
+        return only().achieved();
     }
 
     /** The first 12 hexadecimal digits of the fingerprint, enough for a person to compare. */

@@ -49,11 +49,12 @@ class PlanFormatTest {
     void theFingerprintIsTheSha256OfTheCanonicalForm() throws Exception {
         SavedPlan plan = sample();
         // Canonical form by hand: keys sorted at every level, no white space, fingerprint left out.
-        String canonical = "{\"achieved\":{\"consumerRisk\":" + plan.achieved().consumerRisk() + ",\"producerRisk\":"
-                + plan.achieved().producerRisk() + "},\"created\":\"2026-01-31T08:00:00Z\",\"description\":\"Invented"
-                + " test plan\",\"designedFor\":{\"alpha\":0.05,\"aql\":0.01,\"beta\":0.1,\"ltpd\":0.05,\"method\":"
-                + "\"smallest-sample\"},\"format\":\"lotgate-plan\",\"formatVersion\":1,\"lotSize\":5000,\"model\":"
-                + "\"binomial\",\"name\":\"bolts\",\"plan\":{\"c\":3,\"n\":132,\"scheme\":\"single\"}}";
+        String canonical = "{\"classes\":[{\"achieved\":{\"consumerRisk\":" + plan.achieved().consumerRisk()
+                + ",\"producerRisk\":" + plan.achieved().producerRisk() + "},\"class\":\"any\",\"designedFor\":{"
+                + "\"alpha\":0.05,\"aql\":0.01,\"beta\":0.1,\"ltpd\":0.05,\"method\":\"smallest-sample\"},\"plan\":{"
+                + "\"c\":3,\"n\":132,\"scheme\":\"single\"}}],\"created\":\"2026-01-31T08:00:00Z\",\"description\":"
+                + "\"Invented test plan\",\"format\":\"lotgate-plan\",\"formatVersion\":2,\"lotSize\":5000,"
+                + "\"model\":\"binomial\",\"name\":\"bolts\"}";
         byte[] digest = java.security.MessageDigest.getInstance("SHA-256")
                 .digest(canonical.getBytes(java.nio.charset.StandardCharsets.UTF_8));
         assertEquals("sha256:" + HexFormat.of().formatHex(digest), plan.fingerprint());
@@ -80,17 +81,19 @@ class PlanFormatTest {
         Path file = saved();
         var root = (com.fasterxml.jackson.databind.node.ObjectNode) new com.fasterxml.jackson.databind.ObjectMapper()
                 .readTree(Files.readString(file));
-        ((com.fasterxml.jackson.databind.node.ObjectNode) root.get("achieved")).put("producerRisk", 0.01);
+        ((com.fasterxml.jackson.databind.node.ObjectNode) root.get("classes").get(0).get("achieved"))
+                .put("producerRisk", 0.01);
         root.put("fingerprint", PlanFormat.fingerprintOf(root));
         Files.writeString(file, root.toString());
-        assertTrue(refused(file).startsWith(file + ": field 'achieved.producerRisk' is 0.01 but the plan gives 0.0442"));
+        assertTrue(refused(file).startsWith(file + ": field 'classes[0].achieved.producerRisk' is 0.01 but the plan"
+                + " gives 0.0442"), refused(file));
     }
 
     @Test
     void aNewerFormatVersionIsRefusedWithAClearMessage() throws IOException {
         Path file = saved();
-        Files.writeString(file, Files.readString(file).replace("\"formatVersion\" : 1", "\"formatVersion\" : 7"));
-        assertEquals(file + ": written in plan format version 7 by a newer lotgate; this one reads versions up to 1",
+        Files.writeString(file, Files.readString(file).replace("\"formatVersion\" : 2", "\"formatVersion\" : 7"));
+        assertEquals(file + ": written in plan format version 7 by a newer lotgate; this one reads versions up to 2",
                 refused(file));
     }
 
@@ -133,6 +136,34 @@ class PlanFormatTest {
     void outOfRangeValuesAreNamedByField() throws IOException {
         Path file = saved();
         Files.writeString(file, Files.readString(file).replace("\"c\" : 3", "\"c\" : 200"));
-        assertEquals(file + ": field 'plan.c' must be below plan.n = 132, got 200", refused(file));
+        assertEquals(file + ": field 'classes[0].plan.c' must be below plan.n = 132, got 200", refused(file));
+    }
+
+    @Test
+    void aVersion1FileStillLoadsAsOnePlanForEveryNonconformity() throws Exception {
+        Path file = folder.resolve("old.json");
+        try (var in = getClass().getResourceAsStream("format-v1.json")) {
+            Files.write(file, in.readAllBytes());
+        }
+        SavedPlan old = PlanFormat.read(file);
+        assertTrue(old.unclassified());
+        assertEquals(new SinglePlan(132, 3), old.plan());
+        assertEquals(5000, old.lotSize());
+    }
+
+    @Test
+    void aPlanWithDefectClassesRoundTrips() {
+        SavedPlan classed = PlanFormat.seal("housing", "Invented", Instant.parse("2026-01-31T08:00:00Z"),
+                new OcModel.Binomial(), 0, java.util.List.of(
+                        new PlanFormat.ClassDraft(DefectClass.CRITICAL, new SinglePlan(45, 0),
+                                new RiskPoints(0.001, 0.05, 0.05, 0.10), SavedPlan.FIXED_ACCEPTANCE),
+                        new PlanFormat.ClassDraft(DefectClass.MAJOR, new SinglePlan(132, 3),
+                                new RiskPoints(0.01, 0.05, 0.05, 0.10), SavedPlan.SMALLEST_SAMPLE)));
+        Path file = folder.resolve("housing.json");
+        PlanFormat.write(file, classed);
+        SavedPlan read = PlanFormat.read(file);
+        assertEquals(classed, read);
+        assertEquals(132, read.sampleSize());
+        assertEquals(new SinglePlan(45, 0), read.criteria(DefectClass.CRITICAL).plan());
     }
 }

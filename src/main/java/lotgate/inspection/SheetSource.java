@@ -1,0 +1,86 @@
+package lotgate.inspection;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import org.apache.poi.poifs.filesystem.FileMagic;
+
+/**
+ * A spreadsheet or CSV file whose rows can be streamed, one sheet at a time. The kind follows the
+ * file's extension, and a file whose content is of another kind is refused.
+ */
+public interface SheetSource {
+
+    /** The file read. */
+    Path file();
+
+    /** The names of the file's sheets in order (one, named after the file, for CSV). */
+    List<String> sheetNames();
+
+    /** Streams the rows of a sheet (null: the first) to the handler. */
+    void read(String sheet, RowHandler handler);
+
+    /** A position for messages: "sheet 'Sample' cell C17", or "row 17, column C" for CSV. */
+    String where(String sheet, int row, int column);
+
+    /** A row for messages: "sheet 'Sample' row 17", or "row 17" for CSV. */
+    String whereRow(String sheet, int row);
+
+    /** Opens a file by its extension: .xlsx or .xlsm, .xls, or .csv. */
+    static SheetSource open(Path file) {
+        String name = file.getFileName().toString().toLowerCase(Locale.ROOT);
+        if (!Files.isRegularFile(file)) {
+            throw new SheetException(file, Files.exists(file) ? "not a file" : "no such file");
+        }
+        FileMagic magic;
+        try (InputStream in = FileMagic.prepareToCheckMagic(Files.newInputStream(file))) {
+            magic = FileMagic.valueOf(in);
+        } catch (IOException e) {
+            throw new SheetException(file, "cannot be read (" + e.getMessage() + ")", e);
+        }
+        if (name.endsWith(".xlsx") || name.endsWith(".xlsm")) {
+            if (magic == FileMagic.OLE2) {
+                if (XlsxSheets.isEncrypted(file)) {
+                    throw new SheetException(file, "the workbook is password-protected; save a copy without a"
+                            + " password and sentence that");
+                }
+                throw new SheetException(file, "this is an old-style .xls workbook, not .xlsx; rename it to .xls");
+            }
+            if (magic != FileMagic.OOXML) {
+                throw new SheetException(file, "not an .xlsx workbook (the content is " + describe(magic) + ")");
+            }
+            return new XlsxSheets(file);
+        }
+        if (name.endsWith(".xls")) {
+            if (magic == FileMagic.OOXML) {
+                throw new SheetException(file, "this is an .xlsx workbook, not .xls; rename it to .xlsx");
+            }
+            if (magic != FileMagic.OLE2) {
+                throw new SheetException(file, "not an .xls workbook (the content is " + describe(magic) + ")");
+            }
+            return new XlsSheets(file);
+        }
+        if (name.endsWith(".csv")) {
+            if (magic == FileMagic.OOXML || magic == FileMagic.OLE2) {
+                throw new SheetException(file, "this is a spreadsheet workbook, not CSV text; give it the"
+                        + " extension .xlsx or .xls");
+            }
+            return new CsvSheets(file);
+        }
+        throw new SheetException(file, "unknown kind of inspection sheet; use .xlsx, .xls or .csv");
+    }
+
+    private static String describe(FileMagic magic) {
+        return switch (magic) {
+            case PDF -> "a PDF document";
+            case HTML -> "an HTML page";
+            case XML -> "plain XML";
+            case OOXML -> "an .xlsx workbook";
+            case OLE2 -> "an .xls workbook";
+            default -> "something else";
+        };
+    }
+}

@@ -1,0 +1,26 @@
+package lotgate.plan;
+
+import java.util.Locale;
+
+/**
+ * The class of a nonconformity, by seriousness: critical (can hurt someone or stop the product
+ * working), major, minor; "any" stands for a plan that counts every nonconformity alike.
+ */
+public enum DefectClass {
+    ANY, CRITICAL, MAJOR, MINOR;
+
+    /** The name in plan files, sheets and output: any, critical, major, minor. */
+    public String label() {
+        return name().toLowerCase(Locale.ROOT);
+    }
+
+    /** The class a label names, or null. */
+    public static DefectClass of(String label) {
+        for (DefectClass value : values()) {
+            if (value.label().equals(label.trim().toLowerCase(Locale.ROOT))) {
+                return value;
+            }
+        }
+        return null;
+    }
+}
