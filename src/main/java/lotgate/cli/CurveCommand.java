@@ -47,6 +47,10 @@ final class CurveCommand implements Runnable {
     @Mixin
     ModelOptions models;
 
+    @Option(names = "--class", paramLabel = "CLASS",
+            description = "For a plan with criteria per defect class: the class to show (critical, major, minor).")
+    String defectClass;
+
     @Option(names = "--aql", paramLabel = "LEVEL", converter = Values.Quality.class,
             description = "AQL to mark on the OC curve (default: the saved plan's).")
     Double aql;
@@ -85,7 +89,7 @@ final class CurveCommand implements Runnable {
 
     @Override
     public void run() {
-        PlanChoice choice = choose(spec, planFile, sampleSize, acceptance, models);
+        PlanChoice choice = choose(spec, planFile, defectClass, sampleSize, acceptance, models);
         for (Path file : new Path[] {chart, ocChart, aoqChart, atiChart}) {
             checkChartName(spec, file);
         }
@@ -110,14 +114,17 @@ final class CurveCommand implements Runnable {
         out.flush();
     }
 
-    static PlanChoice choose(CommandSpec spec, Path planFile, Integer sampleSize, Integer acceptance,
-            ModelOptions models) {
+    static PlanChoice choose(CommandSpec spec, Path planFile, String defectClass, Integer sampleSize,
+            Integer acceptance, ModelOptions models) {
         if (planFile != null) {
             if (sampleSize != null || acceptance != null) {
                 throw new ParameterException(spec.commandLine(), "give either a plan file or --sample-size and"
                         + " --acceptance, not both");
             }
-            return PlanChoice.saved(spec, planFile, models);
+            return PlanChoice.saved(spec, planFile, defectClass, models);
+        }
+        if (defectClass != null) {
+            throw new ParameterException(spec.commandLine(), "--class chooses a defect class of a saved plan file");
         }
         if (sampleSize == null || acceptance == null) {
             throw new ParameterException(spec.commandLine(), "name a plan: a plan file, or --sample-size N and"

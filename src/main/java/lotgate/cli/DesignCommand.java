@@ -8,6 +8,7 @@ import java.time.Instant;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
+import lotgate.plan.DefectClass;
 import lotgate.plan.PlanFormat;
 import lotgate.plan.SavedPlan;
 import lotgate.sampling.OcModel;
@@ -37,17 +38,17 @@ import picocli.CommandLine.Spec;
                 ""})
 final class DesignCommand implements Runnable {
 
-    @Option(names = "--aql", required = true, paramLabel = "LEVEL", converter = Values.Quality.class,
+    @Option(names = "--aql", paramLabel = "LEVEL", converter = Values.Quality.class,
             description = "Acceptable quality level: lots this good should pass (e.g. 1%%).")
-    double aql;
+    Double aql;
 
     @Option(names = "--alpha", paramLabel = "RISK", defaultValue = "5%", converter = Values.Risk.class,
             description = "Producer's risk: the largest allowed P(reject) at the AQL (default ${DEFAULT-VALUE}).")
     double alpha;
 
-    @Option(names = "--ltpd", required = true, paramLabel = "LEVEL", converter = Values.Quality.class,
+    @Option(names = "--ltpd", paramLabel = "LEVEL", converter = Values.Quality.class,
             description = "Lot tolerance percent defective: lots this bad should fail (e.g. 5%%).")
-    double ltpd;
+    Double ltpd;
 
     @Option(names = "--beta", paramLabel = "RISK", defaultValue = "10%", converter = Values.Risk.class,
             description = "Consumer's risk: the largest allowed P(accept) at the LTPD (default ${DEFAULT-VALUE}).")
@@ -64,6 +65,14 @@ final class DesignCommand implements Runnable {
     @Option(names = {"-n", "--sample-size"}, paramLabel = "N", converter = Values.Count.class,
             description = "With --acceptance: evaluate this plan instead of designing one.")
     Integer sampleSize;
+
+    @Option(names = "--class", paramLabel = "CLASS:SPEC",
+            description = "Criteria for one defect class instead of --aql and --ltpd, repeatable: critical, major"
+                    + " or minor, then a colon and aql=, ltpd=, and optionally alpha=, beta=, c= (fixed acceptance"
+                    + " number) and n= (with c=, a given plan), e.g. --class critical:c=0,aql=0.1%%,ltpd=2%%"
+                    + " --class major:aql=1%%,ltpd=5%%. The lot's sample is the largest n; a class with a smaller"
+                    + " n is judged on the first units of the sample.")
+    List<String> classSpecs = new ArrayList<>();
 
     @ArgGroup(exclusive = false)
     SaveOptions save;
@@ -87,68 +96,171 @@ final class DesignCommand implements Runnable {
     @Spec
     CommandSpec spec;
 
+    /** What one defect class asks for: its risk points and, optionally, a fixed c or a given plan. */
+    record ClassRequest(DefectClass defectClass, RiskPoints points, Integer acceptance, Integer sampleSize) {
+    }
+
+    /** A class's design outcome with how it was obtained. */
+    record ClassOutcome(ClassRequest request, SingleDesign design, String method) {
+        SingleDesign.Found found() {
+            return (SingleDesign.Found) design;
+        }
+    }
+
     @Override
     public void run() {
         OcModel model = models.resolve(spec);
-        ModelOptions.checkLevel(spec, model, "--aql", aql);
-        ModelOptions.checkLevel(spec, model, "--ltpd", ltpd);
-        if (aql >= ltpd) {
-            throw new ParameterException(spec.commandLine(), "--aql " + Percent.level(aql)
-                    + " must be below --ltpd " + Percent.level(ltpd));
-        }
-        if (alpha + beta >= 1) {
-            throw new ParameterException(spec.commandLine(), "--alpha plus --beta must be below 100%");
-        }
-        if (sampleSize != null && acceptance == null) {
-            throw new ParameterException(spec.commandLine(), "--sample-size needs --acceptance to evaluate a plan");
-        }
         int lotSize = models.lotSizeOrZero();
-        if (sampleSize != null && lotSize > 0 && sampleSize > lotSize) {
-            throw new ParameterException(spec.commandLine(), "--sample-size " + sampleSize
-                    + " exceeds --lot-size " + lotSize);
-        }
-        if (sampleSize != null && acceptance >= sampleSize) {
-            throw new ParameterException(spec.commandLine(), "--acceptance must be below --sample-size "
-                    + sampleSize + ", got " + acceptance);
-        }
+        List<ClassRequest> requests = classSpecs.isEmpty()
+                ? List.of(plainRequest(model, lotSize))
+                : classRequests(model, lotSize);
         if (save != null) {
             checkSaveTarget();
         }
-        RiskPoints points = new RiskPoints(aql, alpha, ltpd, beta);
         SinglePlanDesigner designer = new SinglePlanDesigner(model, lotSize);
-        String method;
-        SingleDesign outcome;
-        if (sampleSize != null) {
-            SinglePlan plan = new SinglePlan(sampleSize, acceptance);
-            outcome = new SingleDesign.Found(plan, PlanRisks.of(plan, model, points), List.of());
-            method = SavedPlan.GIVEN;
-        } else if (acceptance != null) {
-            outcome = designer.designForAcceptanceNumber(acceptance, points);
-            method = SavedPlan.FIXED_ACCEPTANCE;
-        } else {
-            outcome = designer.design(points);
-            method = SavedPlan.SMALLEST_SAMPLE;
+        List<ClassOutcome> outcomes = new ArrayList<>();
+        for (ClassRequest request : requests) {
+            outcomes.add(designFor(designer, model, request));
         }
         PrintWriter out = spec.commandLine().getOut();
-        if (outcome instanceof SingleDesign.NotFound none) {
-            printNoPlan(out, none.reason(), model, lotSize);
-            throw new Main.Failure(ExitCode.NO_PLAN, format.kind == OutputFormat.Kind.text ? null
-                    : "no sampling plan meets the request: " + none.reason());
+        for (ClassOutcome outcome : outcomes) {
+            if (outcome.design() instanceof SingleDesign.NotFound none) {
+                String reason = (requests.size() > 1 ? "class " + outcome.request().defectClass().label() + ": " : "")
+                        + none.reason();
+                printNoPlan(out, reason, model, lotSize);
+                throw new Main.Failure(ExitCode.NO_PLAN, format.kind == OutputFormat.Kind.text ? null
+                        : "no sampling plan meets the request: " + reason);
+            }
         }
-        SingleDesign.Found found = (SingleDesign.Found) outcome;
         SavedPlan saved = null;
         if (save != null) {
             String name = stem(save.file);
-            saved = PlanFormat.seal(name, save.description, Instant.now().truncatedTo(ChronoUnit.SECONDS),
-                    found.plan(), model, lotSize, points, method);
+            List<PlanFormat.ClassDraft> drafts = outcomes.stream().map(o -> new PlanFormat.ClassDraft(
+                    o.request().defectClass(), o.found().plan(), o.request().points(), o.method())).toList();
+            saved = PlanFormat.seal(name, save.description, Instant.now().truncatedTo(ChronoUnit.SECONDS), model,
+                    lotSize, drafts);
             PlanFormat.write(save.file, saved);
         }
         switch (format.kind) {
-            case json -> out.println(Json.text(json(found, model, lotSize, points, method, saved)));
-            case csv -> out.print(csv(found, model, lotSize, points, method, saved));
-            case text -> printText(out, found, model, lotSize, points, method, saved);
+            case json -> out.println(Json.text(json(outcomes, model, lotSize, saved)));
+            case csv -> out.print(csv(outcomes, model, lotSize, saved));
+            case text -> printText(out, outcomes, model, lotSize, saved);
         }
         out.flush();
+    }
+
+    private ClassRequest plainRequest(OcModel model, int lotSize) {
+        if (aql == null || ltpd == null) {
+            throw new ParameterException(spec.commandLine(), "give --aql and --ltpd (or criteria per defect class"
+                    + " with --class)");
+        }
+        return checkedRequest(DefectClass.ANY, "", aql, alpha, ltpd, beta, acceptance, sampleSize, model, lotSize);
+    }
+
+    private List<ClassRequest> classRequests(OcModel model, int lotSize) {
+        if (aql != null || ltpd != null || acceptance != null || sampleSize != null) {
+            throw new ParameterException(spec.commandLine(), "with --class, give aql=, ltpd=, c= and n= inside each"
+                    + " class's criteria, not as --aql, --ltpd, --acceptance or --sample-size");
+        }
+        List<ClassRequest> requests = new ArrayList<>();
+        for (String text : classSpecs) {
+            requests.add(parseClass(text, model, lotSize));
+        }
+        for (DefectClass defectClass : DefectClass.values()) {
+            if (requests.stream().filter(r -> r.defectClass() == defectClass).count() > 1) {
+                throw new ParameterException(spec.commandLine(), "--class " + defectClass.label() + " is given twice");
+            }
+        }
+        requests.sort(java.util.Comparator.comparing(ClassRequest::defectClass));
+        return requests;
+    }
+
+    private ClassRequest parseClass(String text, OcModel model, int lotSize) {
+        String where = "--class " + text;
+        int colon = text.indexOf(':');
+        DefectClass defectClass = DefectClass.of(colon < 0 ? text : text.substring(0, colon));
+        if (defectClass == null || defectClass == DefectClass.ANY) {
+            throw new ParameterException(spec.commandLine(), where + ": start with critical, major or minor and a"
+                    + " colon, as in major:aql=1%,ltpd=5%");
+        }
+        Double classAql = null;
+        Double classLtpd = null;
+        double classAlpha = alpha;
+        double classBeta = beta;
+        Integer c = null;
+        Integer n = null;
+        for (String pair : colon < 0 ? new String[0] : text.substring(colon + 1).split(",")) {
+            int equals = pair.indexOf('=');
+            if (equals < 0) {
+                throw new ParameterException(spec.commandLine(), where + ": '" + pair + "' is not key=value");
+            }
+            String key = pair.substring(0, equals).trim();
+            String value = pair.substring(equals + 1).trim();
+            try {
+                switch (key) {
+                    case "aql" -> classAql = Values.fraction(value);
+                    case "ltpd" -> classLtpd = Values.fraction(value);
+                    case "alpha" -> classAlpha = new Values.Risk().convert(value);
+                    case "beta" -> classBeta = new Values.Risk().convert(value);
+                    case "c" -> c = new Values.Acceptance().convert(value);
+                    case "n" -> n = new Values.Count().convert(value);
+                    default -> throw new ParameterException(spec.commandLine(), where + ": unknown key '" + key
+                            + "'; use aql, ltpd, alpha, beta, c or n");
+                }
+            } catch (picocli.CommandLine.TypeConversionException e) {
+                throw new ParameterException(spec.commandLine(), where + ": " + key + ": " + e.getMessage());
+            }
+        }
+        if (classAql == null || classLtpd == null) {
+            throw new ParameterException(spec.commandLine(), where + ": give both aql= and ltpd=");
+        }
+        return checkedRequest(defectClass, where + ": ", classAql, classAlpha, classLtpd, classBeta, c, n, model,
+                lotSize);
+    }
+
+    private ClassRequest checkedRequest(DefectClass defectClass, String where, double classAql, double classAlpha,
+            double classLtpd, double classBeta, Integer c, Integer n, OcModel model, int lotSize) {
+        String aqlName = where.isEmpty() ? "--aql" : "aql";
+        String ltpdName = where.isEmpty() ? "--ltpd" : "ltpd";
+        ModelOptions.checkLevel(spec, model, where + aqlName, classAql);
+        ModelOptions.checkLevel(spec, model, where + ltpdName, classLtpd);
+        if (classAql >= classLtpd) {
+            throw new ParameterException(spec.commandLine(), where + aqlName + " " + Percent.level(classAql)
+                    + " must be below " + ltpdName + " " + Percent.level(classLtpd));
+        }
+        if (classAlpha + classBeta >= 1) {
+            throw new ParameterException(spec.commandLine(), where + (where.isEmpty() ? "--alpha plus --beta"
+                    : "alpha plus beta") + " must be below 100%");
+        }
+        String sizeName = where.isEmpty() ? "--sample-size" : "n";
+        String acceptanceName = where.isEmpty() ? "--acceptance" : "c";
+        if (n != null && c == null) {
+            throw new ParameterException(spec.commandLine(), where + sizeName + " needs " + acceptanceName
+                    + " to evaluate a plan");
+        }
+        if (n != null && lotSize > 0 && n > lotSize) {
+            throw new ParameterException(spec.commandLine(), where + sizeName + " " + n + " exceeds --lot-size "
+                    + lotSize);
+        }
+        if (n != null && c >= n) {
+            throw new ParameterException(spec.commandLine(), where + acceptanceName + " must be below " + sizeName
+                    + " " + n + ", got " + c);
+        }
+        return new ClassRequest(defectClass, new RiskPoints(classAql, classAlpha, classLtpd, classBeta), c, n);
+    }
+
+    private static ClassOutcome designFor(SinglePlanDesigner designer, OcModel model, ClassRequest request) {
+        RiskPoints points = request.points();
+        if (request.sampleSize() != null) {
+            SinglePlan plan = new SinglePlan(request.sampleSize(), request.acceptance());
+            return new ClassOutcome(request, new SingleDesign.Found(plan, PlanRisks.of(plan, model, points), List.of()),
+                    SavedPlan.GIVEN);
+        }
+        if (request.acceptance() != null) {
+            return new ClassOutcome(request, designer.designForAcceptanceNumber(request.acceptance(), points),
+                    SavedPlan.FIXED_ACCEPTANCE);
+        }
+        return new ClassOutcome(request, designer.design(points), SavedPlan.SMALLEST_SAMPLE);
     }
 
     private void checkSaveTarget() {
@@ -211,47 +323,80 @@ final class DesignCommand implements Runnable {
         return count == 1 ? "nonconformity" : "nonconformities";
     }
 
-    private void printText(PrintWriter out, SingleDesign.Found found, OcModel model, int lotSize,
-            RiskPoints points, String method, SavedPlan saved) {
-        SinglePlan plan = found.plan();
-        PlanRisks risks = found.risks();
-        out.println(switch (method) {
-            case SavedPlan.GIVEN -> "Single sampling plan, as given";
-            case SavedPlan.FIXED_ACCEPTANCE -> "Single sampling plan with acceptance number " + plan.c()
-                    + ": the smallest sample that meets the LTPD point";
-            default -> "Single sampling plan: the smallest sample that meets both risks";
-        });
-        out.println("  " + modelLine(model, lotSize));
-        out.println();
-        out.printf("  Inspect n = %d units. Accept the lot with up to c = %d %s; reject it at %d or more.%n",
-                plan.n(), plan.c(), unitWord(model, plan.c()), plan.rejectionNumber());
-        if (lotSize > 0 && plan.n() == lotSize) {
-            out.println("  The sample is the whole lot: this is 100% inspection.");
-        }
-        out.println();
-        String unit = model.countsUnits() ? "" : " per unit";
-        out.printf("  %-6s %-22s %-11s %-24s %-8s%n", "point", "quality", "P(accept)", "risk", "allowed");
-        out.printf("  %-6s %-22s %-11s %-24s %s%n", "AQL", Percent.level(points.aql()) + unit + pointNote(model,
-                risks.aqlPoint(), lotSize), Percent.probability(1 - risks.producerRisk()),
-                "producer's " + Percent.probability(risks.producerRisk()),
-                String.format("%-8s%s", Percent.level(points.alpha()), verdict(risks.producerRisk() <= points.alpha())));
-        out.printf("  %-6s %-22s %-11s %-24s %s%n", "LTPD", Percent.level(points.ltpd()) + unit + pointNote(model,
-                risks.ltpdPoint(), lotSize), Percent.probability(risks.consumerRisk()),
-                "consumer's " + Percent.probability(risks.consumerRisk()),
-                String.format("%-8s%s", Percent.level(points.beta()), verdict(risks.consumerRisk() <= points.beta())));
-        if (!found.otherAcceptanceNumbers().isEmpty()) {
+    private void printText(PrintWriter out, List<ClassOutcome> outcomes, OcModel model, int lotSize,
+            SavedPlan saved) {
+        boolean classed = outcomes.get(0).request().defectClass() != DefectClass.ANY;
+        if (classed) {
+            int sample = outcomes.stream().mapToInt(o -> o.found().plan().n()).max().orElseThrow();
+            out.println("Single sampling plan with criteria per defect class");
+            out.println("  " + modelLine(model, lotSize));
             out.println();
-            out.println("  At n = " + plan.n() + " these acceptance numbers meet both risks too: c = "
-                    + String.join(", ", found.otherAcceptanceNumbers().stream().map(String::valueOf).toList())
-                    + " (lower producer's risk, higher consumer's risk).");
+            out.println("  Inspect n = " + sample + " units; a class with a smaller sample is judged on the first"
+                    + " units inspected.");
         }
-        if (plan.c() == 0) {
+        boolean zeroAcceptance = false;
+        for (ClassOutcome outcome : outcomes) {
+            SinglePlan plan = outcome.found().plan();
+            zeroAcceptance |= plan.c() == 0;
+            out.println();
+            if (classed) {
+                out.println("  " + outcome.request().defectClass().label() + " (" + describe(outcome.method(), plan)
+                        + ")");
+            } else {
+                out.println("Single sampling plan" + switch (outcome.method()) {
+                    case SavedPlan.GIVEN -> ", as given";
+                    case SavedPlan.FIXED_ACCEPTANCE -> " with acceptance number " + plan.c()
+                            + ": the smallest sample that meets the LTPD point";
+                    default -> ": the smallest sample that meets both risks";
+                });
+                out.println("  " + modelLine(model, lotSize));
+                out.println();
+            }
+            printClass(out, outcome, model, lotSize, classed ? "    " : "  ");
+        }
+        if (zeroAcceptance) {
             out.println();
             out.println(Cautions.ZERO_ACCEPTANCE.indent(2).stripTrailing());
         }
         if (saved != null) {
             out.println();
             out.println("  Saved " + save.file + " (fingerprint " + saved.shortFingerprint() + ")");
+        }
+    }
+
+    private static String describe(String method, SinglePlan plan) {
+        return switch (method) {
+            case SavedPlan.GIVEN -> "as given";
+            case SavedPlan.FIXED_ACCEPTANCE -> "acceptance number " + plan.c() + " fixed";
+            default -> "smallest sample meeting both risks";
+        };
+    }
+
+    private static void printClass(PrintWriter out, ClassOutcome outcome, OcModel model, int lotSize, String indent) {
+        SinglePlan plan = outcome.found().plan();
+        PlanRisks risks = outcome.found().risks();
+        RiskPoints points = outcome.request().points();
+        out.printf("%sInspect n = %d units. Accept the lot with up to c = %d %s; reject it at %d or more.%n",
+                indent, plan.n(), plan.c(), unitWord(model, plan.c()), plan.rejectionNumber());
+        if (lotSize > 0 && plan.n() == lotSize) {
+            out.println(indent + "The sample is the whole lot: this is 100% inspection.");
+        }
+        out.println();
+        String unit = model.countsUnits() ? "" : " per unit";
+        String row = indent + "%-6s %-22s %-11s %-24s %-8s%n";
+        out.printf(row, "point", "quality", "P(accept)", "risk", "allowed");
+        out.printf(row, "AQL", Percent.level(points.aql()) + unit + pointNote(model, risks.aqlPoint(), lotSize),
+                Percent.probability(1 - risks.producerRisk()), "producer's " + Percent.probability(risks.producerRisk()),
+                String.format("%-8s%s", Percent.level(points.alpha()), verdict(risks.producerRisk() <= points.alpha())));
+        out.printf(row, "LTPD", Percent.level(points.ltpd()) + unit + pointNote(model, risks.ltpdPoint(), lotSize),
+                Percent.probability(risks.consumerRisk()), "consumer's " + Percent.probability(risks.consumerRisk()),
+                String.format("%-8s%s", Percent.level(points.beta()), verdict(risks.consumerRisk() <= points.beta())));
+        List<Integer> others = outcome.found().otherAcceptanceNumbers();
+        if (!others.isEmpty()) {
+            out.println();
+            out.println(indent + "At n = " + plan.n() + " these acceptance numbers meet both risks too: c = "
+                    + String.join(", ", others.stream().map(String::valueOf).toList())
+                    + " (lower producer's risk, higher consumer's risk).");
         }
     }
 
@@ -266,15 +411,11 @@ final class DesignCommand implements Runnable {
         return met ? "met" : "NOT MET";
     }
 
-    private static ObjectNode json(SingleDesign.Found found, OcModel model, int lotSize, RiskPoints points,
-            String method, SavedPlan saved) {
-        SinglePlan plan = found.plan();
-        PlanRisks risks = found.risks();
-        ObjectNode node = Json.object();
-        node.put("planFound", true);
-        node.put("scheme", plan.scheme());
-        node.put("model", model.name());
-        node.put("method", method);
+    private static void putClass(ObjectNode node, ClassOutcome outcome, OcModel model, int lotSize) {
+        SinglePlan plan = outcome.found().plan();
+        PlanRisks risks = outcome.found().risks();
+        RiskPoints points = outcome.request().points();
+        node.put("method", outcome.method());
         node.put("n", plan.n());
         node.put("c", plan.c());
         node.put("rejectionNumber", plan.rejectionNumber());
@@ -286,9 +427,8 @@ final class DesignCommand implements Runnable {
         node.put("consumerRisk", risks.consumerRisk());
         node.put("risksMet", risks.meets(points));
         var others = node.putArray("otherAcceptanceNumbers");
-        found.otherAcceptanceNumbers().forEach(others::add);
+        outcome.found().otherAcceptanceNumbers().forEach(others::add);
         if (lotSize > 0) {
-            node.put("lotSize", lotSize);
             if (model instanceof OcModel.Hypergeometric) {
                 node.put("defectivesAtAql", Math.round(risks.aqlPoint() * lotSize));
                 node.put("defectivesAtLtpd", Math.round(risks.ltpdPoint() * lotSize));
@@ -296,7 +436,30 @@ final class DesignCommand implements Runnable {
                 node.put("defectivesAtAql", points.aql() * lotSize);
                 node.put("defectivesAtLtpd", points.ltpd() * lotSize);
             }
-            node.put("fullInspection", plan.n() == lotSize);
+        }
+    }
+
+    private static ObjectNode json(List<ClassOutcome> outcomes, OcModel model, int lotSize, SavedPlan saved) {
+        ObjectNode node = Json.object();
+        node.put("planFound", true);
+        node.put("scheme", "single");
+        node.put("model", model.name());
+        boolean classed = outcomes.get(0).request().defectClass() != DefectClass.ANY;
+        int sample = outcomes.stream().mapToInt(o -> o.found().plan().n()).max().orElseThrow();
+        if (classed) {
+            node.put("sampleSize", sample);
+            var list = node.putArray("classes");
+            for (ClassOutcome outcome : outcomes) {
+                ObjectNode entry = list.addObject();
+                entry.put("class", outcome.request().defectClass().label());
+                putClass(entry, outcome, model, lotSize);
+            }
+        } else {
+            putClass(node, outcomes.get(0), model, lotSize);
+        }
+        if (lotSize > 0) {
+            node.put("lotSize", lotSize);
+            node.put("fullInspection", sample == lotSize);
         }
         if (saved != null) {
             node.put("fingerprint", saved.fingerprint());
@@ -304,16 +467,22 @@ final class DesignCommand implements Runnable {
         return node;
     }
 
-    private static String csv(SingleDesign.Found found, OcModel model, int lotSize, RiskPoints points,
-            String method, SavedPlan saved) {
-        SinglePlan plan = found.plan();
-        List<String> header = List.of("scheme", "model", "method", "n", "c", "rejectionNumber", "aql", "alpha",
-                "ltpd", "beta", "producerRisk", "consumerRisk", "risksMet", "lotSize", "fingerprint");
-        List<Object> row = new ArrayList<>(List.of(plan.scheme(), model.name(), method, plan.n(), plan.c(),
-                plan.rejectionNumber(), points.aql(), points.alpha(), points.ltpd(), points.beta(),
-                found.risks().producerRisk(), found.risks().consumerRisk(), found.risks().meets(points)));
-        row.add(lotSize > 0 ? lotSize : "");
-        row.add(saved == null ? "" : saved.fingerprint());
-        return Csv.table(header, List.of(row));
+    private static String csv(List<ClassOutcome> outcomes, OcModel model, int lotSize, SavedPlan saved) {
+        List<String> header = List.of("class", "scheme", "model", "method", "n", "c", "rejectionNumber", "aql",
+                "alpha", "ltpd", "beta", "producerRisk", "consumerRisk", "risksMet", "lotSize", "fingerprint");
+        List<List<Object>> rows = new ArrayList<>();
+        for (ClassOutcome outcome : outcomes) {
+            SinglePlan plan = outcome.found().plan();
+            RiskPoints points = outcome.request().points();
+            PlanRisks risks = outcome.found().risks();
+            List<Object> row = new ArrayList<>(List.of(outcome.request().defectClass().label(), plan.scheme(),
+                    model.name(), outcome.method(), plan.n(), plan.c(), plan.rejectionNumber(), points.aql(),
+                    points.alpha(), points.ltpd(), points.beta(), risks.producerRisk(), risks.consumerRisk(),
+                    risks.meets(points)));
+            row.add(lotSize > 0 ? lotSize : "");
+            row.add(saved == null ? "" : saved.fingerprint());
+            rows.add(row);
+        }
+        return Csv.table(header, rows);
     }
 }

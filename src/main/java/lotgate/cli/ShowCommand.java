@@ -3,6 +3,9 @@ package lotgate.cli;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import lotgate.plan.ClassPlan;
 import lotgate.plan.PlanFormat;
 import lotgate.plan.SavedPlan;
 import lotgate.sampling.SinglePlan;
@@ -32,57 +35,89 @@ final class ShowCommand implements Runnable {
     @Override
     public void run() {
         SavedPlan saved = PlanFormat.read(planFile);
-        SinglePlan plan = (SinglePlan) saved.plan();
         PrintWriter out = spec.commandLine().getOut();
         switch (format.kind) {
-            case json -> {
-                ObjectNode node = Json.object();
-                node.put("file", planFile.toString());
-                node.put("valid", true);
-                node.put("name", saved.name());
-                node.put("description", saved.description());
-                node.put("created", saved.created().toString());
-                node.put("scheme", plan.scheme());
-                node.put("model", saved.model().name());
-                node.put("n", plan.n());
-                node.put("c", plan.c());
-                if (saved.lotSize() > 0) {
-                    node.put("lotSize", saved.lotSize());
-                }
-                node.put("aql", saved.designedFor().aql());
-                node.put("alpha", saved.designedFor().alpha());
-                node.put("ltpd", saved.designedFor().ltpd());
-                node.put("beta", saved.designedFor().beta());
-                node.put("method", saved.method());
-                node.put("producerRisk", saved.achieved().producerRisk());
-                node.put("consumerRisk", saved.achieved().consumerRisk());
-                node.put("fingerprint", saved.fingerprint());
-                out.println(Json.text(node));
-            }
-            case csv -> out.print(Csv.table(
-                    java.util.List.of("file", "name", "model", "n", "c", "lotSize", "producerRisk", "consumerRisk",
-                            "fingerprint"),
-                    java.util.List.of(java.util.List.of(planFile.toString(), saved.name(), saved.model().name(),
-                            plan.n(), plan.c(), saved.lotSize() > 0 ? saved.lotSize() : "",
-                            saved.achieved().producerRisk(), saved.achieved().consumerRisk(), saved.fingerprint()))));
-            case text -> {
-                out.println("Plan file " + planFile + ": valid (format version " + PlanFormat.VERSION + ")");
-                out.println("  name         " + saved.name());
-                if (!saved.description().isBlank()) {
-                    out.println("  description  " + saved.description());
-                }
-                out.println("  created      " + saved.created());
-                out.println("  plan         n = " + plan.n() + ", c = " + plan.c() + " (reject at "
-                        + plan.rejectionNumber() + ")");
-                out.println("  model        " + DesignCommand.modelLine(saved.model(), saved.lotSize()));
-                out.println("  designed for AQL " + Percent.level(saved.designedFor().aql()) + " with alpha "
-                        + Percent.level(saved.designedFor().alpha()) + ", LTPD " + Percent.level(saved.designedFor().ltpd())
-                        + " with beta " + Percent.level(saved.designedFor().beta()) + " (" + saved.method() + ")");
-                out.println("  achieves     producer's risk " + Percent.probability(saved.achieved().producerRisk())
-                        + ", consumer's risk " + Percent.probability(saved.achieved().consumerRisk()));
-                out.println("  fingerprint  " + saved.fingerprint());
-            }
+            case json -> out.println(Json.text(json(saved)));
+            case csv -> out.print(csv(saved));
+            case text -> printText(out, saved);
         }
         out.flush();
+    }
+
+    private ObjectNode json(SavedPlan saved) {
+        ObjectNode node = Json.object();
+        node.put("file", planFile.toString());
+        node.put("valid", true);
+        node.put("name", saved.name());
+        node.put("description", saved.description());
+        node.put("created", saved.created().toString());
+        node.put("model", saved.model().name());
+        if (saved.lotSize() > 0) {
+            node.put("lotSize", saved.lotSize());
+        }
+        node.put("sampleSize", saved.sampleSize());
+        if (saved.unclassified()) {
+            putClass(node, saved.classes().get(0));
+        } else {
+            var list = node.putArray("classes");
+            for (ClassPlan criteria : saved.classes()) {
+                ObjectNode entry = list.addObject();
+                entry.put("class", criteria.defectClass().label());
+                putClass(entry, criteria);
+            }
+        }
+        node.put("fingerprint", saved.fingerprint());
+        return node;
+    }
+
+    private static void putClass(ObjectNode node, ClassPlan criteria) {
+        SinglePlan plan = (SinglePlan) criteria.plan();
+        node.put("scheme", plan.scheme());
+        node.put("n", plan.n());
+        node.put("c", plan.c());
+        node.put("aql", criteria.designedFor().aql());
+        node.put("alpha", criteria.designedFor().alpha());
+        node.put("ltpd", criteria.designedFor().ltpd());
+        node.put("beta", criteria.designedFor().beta());
+        node.put("method", criteria.method());
+        node.put("producerRisk", criteria.achieved().producerRisk());
+        node.put("consumerRisk", criteria.achieved().consumerRisk());
+    }
+
+    private String csv(SavedPlan saved) {
+        List<List<Object>> rows = new ArrayList<>();
+        for (ClassPlan criteria : saved.classes()) {
+            SinglePlan plan = (SinglePlan) criteria.plan();
+            rows.add(List.of(planFile.toString(), saved.name(), criteria.defectClass().label(), saved.model().name(),
+                    plan.n(), plan.c(), saved.lotSize() > 0 ? saved.lotSize() : "", criteria.achieved().producerRisk(),
+                    criteria.achieved().consumerRisk(), saved.fingerprint()));
+        }
+        return Csv.table(List.of("file", "name", "class", "model", "n", "c", "lotSize", "producerRisk", "consumerRisk",
+                "fingerprint"), rows);
+    }
+
+    private void printText(PrintWriter out, SavedPlan saved) {
+        out.println("Plan file " + planFile + ": valid (format version " + PlanFormat.VERSION + ")");
+        out.println("  name         " + saved.name());
+        if (!saved.description().isBlank()) {
+            out.println("  description  " + saved.description());
+        }
+        out.println("  created      " + saved.created());
+        out.println("  model        " + DesignCommand.modelLine(saved.model(), saved.lotSize()));
+        for (ClassPlan criteria : saved.classes()) {
+            SinglePlan plan = (SinglePlan) criteria.plan();
+            String heading = saved.unclassified() ? "plan" : criteria.defectClass().label();
+            out.printf("  %-12s n = %d, c = %d (reject at %d)%n", heading, plan.n(), plan.c(), plan.rejectionNumber());
+            out.println("               designed for AQL " + Percent.level(criteria.designedFor().aql()) + " with alpha "
+                    + Percent.level(criteria.designedFor().alpha()) + ", LTPD "
+                    + Percent.level(criteria.designedFor().ltpd()) + " with beta "
+                    + Percent.level(criteria.designedFor().beta()) + " (" + criteria.method() + ")");
+            out.println("               achieves producer's risk " + Percent.probability(criteria.achieved().producerRisk())
+                    + ", consumer's risk " + Percent.probability(criteria.achieved().consumerRisk()));
+        }
+        if (!saved.unclassified()) {
+            out.println("  sample       n = " + saved.sampleSize() + " units per lot");
+        }
+        out.println("  fingerprint  " + saved.fingerprint());
     }
 }

@@ -147,7 +147,7 @@ class DesignCommandTest {
         Cli.Result result = Cli.run("design", "--aql", "1%", "--ltpd", "5%", "--format", "csv");
         String[] lines = result.out().split("\n");
         assertEquals(2, lines.length);
-        assertTrue(lines[0].startsWith("scheme,model,method,n,c,"));
-        assertTrue(lines[1].startsWith("single,binomial,smallest-sample,132,3,4,"));
+        assertTrue(lines[0].startsWith("class,scheme,model,method,n,c,"));
+        assertTrue(lines[1].startsWith("any,single,binomial,smallest-sample,132,3,4,"));
     }
 }
