@@ -16,6 +16,7 @@ import picocli.CommandLine.Option;
                 + " and consumer's risks, study their OC, AOQ and ATI curves, and save them under plans/ so that"
                 + " every inspector applies the same plan.", ""},
         subcommands = {DesignCommand.class, CurveCommand.class, CompareCommand.class, ShowCommand.class,
+                SentenceCommand.class,
                 DemoCommand.class, CommandLine.HelpCommand.class},
         footerHeading = "%nExit codes:%n",
         footer = {
@@ -28,6 +29,12 @@ import picocli.CommandLine.Option;
                 "   6  an output file cannot be written",
                 "  70  internal fault (rerun with --debug)"})
 public final class Main implements Runnable {
+    static {
+        // POI logs through the Log4j API; lotgate has no log, so route it to the API's silent simple logger.
+        System.setProperty("log4j.provider", "org.apache.logging.log4j.simple.internal.SimpleProvider");
+        System.setProperty("log4j2.simplelogLevel", "OFF");
+        System.setProperty("log4j2.statusLoggerLevel", "OFF");
+    }
 
     @Option(names = "--debug", scope = CommandLine.ScopeType.INHERIT,
             description = "Show the full stack trace when something fails.")

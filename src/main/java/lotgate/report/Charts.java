@@ -47,7 +47,13 @@ public final class Charts {
     }
 
     public static JFreeChart oc(String title, boolean perUnit, List<ChartCurve> curves, List<RiskMark> marks) {
-        XYPlot plot = ocPlot(perUnit, curves, marks);
+        return oc(title, perUnit, curves, marks, "Design points (AQL, LTPD)");
+    }
+
+    /** An OC chart whose marked points carry their own legend entry, such as a lot's observed quality. */
+    public static JFreeChart oc(String title, boolean perUnit, List<ChartCurve> curves, List<RiskMark> marks,
+            String marksLabel) {
+        XYPlot plot = ocPlot(perUnit, curves, marks, marksLabel);
         plot.getDomainAxis().setRange(0, widest(curves));
         return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, true));
     }
@@ -88,7 +94,7 @@ public final class Charts {
         shared.setRange(0, widest(List.of(curve)));
         CombinedDomainXYPlot combined = new CombinedDomainXYPlot(shared);
         combined.setGap(14);
-        combined.add(ocPlot(perUnit, List.of(curve), marks), 3);
+        combined.add(ocPlot(perUnit, List.of(curve), marks, "Design points (AQL, LTPD)"), 3);
         combined.add(aoqPlot(perUnit, curve, aoql, aoqlAt, false), 2);
         if (lotSize > 0) {
             combined.add(atiPlot(perUnit, curve, sampleSize, lotSize, false), 2);
@@ -96,7 +102,7 @@ public final class Charts {
         return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, combined, true));
     }
 
-    private static XYPlot ocPlot(boolean perUnit, List<ChartCurve> curves, List<RiskMark> marks) {
+    private static XYPlot ocPlot(boolean perUnit, List<ChartCurve> curves, List<RiskMark> marks, String marksLabel) {
         XYSeriesCollection data = new XYSeriesCollection();
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
         for (int i = 0; i < curves.size(); i++) {
@@ -108,7 +114,7 @@ public final class Charts {
         plot.getRangeAxis().setRange(0, 1.02);
         if (!marks.isEmpty()) {
             XYSeriesCollection points = new XYSeriesCollection();
-            XYSeries asked = new XYSeries("Design points (AQL, LTPD)");
+            XYSeries asked = new XYSeries(marksLabel, false, true);
             for (RiskMark mark : marks) {
                 asked.add(mark.quality(), mark.acceptance());
                 XYTextAnnotation text = new XYTextAnnotation("  " + mark.label(), mark.quality(), mark.acceptance());

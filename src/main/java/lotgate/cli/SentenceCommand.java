@@ -1,0 +1,384 @@
+package lotgate.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.time.LocalDate;
+import java.time.format.DateTimeParseException;
+import java.time.temporal.ChronoUnit;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import lotgate.files.AtomicWrite;
+import lotgate.files.Sha256;
+import lotgate.inspection.Columns;
+import lotgate.inspection.InspectionSample;
+import lotgate.inspection.LotDetails;
+import lotgate.inspection.SampleReader;
+import lotgate.inspection.SheetException;
+import lotgate.inspection.SheetSource;
+import lotgate.inspection.Tally;
+import lotgate.plan.ClassPlan;
+import lotgate.plan.DefectClass;
+import lotgate.plan.PlanFormat;
+import lotgate.plan.SavedPlan;
+import lotgate.report.DecisionJson;
+import lotgate.report.LotReport;
+import lotgate.report.SentenceText;
+import lotgate.sentencing.ClassVerdict;
+import lotgate.sentencing.Evidence;
+import lotgate.sentencing.LotDecision;
+import lotgate.sentencing.Sentence;
+import lotgate.sentencing.Sentencer;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.Spec;
+
+/** Sentences a lot: reads its inspection sheet, applies a saved plan, and gives the verdict with its evidence. */
+@Command(name = "sentence", mixinStandardHelpOptions = true, sortOptions = false, usageHelpAutoWidth = true,
+        header = "Accept or reject a lot from its inspection sheet and a saved plan.",
+        description = {
+                "Reads the sample recorded in an inspection sheet (.xlsx, .xls or .csv), applies the saved plan,"
+                        + " and gives the verdict per defect class and for the lot, with exact evidence: the"
+                        + " p-value of the count against the AQL, a confidence interval for the lot's quality, for a"
+                        + " known lot size an upper bound on its nonconforming units, and where the count sits on"
+                        + " the plan's OC curve.",
+                "",
+                "Exit code 0: accepted; 1: rejected; 4: the sheet holds fewer or more units than the plan samples;"
+                        + " 2 and 3: bad options or input.",
+                ""})
+final class SentenceCommand implements Runnable {
+
+    @Parameters(index = "0", paramLabel = "PLAN", description = "The saved plan file to apply (plans/*.json).")
+    Path planFile;
+
+    @Parameters(index = "1", paramLabel = "SHEET", description = "The inspection sheet: .xlsx, .xls or .csv.")
+    Path sheetFile;
+
+    @Option(names = "--sheet", paramLabel = "NAME",
+            description = "The workbook sheet holding the sample (default: the first sheet not named 'lot').")
+    String sheet;
+
+    @Option(names = "--columns", paramLabel = "MAPPING",
+            description = "Your own header names, as role=header pairs: unit, result, critical, major, minor,"
+                    + " defect, note; e.g. --columns unit=Serial,result=Outcome.")
+    String columnMapping;
+
+    @Option(names = "--rows", paramLabel = "FIRST-LAST",
+            description = "The sheet rows that form the sample, when the sheet holds more units (e.g. 2-126).")
+    String rows;
+
+    @Option(names = "--lot", paramLabel = "ID", description = "The lot's identifier.")
+    String lotId;
+
+    @Option(names = "--supplier", paramLabel = "NAME", description = "The supplier.")
+    String supplier;
+
+    @Option(names = "--part", paramLabel = "PART", description = "The part number.")
+    String part;
+
+    @Option(names = {"-N", "--lot-size"}, paramLabel = "N", converter = Values.Count.class,
+            description = "The lot's size N (default: the plan's, for a finite-lot plan).")
+    Integer lotSize;
+
+    @Option(names = "--received", paramLabel = "DATE", description = "The day the lot was received (2026-03-14).")
+    String received;
+
+    @Option(names = "--inspector", paramLabel = "NAME", description = "Who inspected the sample.")
+    String inspector;
+
+    @Option(names = "--lot-file", paramLabel = "FILE",
+            description = "Lot details as key/value rows (default: the workbook's 'lot' sheet, or NAME.lot.csv beside"
+                    + " a CSV sheet).")
+    Path lotFile;
+
+    @Option(names = "--confidence", paramLabel = "LEVEL", defaultValue = "95%", converter = Values.Risk.class,
+            description = "Confidence level of the bounds (default ${DEFAULT-VALUE}).")
+    double confidence;
+
+    @Option(names = "--record", paramLabel = "FILE", description = "Save the decision record as JSON.")
+    Path record;
+
+    @Option(names = "--report", paramLabel = "FILE",
+            description = "Write a lot report: .xlsx (summary, sample, OC chart) or .html (printable); repeatable.")
+    List<Path> reports = new ArrayList<>();
+
+    @Mixin
+    OutputFormat format;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public void run() {
+        checkOutputs();
+        int[] range = rowRange();
+        LotDetails given = givenDetails();
+        Columns columns = columns();
+        SavedPlan plan = PlanFormat.read(planFile);
+        SheetSource source = SheetSource.open(sheetFile);
+        LotDetails lot = given.orElse(LotDetails.read(source, lotFile));
+        List<String> notices = new ArrayList<>();
+        lot = checkLot(lot, plan, notices);
+        int[] cutoffs = plan.classes().stream().mapToInt(c -> c.plan().maxSampleSize()).distinct().toArray();
+        InspectionSample sample = new SampleReader(source, sheet, columns, cutoffs, range[0], range[1]).read();
+        checkSampleSize(plan, sample, range);
+        Map<DefectClass, Integer> found = counts(plan, sample);
+        Sentence sentence = Sentencer.sentence(plan, found, lot.lotSize(), confidence);
+        if (sample.firstCriticalRow() >= 0) {
+            notices.add(0, "critical nonconformity found (" + where(sample, sample.firstCriticalRow()) + "): quarantine"
+                    + " the lot and follow the customer's requirements and local regulations for critical"
+                    + " nonconformities, whatever the plan's verdict");
+        }
+        LotDecision decision = new LotDecision(lot, plan, planFile, sample, Sha256.of(sheetFile), sentence, confidence,
+                Instant.now().truncatedTo(ChronoUnit.SECONDS), Version.number(), notices);
+        for (Path report : reports) {
+            LotReport.write(decision, report);
+        }
+        if (record != null) {
+            AtomicWrite.writeString(record, Json.text(DecisionJson.of(decision)) + "\n");
+        }
+        PrintWriter out = spec.commandLine().getOut();
+        switch (format.kind) {
+            case json -> out.println(Json.text(DecisionJson.of(decision)));
+            case csv -> out.print(csv(decision));
+            case text -> printText(out, decision);
+        }
+        out.flush();
+        if (!sentence.accepted()) {
+            throw new Main.Failure(ExitCode.REJECTED, null);
+        }
+    }
+
+    private void checkOutputs() {
+        if (record != null && !record.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".json")) {
+            throw new ParameterException(spec.commandLine(), "--record " + record + ": a decision record is a .json file");
+        }
+        for (Path report : reports) {
+            if (!LotReport.supported(report)) {
+                throw new ParameterException(spec.commandLine(), "--report " + report + ": a lot report is a .xlsx or"
+                        + " .html file");
+            }
+        }
+    }
+
+    private int[] rowRange() {
+        if (rows == null) {
+            return new int[] {0, 0};
+        }
+        String[] parts = rows.split("-");
+        try {
+            int first = Integer.parseInt(parts[0].trim());
+            int last = Integer.parseInt(parts[1].trim());
+            if (parts.length == 2 && first >= 1 && last >= first) {
+                return new int[] {first, last};
+            }
+        } catch (NumberFormatException | ArrayIndexOutOfBoundsException e) {
+            // Falls through to the message below.
+        }
+        throw new ParameterException(spec.commandLine(), "--rows " + rows + ": give the first and last sheet row of"
+                + " the sample, as in 2-126");
+    }
+
+    private LotDetails givenDetails() {
+        LocalDate day = null;
+        if (received != null) {
+            try {
+                day = LocalDate.parse(received.trim());
+            } catch (DateTimeParseException e) {
+                throw new ParameterException(spec.commandLine(), "--received " + received + ": give a date such as"
+                        + " 2026-03-14");
+            }
+        }
+        return new LotDetails(blankToNull(lotId), blankToNull(supplier), blankToNull(part),
+                lotSize == null ? 0 : lotSize, day, blankToNull(inspector));
+    }
+
+    private static String blankToNull(String text) {
+        return text == null || text.isBlank() ? null : text.trim();
+    }
+
+    private Columns columns() {
+        if (columnMapping == null) {
+            return Columns.standard();
+        }
+        try {
+            return Columns.mapped(columnMapping);
+        } catch (IllegalArgumentException e) {
+            throw new ParameterException(spec.commandLine(), "--columns: " + e.getMessage());
+        }
+    }
+
+    private LotDetails checkLot(LotDetails lot, SavedPlan plan, List<String> notices) {
+        if (lot.lot() == null) {
+            throw new ParameterException(spec.commandLine(), "name the lot: give --lot ID, or a 'lot' row in the lot"
+                    + " details (the workbook's 'lot' sheet, or " + (sheetFile.toString().endsWith(".csv")
+                    ? LotDetails.sideFile(sheetFile).getFileName() : "--lot-file") + ")");
+        }
+        int size = lot.lotSize();
+        if (size == 0 && plan.lotSize() > 0 && plan.model() instanceof lotgate.sampling.OcModel.Hypergeometric) {
+            size = plan.lotSize();
+            notices.add("lot size not given: taken as the plan's " + size + " units");
+        } else if (size > 0 && plan.lotSize() > 0 && size != plan.lotSize()) {
+            notices.add("this lot has " + size + " units; the plan was designed for lots of " + plan.lotSize()
+                    + " (the evidence uses " + size + ")");
+        }
+        if (size > 0 && size < plan.sampleSize()) {
+            throw new Main.Failure(ExitCode.BAD_INPUT, "the lot has " + size + " units but plan " + plan.name()
+                    + " samples " + plan.sampleSize() + "; inspect every unit instead");
+        }
+        return new LotDetails(lot.lot(), lot.supplier(), lot.part(), size, lot.received(), lot.inspector());
+    }
+
+    private void checkSampleSize(SavedPlan plan, InspectionSample sample, int[] range) {
+        int wanted = plan.sampleSize();
+        String rowsRead = sample.units() == 0 ? "" : ", " + rowsOf(sample);
+        if (sample.units() < wanted) {
+            throw new Main.Failure(ExitCode.INCOMPLETE_SAMPLE, "incomplete sample: " + sample.units() + " of " + wanted
+                    + " units in " + sheetFile + rowsRead + "; inspect and record " + (wanted - sample.units())
+                    + " more before sentencing (nothing was recorded)");
+        }
+        if (sample.units() > wanted) {
+            throw new Main.Failure(ExitCode.INCOMPLETE_SAMPLE, sheetFile + " holds " + sample.units() + " units"
+                    + (range[0] > 0 ? " in rows " + rows : "") + " but plan " + plan.name() + " samples " + wanted
+                    + "; name the sample's rows with --rows FIRST-LAST (nothing was recorded)");
+        }
+    }
+
+    private static String rowsOf(InspectionSample sample) {
+        String rows = "rows " + sample.firstRow() + " to " + sample.lastRow();
+        return sample.file().toString().toLowerCase(Locale.ROOT).endsWith(".csv") ? rows
+                : "sheet '" + sample.sheet() + "' " + rows;
+    }
+
+    private static String where(InspectionSample sample, int row) {
+        return sample.file().toString().toLowerCase(Locale.ROOT).endsWith(".csv") ? "row " + row
+                : "sheet '" + sample.sheet() + "' row " + row;
+    }
+
+    /** The count each class of the plan is judged on, by the plan's model: units, or nonconformities. */
+    private Map<DefectClass, Integer> counts(SavedPlan plan, InspectionSample sample) {
+        boolean units = plan.model().countsUnits();
+        if (sample.passFail() && !units) {
+            throw new SheetException(sheetFile, "the sheet records pass or fail per unit, but plan " + plan.name()
+                    + " counts nonconformities (Poisson model); record counts per unit in critical, major or minor"
+                    + " columns");
+        }
+        if (sample.passFail() && !plan.unclassified()) {
+            throw new SheetException(sheetFile, "the sheet records pass or fail per unit, but plan " + plan.name()
+                    + " has criteria per defect class; record counts per unit in critical, major and minor columns");
+        }
+        if (!plan.unclassified()) {
+            for (ClassPlan criteria : plan.classes()) {
+                if (!sample.classColumns().contains(criteria.defectClass())) {
+                    throw new SheetException(sheetFile, "plan " + plan.name() + " has criteria for "
+                            + criteria.defectClass().label() + " but the sheet has no '" + criteria.defectClass().label()
+                            + "' column");
+                }
+            }
+            for (DefectClass recorded : sample.classColumns()) {
+                if (plan.criteria(recorded) == null && sample.all().nonconformingUnits(recorded) > 0) {
+                    throw new SheetException(sheetFile, "the sheet records " + recorded.label() + " nonconformities ("
+                            + sample.all().nonconformingUnits(recorded) + " units) but plan " + plan.name()
+                            + " has no criteria for " + recorded.label() + "; a plan must not judge a class it was not"
+                            + " designed for");
+                }
+            }
+        }
+        Map<DefectClass, Integer> found = new EnumMap<>(DefectClass.class);
+        for (ClassPlan criteria : plan.classes()) {
+            Tally tally = sample.tallies().get(criteria.plan().maxSampleSize());
+            long count = units ? tally.nonconformingUnits(criteria.defectClass())
+                    : tally.nonconformities(criteria.defectClass());
+            found.put(criteria.defectClass(), (int) Math.min(Integer.MAX_VALUE, count));
+        }
+        return found;
+    }
+
+    static String lotLine(LotDetails lot) {
+        List<String> parts = new ArrayList<>();
+        if (lot.supplier() != null) {
+            parts.add(lot.supplier());
+        }
+        if (lot.part() != null) {
+            parts.add("part " + lot.part());
+        }
+        if (lot.lotSize() > 0) {
+            parts.add(lot.lotSize() + " units");
+        }
+        if (lot.received() != null) {
+            parts.add("received " + lot.received());
+        }
+        return "lot " + lot.lot() + (parts.isEmpty() ? "" : " (" + String.join(", ", parts) + ")");
+    }
+
+    private void printText(PrintWriter out, LotDecision decision) {
+        Sentence sentence = decision.sentence();
+        InspectionSample sample = decision.sample();
+        if (decision.criticalFound()) {
+            out.println("!! CRITICAL NONCONFORMITY FOUND " + "!".repeat(50));
+            out.println("!! Quarantine this lot now. Follow the customer's requirements and local regulations for");
+            out.println("!! critical nonconformities, whatever the verdict below says. Sampling cannot clear a lot");
+            out.println("!! in which a critical nonconformity was found (" + where(sample, sample.firstCriticalRow())
+                    + ").");
+            out.println("!".repeat(83));
+            out.println();
+        }
+        out.println((sentence.accepted() ? "ACCEPT " : "REJECT ") + lotLine(decision.lot()));
+        out.println("  " + SentenceText.reason(decision));
+        out.println("  plan " + decision.plan().name() + " (fingerprint " + decision.plan().shortFingerprint() + "), "
+                + DesignCommand.modelLine(decision.plan().model(), decision.lot().lotSize()));
+        out.println("  sample of " + sample.units() + " units from " + sample.file() + ", " + rowsOf(sample));
+        out.println();
+        String what = decision.countsUnits() ? "nonconforming units" : "nonconformities";
+        out.printf("  %-9s %10s %7s %13s %10s  %s%n", "class", "inspected", "found", "accept up to", "reject at",
+                "verdict");
+        for (ClassVerdict verdict : sentence.classes()) {
+            out.printf("  %-9s %10d %7d %13d %10d  %s%n", verdict.defectClass().label(), verdict.inspected(),
+                    verdict.found(), verdict.acceptanceNumber(), verdict.rejectionNumber(),
+                    verdict.accepted() ? "accept" : "REJECT");
+        }
+        out.println("  (found: " + what + ")");
+        out.println();
+        out.println("  Evidence (exact)");
+        for (String line : SentenceText.evidenceLines(decision)) {
+            out.println("    " + line);
+        }
+        for (String notice : decision.notices()) {
+            if (!notice.startsWith("critical")) {
+                out.println();
+                out.println("  Note: " + notice + ".");
+            }
+        }
+        out.println();
+        out.println("  decided " + decision.decidedAt() + " by lotgate " + decision.toolVersion() + "; sheet sha256 "
+                + decision.sheetSha256());
+        if (record != null) {
+            out.println("  record saved to " + record);
+        }
+        for (Path report : reports) {
+            out.println("  report written to " + report);
+        }
+    }
+
+    private static String csv(LotDecision decision) {
+        List<List<Object>> rows = new ArrayList<>();
+        for (ClassVerdict verdict : decision.sentence().classes()) {
+            Evidence evidence = verdict.evidence();
+            rows.add(List.of(decision.lot().lot(), verdict.defectClass().label(), verdict.inspected(), verdict.found(),
+                    verdict.acceptanceNumber(), verdict.rejectionNumber(), verdict.accepted() ? "accept" : "reject",
+                    evidence.pValue(), evidence.lower(), evidence.upper(),
+                    evidence.lotUpperBound() >= 0 ? evidence.lotUpperBound() : "", decision.sentence().verdict(),
+                    decision.plan().fingerprint(), decision.sheetSha256()));
+        }
+        return Csv.table(List.of("lot", "class", "sampleSize", "found", "acceptanceNumber", "rejectionNumber",
+                "classVerdict", "pValueAtAql", "lowerBound", "upperBound", "lotUpperBound", "verdict", "planFingerprint",
+                "sheetSha256"), rows);
+    }
+}

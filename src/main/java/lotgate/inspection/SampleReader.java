@@ -1,0 +1,298 @@
+package lotgate.inspection;
+
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeMap;
+import lotgate.plan.DefectClass;
+
+/**
+ * Reads an inspection sheet into an {@link InspectionSample}: the first non-empty row is the header,
+ * each later non-blank row one inspected unit. Every bad value is refused with the cell it stands in.
+ */
+public final class SampleReader implements RowHandler {
+    /** Nonconforming units kept for reports; the counts cover all of them. */
+    public static final int KEPT_UNITS = 1000;
+    /** Distinct defect types kept; more are counted under "(other types)". */
+    private static final int KEPT_TYPES = 1000;
+
+    private final SheetSource source;
+    private final String sheet;
+    private final Columns columns;
+    private final int[] cutoffs;
+    private final int fromRow;
+    private final int toRow;
+
+    private int headerRow = -1;
+    private final List<String> headers = new ArrayList<>();
+    private Columns.Role[] roleByColumn = new Columns.Role[0];
+    private final Map<Columns.Role, Integer> columnByRole = new HashMap<>();
+    private boolean passFail;
+    private final Set<DefectClass> classColumns = EnumSet.noneOf(DefectClass.class);
+
+    private int units;
+    private int firstRow = -1;
+    private int lastRow = -1;
+    private final int[] unitCounts = new int[DefectClass.values().length];
+    private final long[] nonconformityCounts = new long[DefectClass.values().length];
+    private final Map<Integer, Tally> tallies = new TreeMap<>();
+    private final List<InspectedUnit> kept = new ArrayList<>();
+    private int nonconformingTotal;
+    private final Map<String, Integer> defectTypes = new LinkedHashMap<>();
+    private int firstCriticalRow = -1;
+    private final UnitIds unitIds = new UnitIds();
+    private final java.util.BitSet nonconformingRows = new java.util.BitSet();
+
+    /**
+     * @param sheet   the sheet to read, or null for the first sheet not named "lot"
+     * @param cutoffs the sample prefixes to count separately (each class's n)
+     * @param fromRow the first sheet row of the sample, or 0 for all rows after the header
+     * @param toRow   the last sheet row of the sample, or 0 for the end of the sheet
+     */
+    public SampleReader(SheetSource source, String sheet, Columns columns, int[] cutoffs, int fromRow, int toRow) {
+        this.source = source;
+        this.sheet = sheet != null ? sheet : defaultSheet(source);
+        this.columns = columns;
+        this.cutoffs = cutoffs.clone();
+        this.fromRow = fromRow;
+        this.toRow = toRow;
+    }
+
+    private static String defaultSheet(SheetSource source) {
+        List<String> names = source.sheetNames();
+        if (names.isEmpty()) {
+            throw new SheetException(source.file(), "the workbook has no sheets");
+        }
+        return names.stream().filter(n -> !n.equalsIgnoreCase(LotDetails.SHEET)).findFirst().orElse(names.get(0));
+    }
+
+    /** Reads the whole sheet and checks unit identifiers for repeats. */
+    public InspectionSample read() {
+        if (!source.sheetNames().contains(sheet)) {
+            throw new SheetException(source.file(), "no sheet named '" + sheet + "'; the sheets are "
+                    + XlsxSheets.quoted(source.sheetNames()));
+        }
+        source.read(sheet, this);
+        if (headerRow < 0) {
+            throw new SheetException(source.file(), where() + " is empty: there is no header row");
+        }
+        confirmRepeats();
+        return new InspectionSample(source.file(), sheet, headerRow, List.copyOf(headers), passFail,
+                Set.copyOf(classColumns), units, firstRow, lastRow, Map.copyOf(tallies),
+                new Tally(units, unitCounts, nonconformityCounts), List.copyOf(kept), nonconformingTotal,
+                Map.copyOf(defectTypes), firstCriticalRow, nonconformingRows);
+    }
+
+    private String where() {
+        return source.sheetNames().size() == 1 && source instanceof CsvSheets ? "the file" : "sheet '" + sheet + "'";
+    }
+
+    @Override
+    public void row(int row, List<Cell> cells) {
+        if (headerRow < 0) {
+            header(row, cells);
+            return;
+        }
+        if ((fromRow > 0 && row < fromRow) || (toRow > 0 && row > toRow)) {
+            return;
+        }
+        unit(row, cells);
+    }
+
+    private void header(int row, List<Cell> cells) {
+        headerRow = row;
+        if (fromRow > 0 && fromRow <= row) {
+            throw new SheetException(source.file(), "the sample rows start at " + fromRow + ", but the header is "
+                    + source.whereRow(sheet, row));
+        }
+        int width = cells.get(cells.size() - 1).column() + 1;
+        roleByColumn = new Columns.Role[width];
+        for (Cell cell : cells) {
+            headers.add(cell.text().trim());
+            Columns.Role role = columns.roleOf(cell.text());
+            if (role == null) {
+                continue;
+            }
+            Integer earlier = columnByRole.put(role, cell.column());
+            if (earlier != null) {
+                throw new SheetException(source.file(), "two columns are named '" + cell.text().trim() + "': "
+                        + source.where(sheet, row, earlier) + " and " + source.where(sheet, row, cell.column()));
+            }
+            roleByColumn[cell.column()] = role;
+        }
+        boolean result = columnByRole.containsKey(Columns.Role.RESULT);
+        for (Columns.Role role : new Columns.Role[] {Columns.Role.CRITICAL, Columns.Role.MAJOR, Columns.Role.MINOR}) {
+            if (columnByRole.containsKey(role)) {
+                classColumns.add(DefectClass.valueOf(role.name()));
+            }
+        }
+        if (!result && classColumns.isEmpty()) {
+            throw new SheetException(source.file(), "no '" + columns.nameOf(Columns.Role.RESULT) + "' column and no"
+                    + " defect class count columns (" + columns.nameOf(Columns.Role.CRITICAL) + ", "
+                    + columns.nameOf(Columns.Role.MAJOR) + ", " + columns.nameOf(Columns.Role.MINOR)
+                    + ") in the header, " + source.whereRow(sheet, row) + "; the headers found are "
+                    + String.join(", ", headers) + " (name your own with --columns, e.g. result=Outcome)");
+        }
+        if (result && !classColumns.isEmpty()) {
+            throw new SheetException(source.file(), "the header, " + source.whereRow(sheet, row) + ", has both a '"
+                    + columns.nameOf(Columns.Role.RESULT) + "' column and defect class count columns; keep one way of"
+                    + " recording");
+        }
+        passFail = result;
+    }
+
+    private void unit(int row, List<Cell> cells) {
+        String unit = "";
+        boolean failed = false;
+        boolean hasResult = false;
+        int critical = 0;
+        int major = 0;
+        int minor = 0;
+        String defect = "";
+        String note = "";
+        for (Cell cell : cells) {
+            Columns.Role role = cell.column() < roleByColumn.length ? roleByColumn[cell.column()] : null;
+            if (role == null) {
+                continue;
+            }
+            if (cell.kind() == Cell.Kind.FORMULA_WITHOUT_VALUE) {
+                throw bad(row, cell, "the formula " + cell.text() + " has no saved value; open the sheet in a"
+                        + " spreadsheet program, let it calculate, and save it");
+            }
+            if (cell.kind() == Cell.Kind.ERROR) {
+                throw bad(row, cell, "the cell holds the error " + cell.text());
+            }
+            switch (role) {
+                case UNIT -> unit = cell.text().trim();
+                case RESULT -> {
+                    String text = cell.text().trim().toLowerCase(Locale.ROOT);
+                    if (text.equals("pass")) {
+                        failed = false;
+                    } else if (text.equals("fail")) {
+                        failed = true;
+                    } else {
+                        throw bad(row, cell, columns.nameOf(role) + " '" + cell.text().trim()
+                                + "' is neither pass nor fail");
+                    }
+                    hasResult = true;
+                }
+                case CRITICAL -> critical = count(row, cell, role);
+                case MAJOR -> major = count(row, cell, role);
+                case MINOR -> minor = count(row, cell, role);
+                case DEFECT -> defect = cell.text().trim();
+                case NOTE -> note = cell.text().trim();
+                default -> {
+                }
+            }
+        }
+        if (passFail && !hasResult) {
+            int column = columnByRole.get(Columns.Role.RESULT);
+            throw new SheetException(source.file(), source.where(sheet, row, column) + ": no "
+                    + columns.nameOf(Columns.Role.RESULT) + " (pass or fail) for this unit");
+        }
+        if (!unit.isEmpty()) {
+            unitIds.add(unit, row);
+        }
+        if (firstRow < 0) {
+            firstRow = row;
+        }
+        lastRow = row;
+        boolean nonconforming;
+        if (passFail) {
+            nonconforming = failed;
+            if (failed) {
+                unitCounts[DefectClass.ANY.ordinal()]++;
+                nonconformityCounts[DefectClass.ANY.ordinal()]++;
+            }
+        } else {
+            add(DefectClass.CRITICAL, critical);
+            add(DefectClass.MAJOR, major);
+            add(DefectClass.MINOR, minor);
+            nonconforming = critical + major + minor > 0;
+            if (nonconforming) {
+                unitCounts[DefectClass.ANY.ordinal()]++;
+                nonconformityCounts[DefectClass.ANY.ordinal()] += (long) critical + major + minor;
+            }
+            if (critical > 0 && firstCriticalRow < 0) {
+                firstCriticalRow = row;
+            }
+        }
+        if (nonconforming) {
+            nonconformingTotal++;
+            nonconformingRows.set(row);
+            if (kept.size() < KEPT_UNITS) {
+                kept.add(new InspectedUnit(row, unit, true, critical, major, minor, defect, note));
+            }
+            if (!defect.isEmpty()) {
+                String type = defectTypes.size() < KEPT_TYPES || defectTypes.containsKey(defect)
+                        ? defect : "(other types)";
+                defectTypes.merge(type, 1, Integer::sum);
+            }
+        }
+        units++;
+        for (int cutoff : cutoffs) {
+            if (cutoff == units) {
+                tallies.put(cutoff, new Tally(units, unitCounts, nonconformityCounts));
+            }
+        }
+    }
+
+    private void add(DefectClass defectClass, int count) {
+        if (count > 0) {
+            unitCounts[defectClass.ordinal()]++;
+            nonconformityCounts[defectClass.ordinal()] += count;
+        }
+    }
+
+    private int count(int row, Cell cell, Columns.Role role) {
+        double value = cell.number();
+        if (cell.kind() == Cell.Kind.TEXT) {
+            try {
+                value = Double.parseDouble(cell.text().trim());
+            } catch (NumberFormatException e) {
+                value = Double.NaN;
+            }
+        }
+        if (cell.kind() == Cell.Kind.BOOLEAN || !(value >= 0) || value != Math.rint(value) || value > 1_000_000) {
+            throw bad(row, cell, columns.nameOf(role) + " count '" + cell.text().trim()
+                    + "' is not a whole number of 0 or more");
+        }
+        return (int) value;
+    }
+
+    private SheetException bad(int row, Cell cell, String problem) {
+        return new SheetException(source.file(), source.where(sheet, row, cell.column()) + ": " + problem);
+    }
+
+    /** Reads the suspected rows' identifiers again and refuses the first true repeat. */
+    private void confirmRepeats() {
+        List<UnitIds.Suspect> suspects = unitIds.suspects();
+        if (suspects.isEmpty()) {
+            return;
+        }
+        Map<Integer, String> wanted = new HashMap<>();
+        suspects.forEach(s -> wanted.put(s.earlierRow(), null));
+        int unitColumn = columnByRole.get(Columns.Role.UNIT);
+        source.read(sheet, (row, cells) -> {
+            if (wanted.containsKey(row)) {
+                for (Cell cell : cells) {
+                    if (cell.column() == unitColumn) {
+                        wanted.put(row, cell.text().trim());
+                    }
+                }
+            }
+        });
+        for (UnitIds.Suspect suspect : suspects) {
+            if (suspect.unit().equals(wanted.get(suspect.earlierRow()))) {
+                throw new SheetException(source.file(), "unit '" + suspect.unit() + "' appears twice, "
+                        + source.whereRow(sheet, suspect.earlierRow()) + " and row " + suspect.row()
+                        + "; each unit of the sample must be recorded once");
+            }
+        }
+    }
+}

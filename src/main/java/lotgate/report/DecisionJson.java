@@ -1,0 +1,106 @@
+package lotgate.report;
+
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.util.Map;
+import java.util.TreeMap;
+import lotgate.inspection.InspectionSample;
+import lotgate.inspection.LotDetails;
+import lotgate.plan.DefectClass;
+import lotgate.plan.PlanFormat;
+import lotgate.sentencing.ClassVerdict;
+import lotgate.sentencing.Evidence;
+import lotgate.sentencing.LotDecision;
+
+/**
+ * The decision record, "lotgate-decision" version 1: one JSON object with the verdict, the lot, the
+ * plan (its fingerprint and its whole content), the sheet's SHA-256, the counts and the evidence.
+ * {@code sentence --format json} prints it and {@code --record FILE} saves it.
+ */
+public final class DecisionJson {
+    public static final String FORMAT = "lotgate-decision";
+    public static final int VERSION = 1;
+
+    private DecisionJson() {
+    }
+
+    public static ObjectNode of(LotDecision decision) {
+        ObjectNode root = JsonNodeFactory.instance.objectNode();
+        root.put("format", FORMAT);
+        root.put("formatVersion", VERSION);
+        root.put("verdict", decision.sentence().verdict());
+        root.put("decidedAt", decision.decidedAt().toString());
+        ObjectNode tool = root.putObject("tool");
+        tool.put("name", "lotgate");
+        tool.put("version", decision.toolVersion());
+        LotDetails lot = decision.lot();
+        ObjectNode lotNode = root.putObject("lot");
+        lotNode.put("lot", lot.lot());
+        lotNode.put("supplier", lot.supplier());
+        lotNode.put("part", lot.part());
+        if (lot.lotSize() > 0) {
+            lotNode.put("lotSize", lot.lotSize());
+        } else {
+            lotNode.putNull("lotSize");
+        }
+        lotNode.put("received", lot.received() == null ? null : lot.received().toString());
+        lotNode.put("inspector", lot.inspector());
+        ObjectNode plan = root.putObject("plan");
+        plan.put("name", decision.plan().name());
+        plan.put("file", decision.planFile().toString());
+        plan.put("fingerprint", decision.plan().fingerprint());
+        plan.set("content", PlanFormat.json(decision.plan()));
+        InspectionSample sample = decision.sample();
+        ObjectNode sheet = root.putObject("sheet");
+        sheet.put("file", sample.file().toString());
+        sheet.put("sha256", decision.sheetSha256());
+        sheet.put("sheet", sample.sheet());
+        sheet.put("headerRow", sample.headerRow());
+        sheet.put("firstRow", sample.firstRow());
+        sheet.put("lastRow", sample.lastRow());
+        sheet.put("recording", sample.passFail() ? "pass-fail" : "class-counts");
+        root.put("sampleSize", sample.units());
+        root.put("counting", decision.countsUnits() ? "nonconforming units" : "nonconformities");
+        root.put("confidence", decision.confidence());
+        var classes = root.putArray("classes");
+        for (ClassVerdict verdict : decision.sentence().classes()) {
+            ObjectNode entry = classes.addObject();
+            entry.put("class", verdict.defectClass().label());
+            entry.put("sampleSize", verdict.inspected());
+            entry.put("found", verdict.found());
+            entry.put("acceptanceNumber", verdict.acceptanceNumber());
+            entry.put("rejectionNumber", verdict.rejectionNumber());
+            entry.put("verdict", verdict.accepted() ? "accept" : "reject");
+            Evidence evidence = verdict.evidence();
+            ObjectNode proof = entry.putObject("evidence");
+            proof.put("observed", evidence.observed());
+            proof.put("pValueAtAql", evidence.pValue());
+            proof.put("lowerBound", evidence.lower());
+            proof.put("upperBound", evidence.upper());
+            proof.put("interval", decision.countsUnits() ? "Clopper-Pearson" : "Garwood");
+            if (evidence.lotUpperBound() >= 0) {
+                proof.put("lotUpperBound", evidence.lotUpperBound());
+            }
+            proof.put("acceptanceAtObserved", evidence.acceptanceAtObserved());
+            proof.put("acceptanceAtAql", evidence.acceptanceAtAql());
+            proof.put("acceptanceAtLtpd", evidence.acceptanceAtLtpd());
+        }
+        ObjectNode counts = root.putObject("counts");
+        for (DefectClass defectClass : DefectClass.values()) {
+            if (defectClass == DefectClass.ANY ? true : sample.classColumns().contains(defectClass)) {
+                ObjectNode count = counts.putObject(defectClass.label());
+                count.put("nonconformingUnits", sample.all().nonconformingUnits(defectClass));
+                if (!sample.passFail()) {
+                    count.put("nonconformities", sample.all().nonconformities(defectClass));
+                }
+            }
+        }
+        ObjectNode types = root.putObject("defectTypes");
+        Map<String, Integer> sorted = new TreeMap<>(sample.defectTypes());
+        sorted.forEach(types::put);
+        root.put("criticalFound", decision.criticalFound());
+        var notices = root.putArray("notices");
+        decision.notices().forEach(notices::add);
+        return root;
+    }
+}

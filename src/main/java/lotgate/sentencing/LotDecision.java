@@ -1,0 +1,32 @@
+package lotgate.sentencing;
+
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.List;
+import lotgate.inspection.InspectionSample;
+import lotgate.inspection.LotDetails;
+import lotgate.plan.SavedPlan;
+
+/**
+ * Everything a lot's decision rests on, as it will be recorded: the lot, the plan and its file, the
+ * sample as read from the sheet and the sheet's SHA-256, the sentence, when and by which version.
+ *
+ * @param notices cautions and remarks printed with the decision (a critical nonconformity, a lot size
+ *                other than the plan's)
+ */
+public record LotDecision(LotDetails lot, SavedPlan plan, Path planFile, InspectionSample sample, String sheetSha256,
+        Sentence sentence, double confidence, Instant decidedAt, String toolVersion, List<String> notices) {
+    public LotDecision {
+        notices = List.copyOf(notices);
+    }
+
+    /** Whether the sample holds a critical nonconformity, whatever the plan says. */
+    public boolean criticalFound() {
+        return sample.firstCriticalRow() >= 0;
+    }
+
+    /** Whether counts are of nonconforming units (true) or of nonconformities under a Poisson plan. */
+    public boolean countsUnits() {
+        return plan.model().countsUnits();
+    }
+}

@@ -1,0 +1,190 @@
+package lotgate.demo;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import org.apache.poi.ss.usermodel.CellStyle;
+import org.apache.poi.ss.usermodel.Row;
+import org.apache.poi.ss.usermodel.Sheet;
+import org.apache.poi.xssf.usermodel.XSSFWorkbook;
+
+/**
+ * Writes the demo's invented inspection sheets into demo-data/ (run it after changing them; the files
+ * are committed). Every company, part, person and count in them is invented.
+ */
+public final class DemoData {
+    private DemoData() {
+    }
+
+    public static void main(String[] args) throws IOException {
+        Path folder = Path.of(args.length > 0 ? args[0] : "demo-data");
+        Files.createDirectories(folder);
+        arnwickAccepted(folder.resolve("arnwick-af2611.xlsx"));
+        arnwickRejected(folder.resolve("arnwick-af2618.csv"));
+        kestruneCritical(folder.resolve("kestrune-kc0907.xlsx"));
+        mirelleDefects(folder.resolve("mirelle-ms1130.csv"));
+        mirelleMalformed(folder.resolve("mirelle-ms1204-malformed.xlsx"));
+    }
+
+    /** A row of cells: strings, numbers or null for an empty cell. */
+    public static List<Object> row(Object... cells) {
+        return java.util.Arrays.asList(cells);
+    }
+
+    public static void workbook(Path file, String sheetName, List<List<Object>> rows, Map<String, Object> lot)
+            throws IOException {
+        try (XSSFWorkbook workbook = new XSSFWorkbook()) {
+            fill(workbook.createSheet(sheetName), rows);
+            if (lot != null) {
+                Sheet details = workbook.createSheet("lot");
+                CellStyle date = workbook.createCellStyle();
+                date.setDataFormat(workbook.getCreationHelper().createDataFormat().getFormat("yyyy-mm-dd"));
+                int r = 0;
+                for (Map.Entry<String, Object> entry : lot.entrySet()) {
+                    Row row = details.createRow(r++);
+                    row.createCell(0).setCellValue(entry.getKey());
+                    Object value = entry.getValue();
+                    if (value instanceof LocalDate day) {
+                        row.createCell(1).setCellValue(day);
+                        row.getCell(1).setCellStyle(date);
+                    } else if (value instanceof Number number) {
+                        row.createCell(1).setCellValue(number.doubleValue());
+                    } else {
+                        row.createCell(1).setCellValue(value.toString());
+                    }
+                }
+            }
+            try (OutputStream out = Files.newOutputStream(file)) {
+                workbook.write(out);
+            }
+        }
+    }
+
+    public static void fill(Sheet sheet, List<List<Object>> rows) {
+        for (int r = 0; r < rows.size(); r++) {
+            Row row = sheet.createRow(r);
+            List<Object> cells = rows.get(r);
+            for (int c = 0; c < cells.size(); c++) {
+                Object value = cells.get(c);
+                if (value instanceof Number number) {
+                    row.createCell(c).setCellValue(number.doubleValue());
+                } else if (value != null) {
+                    row.createCell(c).setCellValue(value.toString());
+                }
+            }
+        }
+    }
+
+    public static void csv(Path file, char separator, boolean bom, List<List<Object>> rows) throws IOException {
+        StringBuilder text = new StringBuilder(bom ? "\uFEFF" : "");
+        for (List<Object> row : rows) {
+            List<String> cells = new ArrayList<>();
+            for (Object cell : row) {
+                String value = cell == null ? "" : cell.toString();
+                cells.add(value.indexOf(separator) >= 0 || value.contains("\"") ? "\"" + value.replace("\"", "\"\"")
+                        + "\"" : value);
+            }
+            text.append(String.join(String.valueOf(separator), cells)).append("\r\n");
+        }
+        Files.writeString(file, text.toString(), StandardCharsets.UTF_8);
+    }
+
+    private static Map<String, Object> lot(String id, String supplier, String part, int size, LocalDate received,
+            String inspector) {
+        Map<String, Object> lot = new java.util.LinkedHashMap<>();
+        lot.put("lot", id);
+        lot.put("supplier", supplier);
+        lot.put("part", part);
+        lot.put("lot size", size);
+        lot.put("received", received);
+        lot.put("inspector", inspector);
+        return lot;
+    }
+
+    /** Arnwick lot AF-2611: 132 bolts, 2 fail; the plan accepts up to 3. */
+    static void arnwickAccepted(Path file) throws IOException {
+        List<List<Object>> rows = new ArrayList<>();
+        rows.add(row("unit", "result", "defect", "note"));
+        for (int i = 1; i <= 132; i++) {
+            String unit = String.format("AF2611-%03d", i);
+            if (i == 17) {
+                rows.add(row(unit, "fail", "thread damage", "first two threads crushed"));
+            } else if (i == 88) {
+                rows.add(row(unit, "fail", "head burr", null));
+            } else {
+                rows.add(row(unit, "pass", null, null));
+            }
+        }
+        workbook(file, "Sample", rows, lot("AF-2611", "Arnwick Fasteners (invented)", "AF-M8-40", 5000,
+                LocalDate.of(2026, 11, 3), "D. Varga (invented)"));
+    }
+
+    /** Arnwick lot AF-2618: 132 bolts, 6 fail; semicolon-separated CSV with a byte-order mark. */
+    static void arnwickRejected(Path file) throws IOException {
+        List<List<Object>> rows = new ArrayList<>();
+        rows.add(row("unit", "result", "defect", "note"));
+        Map<Integer, String> fails = Map.of(9, "thread damage", 31, "plating missing", 47, "thread damage",
+                76, "head burr", 102, "plating missing", 118, "thread damage");
+        for (int i = 1; i <= 132; i++) {
+            String defect = fails.get(i);
+            rows.add(row(String.format("AF2618-%03d", i), defect == null ? "pass" : "fail", defect, null));
+        }
+        csv(file, ';', true, rows);
+        String stem = file.getFileName().toString().replace(".csv", ".lot.csv");
+        csv(file.resolveSibling(stem), ';', true, List.of(row("lot", "AF-2618"),
+                row("supplier", "Arnwick Fasteners (invented)"), row("part", "AF-M8-40"), row("lot size", 5000),
+                row("received", "2026-11-17"), row("inspector", "D. Varga (invented)")));
+    }
+
+    /** Kestrune lot KC-0907: 175 housings by defect class, one with bore porosity (critical). */
+    static void kestruneCritical(Path file) throws IOException {
+        List<List<Object>> rows = new ArrayList<>();
+        rows.add(row("unit", "critical", "major", "minor", "defect", "note"));
+        for (int i = 1; i <= 175; i++) {
+            String unit = String.format("KC0907-%03d", i);
+            if (i == 41) {
+                rows.add(row(unit, 1, 0, 0, "bore porosity", "pores in the seal bore, sent to the laboratory"));
+            } else if (i == 12) {
+                rows.add(row(unit, 0, 1, 0, "flange out of flat", null));
+            } else if (i == 5 || i == 60 || i == 140) {
+                rows.add(row(unit, 0, 0, i == 60 ? 2 : 1, "casting flash", null));
+            } else {
+                rows.add(row(unit, 0, 0, 0, null, null));
+            }
+        }
+        workbook(file, "Sample", rows, lot("KC-0907", "Kestrune Castings (invented)", "KC-114", 400,
+                LocalDate.of(2026, 11, 10), "M. Osei (invented)"));
+    }
+
+    /** Mirelle lot MS-1130: 84 O-rings, surface nonconformities counted per ring (Poisson plan, c = 3). */
+    static void mirelleDefects(Path file) throws IOException {
+        List<List<Object>> rows = new ArrayList<>();
+        rows.add(row("unit", "minor", "defect"));
+        for (int i = 1; i <= 84; i++) {
+            int count = i == 23 ? 2 : i == 70 ? 1 : 0;
+            rows.add(row(String.format("MS1130-%02d", i), count, count > 0 ? "surface blemish" : null));
+        }
+        csv(file, ',', false, rows);
+        String stem = file.getFileName().toString().replace(".csv", ".lot.csv");
+        csv(file.resolveSibling(stem), ',', false, List.of(row("lot", "MS-1130"),
+                row("supplier", "Mirelle Seals (invented)"), row("part", "MS-22"), row("lot size", 10000),
+                row("received", "2026-11-30"), row("inspector", "D. Varga (invented)")));
+    }
+
+    /** Mirelle lot MS-1204: a count typed as a word, which sentencing refuses by its cell. */
+    static void mirelleMalformed(Path file) throws IOException {
+        List<List<Object>> rows = new ArrayList<>();
+        rows.add(row("unit", "minor", "defect"));
+        for (int i = 1; i <= 84; i++) {
+            rows.add(row(String.format("MS1204-%02d", i), i == 8 ? "two" : 0, i == 8 ? "surface blemish" : null));
+        }
+        workbook(file, "Sample", rows, lot("MS-1204", "Mirelle Seals (invented)", "MS-22", 10000,
+                LocalDate.of(2026, 12, 4), "D. Varga (invented)"));
+    }
+}
