@@ -131,11 +131,6 @@ final class SentenceCommand implements Runnable {
         checkSampleSize(plan, sample, range);
         Map<DefectClass, Integer> found = counts(plan, sample);
         Sentence sentence = Sentencer.sentence(plan, found, lot.lotSize(), confidence);
-        if (sample.firstCriticalRow() >= 0) {
-            notices.add(0, "critical nonconformity found (" + where(sample, sample.firstCriticalRow()) + "): quarantine"
-                    + " the lot and follow the customer's requirements and local regulations for critical"
-                    + " nonconformities, whatever the plan's verdict");
-        }
         LotDecision decision = new LotDecision(lot, plan, planFile, sample, Sha256.of(sheetFile), sentence, confidence,
                 Instant.now().truncatedTo(ChronoUnit.SECONDS), Version.number(), notices);
         for (Path report : reports) {
@@ -351,10 +346,8 @@ final class SentenceCommand implements Runnable {
             out.println("    " + line);
         }
         for (String notice : decision.notices()) {
-            if (!notice.startsWith("critical")) {
-                out.println();
-                out.println("  Note: " + notice + ".");
-            }
+            out.println();
+            out.println("  Note: " + notice + ".");
         }
         out.println();
         out.println("  decided " + decision.decidedAt() + " by lotgate " + decision.toolVersion() + "; sheet sha256 "

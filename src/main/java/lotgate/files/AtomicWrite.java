@@ -6,6 +6,10 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.attribute.PosixFileAttributeView;
+import java.nio.file.attribute.PosixFilePermission;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.util.Set;
 
 /** Writes a file so that readers see either the old content or the whole new content, never a part. */
 public final class AtomicWrite {
@@ -34,6 +38,7 @@ public final class AtomicWrite {
                 Files.createDirectories(folder);
             }
             temporary = Files.createTempFile(folder, "." + absolute.getFileName(), ".part");
+            shareable(temporary, absolute);
             try (OutputStream out = Files.newOutputStream(temporary)) {
                 content.writeTo(out);
             }
@@ -54,6 +59,19 @@ public final class AtomicWrite {
                 }
             }
         }
+    }
+
+    /**
+     * Temporary files are private; the file they become keeps the target's permissions, or is readable
+     * by everyone like any file a user saves (plans and records are shared).
+     */
+    private static void shareable(Path temporary, Path target) throws IOException {
+        if (!Files.getFileStore(temporary).supportsFileAttributeView(PosixFileAttributeView.class)) {
+            return;
+        }
+        Set<PosixFilePermission> permissions = Files.exists(target) ? Files.getPosixFilePermissions(target)
+                : PosixFilePermissions.fromString("rw-r--r--");
+        Files.setPosixFilePermissions(temporary, permissions);
     }
 
     public static void writeString(Path target, String text) {

@@ -99,6 +99,9 @@ public final class DecisionJson {
         Map<String, Integer> sorted = new TreeMap<>(sample.defectTypes());
         sorted.forEach(types::put);
         root.put("criticalFound", decision.criticalFound());
+        if (decision.criticalFound()) {
+            root.put("criticalNotice", decision.criticalNotice());
+        }
         var notices = root.putArray("notices");
         decision.notices().forEach(notices::add);
         return root;

@@ -11,6 +11,7 @@ import lotgate.sentencing.ClassVerdict;
 import lotgate.sentencing.Evidence;
 import lotgate.sentencing.LotDecision;
 import org.jfree.svg.SVGGraphics2D;
+import org.jfree.svg.ViewBox;
 
 /**
  * The lot report as one self-contained HTML page (styles and the OC chart inline, as SVG) that prints
@@ -18,7 +19,7 @@ import org.jfree.svg.SVGGraphics2D;
  */
 final class LotReportHtml {
     /** Nonconforming units listed on the page; the counts cover all. */
-    private static final int LISTED = 25;
+    private static final int LISTED = 12;
 
     private LotReportHtml() {
     }
@@ -62,9 +63,10 @@ final class LotReportHtml {
                 .append("table { border-collapse: collapse; margin: 4pt 0 8pt; }\n")
                 .append("td, th { border-bottom: 1px solid #ccc; padding: 2pt 6pt; text-align: left; }\n")
                 .append("th { background: #f0f0f0; } td.n { text-align: right; }\n")
-                .append(".facts td:first-child { font-weight: bold; width: 34mm; }\n")
+                .append(".facts td:nth-child(odd) { font-weight: bold; }\n")
                 .append("svg { width: 100%; height: auto; } .small { font-size: 8pt; color: #555; }\n")
                 .append("pre { font: inherit; margin: 0; white-space: pre-wrap; }\n")
+                .append("@media print { body { font-size: 8pt; } pre { font-size: 7.5pt; } svg { max-height: 58mm; } h1 { font-size: 12pt; } }\n")
                 .append("</style></head><body>\n");
         html.append("<h1>Lot ").append(escape(lot.lot())).append(" <span class=\"verdict\">")
                 .append(accepted ? "ACCEPT" : "REJECT").append("</span></h1>\n");
@@ -75,18 +77,15 @@ final class LotReportHtml {
                             + " critical nonconformities, whatever the verdict.</div>\n");
         }
         html.append("<table class=\"facts\">\n");
-        fact(html, "Supplier", lot.supplier());
-        fact(html, "Part", lot.part());
-        fact(html, "Lot size", lot.lotSize() > 0 ? Integer.toString(lot.lotSize()) : null);
-        fact(html, "Received", lot.received() == null ? null : lot.received().toString());
-        fact(html, "Inspector", lot.inspector());
-        fact(html, "Plan", decision.plan().name() + " (" + decision.plan().model().name() + " model)");
-        fact(html, "Plan fingerprint", decision.plan().fingerprint());
-        fact(html, "Sheet", sample.file().getFileName() + ", sheet " + sample.sheet() + ", rows " + sample.firstRow()
-                + " to " + sample.lastRow());
-        fact(html, "Sheet SHA-256", decision.sheetSha256());
-        fact(html, "Decided", decision.decidedAt() + " by lotgate " + decision.toolVersion());
-        html.append("</table>\n");
+        facts(html, "Supplier", lot.supplier(), "Plan", decision.plan().name() + " (" + decision.plan().model().name()
+                + " model)");
+        facts(html, "Part", lot.part(), "Sheet", sheetLine(sample));
+        facts(html, "Lot size", lot.lotSize() > 0 ? Integer.toString(lot.lotSize()) : null, "Decided",
+                decision.decidedAt() + " by lotgate " + decision.toolVersion());
+        facts(html, "Received", lot.received() == null ? null : lot.received().toString(), "Inspector",
+                lot.inspector());
+        html.append("</table>\n<p class=\"small\">Plan fingerprint ").append(escape(decision.plan().fingerprint()))
+                .append("<br>Sheet SHA-256 ").append(escape(decision.sheetSha256())).append("</p>\n");
         html.append("<table><tr><th>Class</th><th>Inspected</th><th>Found</th><th>Accept up to</th><th>Reject at</th>"
                 + "<th>Verdict</th><th>p-value at AQL</th><th>Interval</th></tr>\n");
         for (ClassVerdict verdict : decision.sentence().classes()) {
@@ -110,7 +109,7 @@ final class LotReportHtml {
         html.append("</pre>\n");
         SVGGraphics2D svg = new SVGGraphics2D(900, 430);
         LotReport.ocChart(decision).draw(svg, new java.awt.Rectangle(0, 0, 900, 430));
-        html.append(svg.getSVGElement()).append('\n');
+        html.append(svg.getSVGElement(null, false, new ViewBox(0, 0, 900, 430), null, null)).append('\n');
         if (!sample.nonconforming().isEmpty()) {
             html.append("<table><tr><th>Row</th><th>Unit</th>").append(sample.passFail() ? ""
                     : "<th>Critical</th><th>Major</th><th>Minor</th>").append("<th>Defect</th><th>Note</th></tr>\n");
@@ -145,7 +144,15 @@ final class LotReportHtml {
         return html.toString();
     }
 
-    private static void fact(StringBuilder html, String key, String value) {
-        html.append("<tr><td>").append(escape(key)).append("</td><td>").append(escape(value)).append("</td></tr>\n");
+    /** The sheet file, the sheet within it (workbooks only) and the sample's rows. */
+    static String sheetLine(InspectionSample sample) {
+        String file = sample.file().getFileName().toString();
+        String within = file.equals(sample.sheet()) ? "" : ", sheet " + sample.sheet();
+        return file + within + ", rows " + sample.firstRow() + " to " + sample.lastRow();
+    }
+
+    private static void facts(StringBuilder html, String key, String value, String otherKey, String otherValue) {
+        html.append("<tr><td>").append(escape(key)).append("</td><td>").append(escape(value)).append("</td><td>")
+                .append(escape(otherKey)).append("</td><td>").append(escape(otherValue)).append("</td></tr>\n");
     }
 }

@@ -145,8 +145,7 @@ final class LotReportXlsx {
         pair(sheet, "Plan fingerprint", decision.plan().fingerprint());
         pair(sheet, "Model", decision.plan().model().name());
         InspectionSample sample = decision.sample();
-        pair(sheet, "Inspection sheet", sample.file().getFileName().toString() + ", sheet " + sample.sheet() + ", rows "
-                + sample.firstRow() + " to " + sample.lastRow());
+        pair(sheet, "Inspection sheet", LotReportHtml.sheetLine(sample));
         pair(sheet, "Sheet SHA-256", decision.sheetSha256());
         pair(sheet, "Decided", decision.decidedAt().toString() + " by lotgate " + decision.toolVersion());
         row++;

@@ -11,13 +11,20 @@ import lotgate.plan.SavedPlan;
  * Everything a lot's decision rests on, as it will be recorded: the lot, the plan and its file, the
  * sample as read from the sheet and the sheet's SHA-256, the sentence, when and by which version.
  *
- * @param notices cautions and remarks printed with the decision (a critical nonconformity, a lot size
- *                other than the plan's)
+ * @param notices remarks printed with the decision, such as a lot size other than the plan's (the
+ *                caution for a critical nonconformity is {@link #criticalNotice()})
  */
 public record LotDecision(LotDetails lot, SavedPlan plan, Path planFile, InspectionSample sample, String sheetSha256,
         Sentence sentence, double confidence, Instant decidedAt, String toolVersion, List<String> notices) {
     public LotDecision {
         notices = List.copyOf(notices);
+    }
+
+    /** The caution shown with any critical nonconformity, whatever the plan says. */
+    public String criticalNotice() {
+        return "critical nonconformity found (sheet row " + sample.firstCriticalRow() + "): quarantine the lot and"
+                + " follow the customer's requirements and local regulations for critical nonconformities, whatever"
+                + " the plan's verdict";
     }
 
     /** Whether the sample holds a critical nonconformity, whatever the plan says. */

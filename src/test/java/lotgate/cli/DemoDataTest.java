@@ -1,0 +1,23 @@
+package lotgate.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+/** The committed demo sheets give the verdicts the README and the demo show (invented data). */
+class DemoDataTest {
+
+    @ParameterizedTest(name = "{1}")
+    @CsvSource({
+            "plans/arnwick-af-m8-40.json, demo-data/arnwick-af2611.xlsx, 0",
+            "plans/arnwick-af-m8-40.json, demo-data/arnwick-af2618.csv, 1",
+            "plans/kestrune-kc-114-classes.json, demo-data/kestrune-kc0907.xlsx, 1",
+            "plans/mirelle-ms-22.json, demo-data/mirelle-ms1130.csv, 0",
+            "plans/mirelle-ms-22.json, demo-data/mirelle-ms1204-malformed.xlsx, 3",
+    })
+    void eachDemoLotGetsItsVerdict(String plan, String sheet, int exitCode) {
+        Cli.Result result = Cli.run("sentence", plan, sheet);
+        assertEquals(exitCode, result.exitCode(), result.out() + result.err());
+    }
+}
