@@ -68,12 +68,66 @@ final class DemoCommand implements Runnable {
                 "--description", "Invented demo: Mirelle Seals O-ring MS-22, surface nonconformities per unit");
         step(out, "5. The engineer checks a saved plan before handing it to the inspectors:",
                 "show", plans + "/arnwick-af-m8-40.json");
-        out.println("Demo done. Plans are in " + plans + " and charts in " + charts + ".");
-        out.println("Open " + charts + "/arnwick-af-m8-40.png to see the OC, AOQ and ATI curves together.");
+        step(out, "6. Kestrune's housings are judged per defect class: bore porosity is critical (zero acceptance),"
+                        + " dimensions major, casting flash minor.",
+                "design", "--model", "hypergeometric", "--lot-size", "400", "--class", "critical:c=0,aql=0.1%,ltpd=1%",
+                "--class", "major:aql=1%,ltpd=6%", "--class", "minor:aql=4%,ltpd=15%",
+                "--save", plans + "/kestrune-kc-114-classes.json", "--replace",
+                "--description", "Invented demo: Kestrune Castings impeller housing KC-114 by defect class");
+        String sheets = copySheets(out);
+        String reports = folder.resolve("reports").toString();
+        step(out, "7. At the receiving dock, the inspector sentences Arnwick lot AF-2611 from its inspection workbook"
+                        + " (the lot details are on its 'lot' sheet), with a report and a decision record:",
+                "sentence", plans + "/arnwick-af-m8-40.json", sheets + "/arnwick-af2611.xlsx",
+                "--report", reports + "/AF-2611.html", "--report", reports + "/AF-2611.xlsx",
+                "--record", reports + "/AF-2611.json");
+        step(out, "8. Lot AF-2618 comes as a semicolon-separated CSV with its details beside it; six bolts fail"
+                        + " (exit code 1: rejected):", ExitCode.REJECTED,
+                "sentence", plans + "/arnwick-af-m8-40.json", sheets + "/arnwick-af2618.csv",
+                "--report", reports + "/AF-2618.html");
+        step(out, "9. Kestrune lot KC-0907 holds a housing with bore porosity, a critical nonconformity:",
+                ExitCode.REJECTED, "sentence", plans + "/kestrune-kc-114-classes.json",
+                sheets + "/kestrune-kc0907.xlsx", "--report", reports + "/KC-0907.html");
+        step(out, "10. Mirelle's O-rings are counted in nonconformities: two rings carry three blemishes in all:",
+                "sentence", plans + "/mirelle-ms-22.json", sheets + "/mirelle-ms1130.csv");
+        step(out, "11. A sheet with a count typed as a word is refused by its cell (exit code 3), and nothing is"
+                        + " recorded:", ExitCode.BAD_INPUT,
+                "sentence", plans + "/mirelle-ms-22.json", sheets + "/mirelle-ms1204-malformed.xlsx");
+        out.println("Demo done. Plans are in " + plans + ", charts in " + charts + ", lot reports and records in "
+                + reports + ".");
+        out.println("Open " + charts + "/arnwick-af-m8-40.png for the OC, AOQ and ATI curves together, and "
+                + reports + "/KC-0907.html for a lot report.");
         out.flush();
     }
 
+    private static final String[] SHEETS = {"arnwick-af2611.xlsx", "arnwick-af2618.csv", "arnwick-af2618.lot.csv",
+            "kestrune-kc0907.xlsx", "mirelle-ms1130.csv", "mirelle-ms1130.lot.csv", "mirelle-ms1204-malformed.xlsx"};
+
+    /** Copies the invented inspection sheets that travel in the jar into the demo's folder. */
+    private String copySheets(PrintWriter out) {
+        Path target = folder.resolve("sheets");
+        for (String name : SHEETS) {
+            try (java.io.InputStream in = DemoCommand.class.getResourceAsStream("/lotgate/demo-data/" + name)) {
+                if (in == null) {
+                    throw new Main.Failure(ExitCode.INTERNAL, "the demo sheet " + name + " is missing from lotgate");
+                }
+                byte[] bytes = in.readAllBytes();
+                lotgate.files.AtomicWrite.write(target.resolve(name), o -> o.write(bytes));
+            } catch (java.io.IOException e) {
+                throw new Main.Failure(ExitCode.INTERNAL, "cannot read the demo sheet " + name + ": " + e.getMessage());
+            }
+        }
+        out.println("The invented inspection sheets of four lots are copied to " + target + " (the same as demo-data/"
+                + " in the repository).");
+        out.println();
+        return target.toString();
+    }
+
     private void step(PrintWriter out, String story, String... args) {
+        step(out, story, ExitCode.OK, args);
+    }
+
+    private void step(PrintWriter out, String story, int expected, String... args) {
         if (!story.isEmpty()) {
             out.println(story);
         }
@@ -85,10 +139,24 @@ final class DemoCommand implements Runnable {
         out.println();
         CommandLine cli = Main.commandLine();
         cli.setOut(out);
-        cli.setErr(spec.commandLine().getErr());
+        cli.setErr(new PrintWriter(new java.io.Writer() {
+            @Override
+            public void write(char[] text, int offset, int length) {
+                out.write(text, offset, length);
+            }
+
+            @Override
+            public void flush() {
+                out.flush();
+            }
+
+            @Override
+            public void close() {
+            }
+        }, true));
         int code = cli.execute(args);
         out.println();
-        if (code != ExitCode.OK) {
+        if (code != expected) {
             throw new Main.Failure(code, "the demo step 'lotgate " + String.join(" ", args) + "' failed");
         }
     }
