@@ -1,50 +1,65 @@
 package lotgate.bench;
 
 import java.util.Collection;
+import java.util.HashMap;
 import java.util.Map;
 import java.util.TreeMap;
 import org.openjdk.jmh.results.RunResult;
 import org.openjdk.jmh.runner.Runner;
 import org.openjdk.jmh.runner.RunnerException;
-import org.openjdk.jmh.runner.options.Options;
+import org.openjdk.jmh.runner.options.ChainedOptionsBuilder;
 import org.openjdk.jmh.runner.options.OptionsBuilder;
 import org.openjdk.jmh.runner.options.TimeValue;
 
 /**
  * Runs lotgate's benchmarks (mvn -Pbench -DskipTests verify) sized for a 2-core machine, and prints
- * each case's time against its baseline measured in the same run, as a ratio.
+ * each case against its baseline measured in the same run, as a ratio. An argument names the
+ * benchmarks to run (a regular expression, e.g. DesignBenchmark).
  */
 public final class BenchmarkMain {
     private BenchmarkMain() {
     }
 
     public static void main(String[] args) throws RunnerException {
-        String include = args.length > 0 ? args[0] : DesignBenchmark.class.getSimpleName();
-        Options options = new OptionsBuilder()
-                .include(include)
-                .forks(1)
-                .warmupIterations(3)
-                .warmupTime(TimeValue.seconds(1))
-                .measurementIterations(5)
-                .measurementTime(TimeValue.seconds(1))
-                .jvmArgs("-Xmx1g")
-                .build();
-        Collection<RunResult> results = new Runner(options).run();
-        Map<String, double[]> byCase = new TreeMap<>();
+        String include = args.length > 0 ? args[0] : "lotgate.bench.*Benchmark";
+        ChainedOptionsBuilder options = new OptionsBuilder().include(include);
+        if (include.contains("DesignBenchmark") || include.endsWith("*Benchmark")) {
+            // Design cases take milliseconds: short timed iterations. The sentencing benchmark sets its own.
+            options = options.warmupTime(TimeValue.seconds(1)).measurementTime(TimeValue.seconds(1));
+        }
+        Collection<RunResult> results = new Runner(options.build()).run();
+        Map<String, Double> scores = new HashMap<>();
+        Map<String, String> units = new HashMap<>();
         for (RunResult result : results) {
             String method = result.getParams().getBenchmark();
             String request = result.getParams().getParam("request");
-            double score = result.getPrimaryResult().getScore();
-            double[] pair = byCase.computeIfAbsent(request, k -> new double[2]);
-            pair[method.endsWith("naiveScan") ? 1 : 0] = score;
+            String key = method + (request == null ? "" : "|" + request);
+            scores.put(key, result.getPrimaryResult().getScore());
+            units.put(key, result.getPrimaryResult().getScoreUnit());
         }
         System.out.println();
-        System.out.println("Single-plan design: bisection search against the naive scan (ms per design, same run)");
-        System.out.printf("%-42s %14s %14s %12s%n", "case (model:aql:ltpd:lotSize)", "bisection", "naive scan",
-                "naive/fast");
-        for (Map.Entry<String, double[]> entry : byCase.entrySet()) {
-            double[] pair = entry.getValue();
-            System.out.printf("%-42s %14.3f %14.3f %11.0fx%n", entry.getKey(), pair[0], pair[1], pair[1] / pair[0]);
+        Map<String, double[]> design = new TreeMap<>();
+        scores.forEach((key, score) -> {
+            if (key.contains("DesignBenchmark")) {
+                String request = key.substring(key.indexOf('|') + 1);
+                design.computeIfAbsent(request, k -> new double[2])[key.contains("naiveScan|") ? 1 : 0] = score;
+            }
+        });
+        if (!design.isEmpty()) {
+            System.out.println("Single-plan design: bisection search against the naive scan (ms per design, same run)");
+            System.out.printf("%-42s %14s %14s %12s%n", "case (model:aql:ltpd:lotSize)", "bisection", "naive scan",
+                    "naive/fast");
+            design.forEach((request, pair) -> System.out.printf("%-42s %14.3f %14.3f %11.0fx%n", request, pair[0],
+                    pair[1], pair[1] / pair[0]));
+            System.out.println();
+        }
+        Double sentence = scores.get(SentencingBenchmark.class.getName() + ".sentence");
+        Double bare = scores.get(SentencingBenchmark.class.getName() + ".bareSaxPass");
+        if (sentence != null && bare != null) {
+            System.out.println("Sentencing a " + SentencingBenchmark.ROWS + "-row xlsx sheet with -Xmx256m (ms, same run)");
+            System.out.printf("%-44s %12.0f%n", "lotgate sentence (whole command)", sentence);
+            System.out.printf("%-44s %12.0f%n", "bare POI SAX pass counting cells", bare);
+            System.out.printf("%-44s %12.2f   (target: at most 1.30)%n", "ratio sentence / bare pass", sentence / bare);
         }
     }
 }

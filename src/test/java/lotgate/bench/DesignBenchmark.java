@@ -7,6 +7,9 @@ import lotgate.sampling.SingleDesign;
 import lotgate.sampling.SinglePlanDesigner;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Fork;
+import org.openjdk.jmh.annotations.Measurement;
+import org.openjdk.jmh.annotations.Warmup;
 import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Param;
@@ -18,6 +21,9 @@ import org.openjdk.jmh.annotations.State;
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
+@Fork(value = 1, jvmArgs = {"-Xmx1g"})
+@Warmup(iterations = 3)
+@Measurement(iterations = 5)
 public class DesignBenchmark {
 
     /** model:aql:ltpd:lotSize */
