@@ -75,7 +75,7 @@ public final class SampleReader implements RowHandler {
     public InspectionSample read() {
         if (!source.sheetNames().contains(sheet)) {
             throw new SheetException(source.file(), "no sheet named '" + sheet + "'; the sheets are "
-                    + XlsxSheets.quoted(source.sheetNames()));
+                    + SheetSource.quoted(source.sheetNames()));
         }
         source.read(sheet, this);
         if (headerRow < 0) {

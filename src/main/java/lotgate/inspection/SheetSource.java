@@ -23,11 +23,20 @@ public interface SheetSource {
     /** Streams the rows of a sheet (null: the first) to the handler. */
     void read(String sheet, RowHandler handler);
 
-    /** A position for messages: "sheet 'Sample' cell C17", or "row 17, column C" for CSV. */
-    String where(String sheet, int row, int column);
+    /** A position for messages: "sheet 'Sample' cell C17" ("row 17, column C" for CSV). */
+    default String where(String sheet, int row, int column) {
+        return "sheet '" + sheet + "' cell " + Cell.columnName(column) + row;
+    }
 
-    /** A row for messages: "sheet 'Sample' row 17", or "row 17" for CSV. */
-    String whereRow(String sheet, int row);
+    /** A row for messages: "sheet 'Sample' row 17" ("row 17" for CSV). */
+    default String whereRow(String sheet, int row) {
+        return "sheet '" + sheet + "' row " + row;
+    }
+
+    /** Sheet names for messages: 'Sample', 'lot'. */
+    static String quoted(List<String> names) {
+        return String.join(", ", names.stream().map(n -> "'" + n + "'").toList());
+    }
 
     /** Opens a file by its extension: .xlsx or .xlsm, .xls, or .csv. */
     static SheetSource open(Path file) {

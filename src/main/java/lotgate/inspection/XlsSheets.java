@@ -57,7 +57,7 @@ final class XlsSheets implements SheetSource {
             Sheet sheet = sheetName == null ? workbook.getSheetAt(0) : workbook.getSheet(sheetName);
             if (sheet == null) {
                 throw new SheetException(file, "no sheet named '" + sheetName + "'; the sheets are "
-                        + XlsxSheets.quoted(sheetNames()));
+                        + SheetSource.quoted(sheetNames()));
             }
             for (Row row : sheet) {
                 List<Cell> cells = new ArrayList<>();
@@ -86,15 +86,5 @@ final class XlsSheets implements SheetSource {
             case ERROR -> new Cell(column, Cell.Kind.ERROR, "#ERROR", Double.NaN);
             default -> null;
         };
-    }
-
-    @Override
-    public String where(String sheet, int row, int column) {
-        return "sheet '" + sheet + "' cell " + Cell.columnName(column) + row;
-    }
-
-    @Override
-    public String whereRow(String sheet, int row) {
-        return "sheet '" + sheet + "' row " + row;
     }
 }

@@ -119,22 +119,8 @@ final class XlsxSheets implements SheetSource {
                 }
             }
             throw new SheetException(file, seen.isEmpty() ? "the workbook has no sheets"
-                    : "no sheet named '" + sheet + "'; the sheets are " + quoted(seen));
+                    : "no sheet named '" + sheet + "'; the sheets are " + SheetSource.quoted(seen));
         });
-    }
-
-    static String quoted(List<String> names) {
-        return String.join(", ", names.stream().map(n -> "'" + n + "'").toList());
-    }
-
-    @Override
-    public String where(String sheet, int row, int column) {
-        return "sheet '" + sheet + "' cell " + Cell.columnName(column) + row;
-    }
-
-    @Override
-    public String whereRow(String sheet, int row) {
-        return "sheet '" + sheet + "' row " + row;
     }
 
     /** SAX handler for one worksheet part: rows, cells, values, inline strings and formulas. */

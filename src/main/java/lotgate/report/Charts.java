@@ -134,10 +134,7 @@ public final class Charts {
 
     private static XYPlot aoqPlot(boolean perUnit, ChartCurve curve, double aoql, double aoqlAt, boolean legend) {
         XYSeriesCollection data = new XYSeriesCollection(series(curve, CurvePoint::aoq));
-        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
-        renderer.setSeriesVisibleInLegend(0, legend);
-        renderer.setSeriesPaint(0, PALETTE[0]);
-        renderer.setSeriesStroke(0, new BasicStroke(2f));
+        XYLineAndShapeRenderer renderer = lines(PALETTE[0], legend);
         String outgoing = perUnit ? "Average outgoing quality (per 100 units)" : "Average outgoing quality";
         XYPlot plot = new XYPlot(data, qualityAxisOf(perUnit), percentAxis(outgoing), renderer);
         ValueMarker limit = new ValueMarker(aoql, PALETTE[1], new BasicStroke(1.2f, BasicStroke.CAP_BUTT,
@@ -153,10 +150,7 @@ public final class Charts {
 
     private static XYPlot atiPlot(boolean perUnit, ChartCurve curve, int sampleSize, int lotSize, boolean legend) {
         XYSeriesCollection data = new XYSeriesCollection(series(curve, CurvePoint::ati));
-        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
-        renderer.setSeriesVisibleInLegend(0, legend);
-        renderer.setSeriesPaint(0, PALETTE[2]);
-        renderer.setSeriesStroke(0, new BasicStroke(2f));
+        XYLineAndShapeRenderer renderer = lines(PALETTE[2], legend);
         NumberAxis units = new NumberAxis("Units inspected per lot");
         units.setRange(0, lotSize * 1.05);
         XYPlot plot = new XYPlot(data, qualityAxisOf(perUnit), units, renderer);
@@ -169,6 +163,15 @@ public final class Charts {
             plot.addRangeMarker(marker);
         }
         return style(plot);
+    }
+
+    /** A renderer drawing one series as a 2-point-wide line of the given colour. */
+    private static XYLineAndShapeRenderer lines(Color colour, boolean legend) {
+        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
+        renderer.setSeriesVisibleInLegend(0, legend);
+        renderer.setSeriesPaint(0, colour);
+        renderer.setSeriesStroke(0, new BasicStroke(2f));
+        return renderer;
     }
 
     private static XYSeries series(ChartCurve curve, ToDoubleFunction<CurvePoint> value) {

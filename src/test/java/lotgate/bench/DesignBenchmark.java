@@ -1,6 +1,7 @@
 package lotgate.bench;
 
 import java.util.concurrent.TimeUnit;
+import lotgate.sampling.BruteForce;
 import lotgate.sampling.OcModel;
 import lotgate.sampling.RiskPoints;
 import lotgate.sampling.SingleDesign;
@@ -49,24 +50,8 @@ public class DesignBenchmark {
 
     @Benchmark
     public int naiveScan() {
-        return naiveSmallestSample(model, points);
+        int limit = model.lotSize() > 0 ? model.lotSize() : SinglePlanDesigner.MAX_SAMPLE_SIZE;
+        return BruteForce.smallestSample(model, points, limit);
     }
 
-    /** The baseline: every n from 1 upward, and at each n the acceptance numbers upward. */
-    static int naiveSmallestSample(OcModel model, RiskPoints points) {
-        double aqlPoint = model.producerPoint(points.aql());
-        double ltpdPoint = model.consumerPoint(points.ltpd());
-        int limit = model.lotSize() > 0 ? model.lotSize() : SinglePlanDesigner.MAX_SAMPLE_SIZE;
-        for (int n = 1; n <= limit; n++) {
-            for (int c = 0; c < n; c++) {
-                if (model.moreThan(n, c, aqlPoint) <= points.alpha()) {
-                    if (model.atMost(n, c, ltpdPoint) <= points.beta()) {
-                        return n;
-                    }
-                    break;
-                }
-            }
-        }
-        return -1;
-    }
 }

@@ -34,30 +34,12 @@ class SamplingProperties {
                 new Case(m, m.equals("hypergeometric") ? n : 0, new RiskPoints(a, al, Math.min(0.9, a * r), be)));
     }
 
-    /** The smallest n that meets both risks with some c, found by trying every n from 1 upward. */
-    private static int bruteForceSmallestSample(OcModel model, RiskPoints points, int limit) {
-        double aqlPoint = model.producerPoint(points.aql());
-        double ltpdPoint = model.consumerPoint(points.ltpd());
-        for (int n = 1; n <= limit; n++) {
-            for (int c = 0; c < n; c++) {
-                if (model.moreThan(n, c, aqlPoint) <= points.alpha()) {
-                    // Larger c only raises the consumer's risk: this c decides n.
-                    if (model.atMost(n, c, ltpdPoint) <= points.beta()) {
-                        return n;
-                    }
-                    break;
-                }
-            }
-        }
-        return -1;
-    }
-
     @Property(tries = 150)
     void designedPlanMeetsBothRisksAndNoSmallerSampleDoes(@ForAll("requests") Case request) {
         OcModel model = request.oc();
         SingleDesign design = new SinglePlanDesigner(model, request.lotSize()).design(request.points());
         int limit = request.lotSize() > 0 ? request.lotSize() : 5000;
-        int oracle = bruteForceSmallestSample(model, request.points(), limit);
+        int oracle = BruteForce.smallestSample(model, request.points(), limit);
         if (design instanceof SingleDesign.Found found) {
             assertTrue(found.risks().meets(request.points()), "designed plan must meet both risks");
             if (found.plan().n() <= limit) {
