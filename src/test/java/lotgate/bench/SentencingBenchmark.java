@@ -49,7 +49,7 @@ import org.xml.sax.XMLReader;
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.SingleShotTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
-@Fork(value = 1, jvmArgs = {"-Xmx256m"})
+@Fork(value = 1, jvmArgs = {"-Xmx256m", "-Dlog4j.provider=org.apache.logging.log4j.simple.internal.SimpleProvider"})
 @Warmup(iterations = 1)
 @Measurement(iterations = 4)
 public class SentencingBenchmark {
