@@ -1,0 +1,55 @@
+package lotgate.history;
+
+/**
+ * The numbers of the switching rules between normal, tightened and reduced inspection, as a site
+ * chooses them. The two editions below follow the attribute-sampling standards (from memory):
+ *
+ * <ul>
+ * <li>{@link #CURRENT}: ISO 2859-1:1999 and ANSI/ASQ Z1.4-2003 — normal to tightened when 2 of 5 or
+ * fewer consecutive lots are not accepted on original inspection; tightened to normal after 5
+ * consecutive lots accepted; normal to reduced after 10 consecutive lots accepted with steady
+ * production (those editions add a switching score, which lotgate does not compute: a site that
+ * uses it sets {@code reduceDefectiveLimit} instead or leaves reduced inspection to its authority);
+ * reduced to normal on a lot not accepted or irregular production; discontinue when 5 lots are not
+ * accepted, cumulatively, while on tightened inspection.
+ * <li>{@link #OLDER}: MIL-STD-105D (1963) — the same, except that the move to reduced also asks that
+ * the nonconforming units found in the 10 lots stay within a limit number (a table of the standard;
+ * here a number the site sets), and that inspection is discontinued after 10 consecutive lots on
+ * tightened inspection.
+ * </ul>
+ *
+ * @param tightenRejected           lots not accepted that move normal to tightened...
+ * @param tightenWithin             ...among this many consecutive lots
+ * @param normalAfterAccepted       consecutive accepted lots that move tightened back to normal
+ * @param reduceAfterAccepted       consecutive accepted lots on normal that allow reduced inspection
+ * @param reduceDefectiveLimit      the most nonconforming units in those lots, or -1 for no limit
+ * @param discontinueRejected       lots not accepted, cumulatively, on tightened that discontinue
+ *                                  inspection, or -1 for none
+ * @param discontinueLotsOnTightened consecutive lots on tightened that discontinue inspection, or -1
+ */
+public record SwitchingRules(String edition, int tightenRejected, int tightenWithin, int normalAfterAccepted,
+        int reduceAfterAccepted, int reduceDefectiveLimit, int discontinueRejected, int discontinueLotsOnTightened) {
+
+    public static final SwitchingRules CURRENT = new SwitchingRules("current", 2, 5, 5, 10, -1, 5, -1);
+    public static final SwitchingRules OLDER = new SwitchingRules("older", 2, 5, 5, 10, -1, -1, 10);
+
+    public SwitchingRules {
+        if (tightenRejected < 1 || tightenWithin < tightenRejected || normalAfterAccepted < 1
+                || reduceAfterAccepted < 1) {
+            throw new IllegalArgumentException("switching rules need tightenRejected >= 1, tightenWithin >="
+                    + " tightenRejected, normalAfterAccepted >= 1 and reduceAfterAccepted >= 1");
+        }
+        if (discontinueRejected < 1 && discontinueLotsOnTightened < 1) {
+            throw new IllegalArgumentException("switching rules need a discontinuation rule: discontinueRejected or"
+                    + " discontinueLotsOnTightened");
+        }
+    }
+
+    public static SwitchingRules edition(String name) {
+        return switch (name) {
+            case "current" -> CURRENT;
+            case "older" -> OLDER;
+            default -> throw new IllegalArgumentException("unknown switching edition '" + name + "'; use current or older");
+        };
+    }
+}
