@@ -15,17 +15,13 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.time.Instant;
 import java.time.format.DateTimeParseException;
-import java.util.HexFormat;
 import java.util.Iterator;
 import java.util.List;
-import java.util.Map;
 import java.util.Set;
-import java.util.TreeMap;
 import lotgate.files.AtomicWrite;
+import lotgate.files.CanonicalJson;
 import lotgate.files.InputFileException;
 import lotgate.sampling.OcModel;
 import lotgate.sampling.Plan;
@@ -149,27 +145,7 @@ public final class PlanFormat {
     static String fingerprintOf(JsonNode root) {
         ObjectNode copy = root.deepCopy();
         copy.remove("fingerprint");
-        try {
-            byte[] canonical = JsonMapper.builder().build().writeValueAsBytes(sorted(copy));
-            byte[] digest = MessageDigest.getInstance("SHA-256").digest(canonical);
-            return "sha256:" + HexFormat.of().formatHex(digest);
-        } catch (JsonProcessingException | NoSuchAlgorithmException e) {
-            throw new IllegalStateException(e);
-        }
-    }
-
-    private static Object sorted(JsonNode node) {
-        if (node.isObject()) {
-            Map<String, Object> map = new TreeMap<>();
-            node.fields().forEachRemaining(e -> map.put(e.getKey(), sorted(e.getValue())));
-            return map;
-        }
-        if (node.isArray()) {
-            List<Object> list = new java.util.ArrayList<>();
-            node.forEach(element -> list.add(sorted(element)));
-            return list;
-        }
-        return node;
+        return "sha256:" + CanonicalJson.sha256(CanonicalJson.text(copy));
     }
 
     /**

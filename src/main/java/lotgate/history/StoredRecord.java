@@ -1,0 +1,26 @@
+package lotgate.history;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.time.Instant;
+
+/**
+ * One record of the store as written: its place in the chain, when it was written, its canonical
+ * content and the hashes that chain it to the record before.
+ */
+public record StoredRecord(long seq, Instant recordedAt, String content, String previousHash, String hash) {
+    private static final ObjectMapper JSON = new ObjectMapper();
+
+    public JsonNode json() {
+        try {
+            return JSON.readTree(content);
+        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+            throw new StoreException("record " + seq + " holds malformed content", e);
+        }
+    }
+
+    /** The chain's hash of a record: SHA-256 over the previous hash, the place, the time and the content. */
+    public static String hashOf(String previousHash, long seq, Instant recordedAt, String content) {
+        return lotgate.files.CanonicalJson.sha256(previousHash + "\n" + seq + "\n" + recordedAt + "\n" + content);
+    }
+}
