@@ -76,32 +76,62 @@ final class DemoCommand implements Runnable {
                 "--description", "Invented demo: Kestrune Castings impeller housing KC-114 by defect class");
         String sheets = copySheets(out);
         String reports = folder.resolve("reports").toString();
-        step(out, "7. At the receiving dock, the inspector sentences Arnwick lot AF-2611 from its inspection workbook"
-                        + " (the lot details are on its 'lot' sheet), with a report and a decision record:",
-                "sentence", plans + "/arnwick-af-m8-40.json", sheets + "/arnwick-af2611.xlsx",
+        String store = folder.resolve("history.sqlite").toString();
+        for (String leftover : new String[] {store, store + "-wal", store + "-shm"}) {
+            try {
+                java.nio.file.Files.deleteIfExists(Path.of(leftover));
+            } catch (java.io.IOException e) {
+                throw new Main.Failure(ExitCode.CANNOT_WRITE, "cannot remove the old demo store " + leftover);
+            }
+        }
+        step(out, "7. The quality engineer loads last year's receiving records (49 invented lots) into a fresh"
+                        + " history store:",
+                "import", sheets + "/lots-2025.csv", "--store", store);
+        step(out, "8. For Arnwick's bolts, a tightened and a reduced plan join the normal one as a plan family:",
+                "design", "--aql", "0.65%", "--ltpd", "4%", "--lot-size", "5000",
+                "--save", plans + "/arnwick-af-m8-40-tightened.json", "--replace", "--format", "csv");
+        step(out, "", "design", "--aql", "1%", "--ltpd", "8%", "--lot-size", "5000",
+                "--save", plans + "/arnwick-af-m8-40-reduced.json", "--replace", "--format", "csv");
+        step(out, "", "family", plans + "/arnwick-family.json", "--normal", plans + "/arnwick-af-m8-40.json",
+                "--tightened", plans + "/arnwick-af-m8-40-tightened.json", "--reduced",
+                plans + "/arnwick-af-m8-40-reduced.json", "--replace");
+        step(out, "9. At the receiving dock, the inspector sentences Arnwick lot AF-2611 from its inspection workbook"
+                        + " (the lot details are on its 'lot' sheet). The family applies the plan for Arnwick's current"
+                        + " severity, normal; a report and a decision record are written too:",
+                "sentence", plans + "/arnwick-family.json", sheets + "/arnwick-af2611.xlsx", "--store", store,
                 "--report", reports + "/AF-2611.html", "--report", reports + "/AF-2611.xlsx",
                 "--record", reports + "/AF-2611.json");
-        step(out, "8. Lot AF-2618 comes as a semicolon-separated CSV with its details beside it; six bolts fail"
-                        + " (exit code 1: rejected):", ExitCode.REJECTED,
-                "sentence", plans + "/arnwick-af-m8-40.json", sheets + "/arnwick-af2618.csv",
+        step(out, "10. Lot AF-2618 comes as a semicolon-separated CSV with its details beside it; six bolts fail"
+                        + " (exit code 1: rejected). It is the second rejected lot in five, so Arnwick's next lot goes"
+                        + " on tightened inspection:", ExitCode.REJECTED,
+                "sentence", plans + "/arnwick-family.json", sheets + "/arnwick-af2618.csv", "--store", store,
                 "--report", reports + "/AF-2618.html");
-        step(out, "9. Kestrune lot KC-0907 holds a housing with bore porosity, a critical nonconformity:",
+        step(out, "11. Kestrune lot KC-0907 holds a housing with bore porosity, a critical nonconformity:",
                 ExitCode.REJECTED, "sentence", plans + "/kestrune-kc-114-classes.json",
-                sheets + "/kestrune-kc0907.xlsx", "--report", reports + "/KC-0907.html");
-        step(out, "10. Mirelle's O-rings are counted in nonconformities: two rings carry three blemishes in all:",
-                "sentence", plans + "/mirelle-ms-22.json", sheets + "/mirelle-ms1130.csv");
-        step(out, "11. A sheet with a count typed as a word is refused by its cell (exit code 3), and nothing is"
+                sheets + "/kestrune-kc0907.xlsx", "--store", store, "--report", reports + "/KC-0907.html");
+        step(out, "12. Mirelle's O-rings are counted in nonconformities: two rings carry three blemishes in all."
+                        + " Mirelle earned reduced inspection last year, but its plan is a single plan, not a family, so"
+                        + " lotgate applies it and says so:",
+                "sentence", plans + "/mirelle-ms-22.json", sheets + "/mirelle-ms1130.csv", "--store", store);
+        step(out, "13. A sheet with a count typed as a word is refused by its cell (exit code 3), and nothing is"
                         + " recorded:", ExitCode.BAD_INPUT,
-                "sentence", plans + "/mirelle-ms-22.json", sheets + "/mirelle-ms1204-malformed.xlsx");
-        out.println("Demo done. Plans are in " + plans + ", charts in " + charts + ", lot reports and records in "
-                + reports + ".");
-        out.println("Open " + charts + "/arnwick-af-m8-40.png for the OC, AOQ and ATI curves together, and "
-                + reports + "/KC-0907.html for a lot report.");
+                "sentence", plans + "/mirelle-ms-22.json", sheets + "/mirelle-ms1204-malformed.xlsx", "--store", store);
+        step(out, "14. The supplier audit: Arnwick's year, with its switches of severity, in a workbook and a page:",
+                "supplier", "Arnwick Fasteners (invented)", "--store", store,
+                "--report", reports + "/arnwick-audit.xlsx", "--report", reports + "/arnwick-audit.html");
+        step(out, "15. All suppliers ranked; Quorrin's three lots leave it a wide interval:",
+                "suppliers", "--store", store, "--report", reports + "/ranking.html");
+        step(out, "16. Nothing in the history was altered or removed:", "verify", "--store", store);
+        out.println("Demo done. Plans are in " + plans + ", charts in " + charts + ", lot and audit reports in "
+                + reports + ", the history in " + folder.resolve("history.sqlite") + ".");
+        out.println("Open " + charts + "/arnwick-af-m8-40.png for the OC, AOQ and ATI curves together, "
+                + reports + "/KC-0907.html for a lot report and " + reports + "/arnwick-audit.xlsx for the audit.");
         out.flush();
     }
 
     private static final String[] SHEETS = {"arnwick-af2611.xlsx", "arnwick-af2618.csv", "arnwick-af2618.lot.csv",
-            "kestrune-kc0907.xlsx", "mirelle-ms1130.csv", "mirelle-ms1130.lot.csv", "mirelle-ms1204-malformed.xlsx"};
+            "kestrune-kc0907.xlsx", "mirelle-ms1130.csv", "mirelle-ms1130.lot.csv", "mirelle-ms1204-malformed.xlsx",
+            "lots-2025.csv"};
 
     /** Copies the invented inspection sheets that travel in the jar into the demo's folder. */
     private String copySheets(PrintWriter out) {
@@ -117,8 +147,8 @@ final class DemoCommand implements Runnable {
                 throw new Main.Failure(ExitCode.INTERNAL, "cannot read the demo sheet " + name + ": " + e.getMessage());
             }
         }
-        out.println("The invented inspection sheets of four lots are copied to " + target + " (the same as demo-data/"
-                + " in the repository).");
+        out.println("The invented inspection sheets of five lots and last year's lot list are copied to " + target
+                + " (the same as demo-data/ in the repository).");
         out.println();
         return target.toString();
     }

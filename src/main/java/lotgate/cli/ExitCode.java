@@ -16,6 +16,10 @@ public final class ExitCode {
     public static final int NO_PLAN = 5;
     /** An output file could not be written; nothing was left half-written. */
     public static final int CANNOT_WRITE = 6;
+    /** The history store cannot be opened or written, was altered, or is of a newer schema. */
+    public static final int STORE = 7;
+    /** Inspection of this supplier's part is discontinued until a corrective action is recorded. */
+    public static final int DISCONTINUED = 8;
     /** A fault in lotgate itself; rerun with --debug and report it. */
     public static final int INTERNAL = 70;
 

@@ -16,7 +16,8 @@ import picocli.CommandLine.Option;
                 + " and consumer's risks, study their OC, AOQ and ATI curves, and save them under plans/ so that"
                 + " every inspector applies the same plan.", ""},
         subcommands = {DesignCommand.class, CurveCommand.class, CompareCommand.class, ShowCommand.class,
-                SentenceCommand.class,
+                SentenceCommand.class, HistoryCommand.class, SupplierCommand.class, SuppliersCommand.class,
+                VerifyCommand.class, ActionCommand.class, ImportCommand.class, FamilyCommand.class,
                 DemoCommand.class, CommandLine.HelpCommand.class},
         footerHeading = "%nExit codes:%n",
         footer = {
@@ -27,6 +28,8 @@ import picocli.CommandLine.Option;
                 "   4  incomplete sample",
                 "   5  no sampling plan meets the request",
                 "   6  an output file cannot be written",
+                "   7  the history store cannot be used (unreachable, altered, or newer)",
+                "   8  inspection is discontinued until a corrective action is recorded",
                 "  70  internal fault (rerun with --debug)"})
 public final class Main implements Runnable {
     static {
@@ -96,6 +99,9 @@ public final class Main implements Runnable {
             message = e.getMessage();
         } else if (e instanceof OutputFileException) {
             code = ExitCode.CANNOT_WRITE;
+            message = e.getMessage();
+        } else if (e instanceof lotgate.history.StoreException) {
+            code = ExitCode.STORE;
             message = e.getMessage();
         } else if (e instanceof Failure f) {
             code = f.exitCode();

@@ -55,7 +55,9 @@ import picocli.CommandLine.Spec;
                 ""})
 final class SentenceCommand implements Runnable {
 
-    @Parameters(index = "0", paramLabel = "PLAN", description = "The saved plan file to apply (plans/*.json).")
+    @Parameters(index = "0", paramLabel = "PLAN",
+            description = "The saved plan file to apply (plans/*.json), or a plan family, whose variant for the"
+                    + " supplier's current inspection severity is applied.")
     Path planFile;
 
     @Parameters(index = "1", paramLabel = "SHEET", description = "The inspection sheet: .xlsx, .xls or .csv.")
@@ -102,8 +104,26 @@ final class SentenceCommand implements Runnable {
             description = "Confidence level of the bounds (default ${DEFAULT-VALUE}).")
     double confidence;
 
-    @Option(names = "--record", paramLabel = "FILE", description = "Save the decision record as JSON.")
+    @Option(names = "--record", paramLabel = "FILE", description = "Also save the decision record as a JSON file.")
     Path record;
+
+    @Option(names = "--no-record", description = "Do not add this lot to the history store (a trial run).")
+    boolean noRecord;
+
+    @Option(names = "--supersedes", paramLabel = "SEQ",
+            description = "This sentence corrects the history record SEQ (give --reason); the old record stays.")
+    Long supersedes;
+
+    @Option(names = "--reason", paramLabel = "TEXT", description = "Why this sentence corrects an earlier record.")
+    String reason;
+
+    @Option(names = "--production", paramLabel = "STEADY-OR-IRREGULAR", defaultValue = "steady",
+            description = "Whether the supplier's production was steady or irregular (default ${DEFAULT-VALUE});"
+                    + " irregular production ends reduced inspection.")
+    String production;
+
+    @Mixin
+    StoreOption storeOption;
 
     @Option(names = "--report", paramLabel = "FILE",
             description = "Write a lot report: .xlsx (summary, sample, OC chart) or .html (printable); repeatable.")
@@ -121,31 +141,76 @@ final class SentenceCommand implements Runnable {
         int[] range = rowRange();
         LotDetails given = givenDetails();
         Columns columns = columns();
-        SavedPlan plan = PlanFormat.read(planFile);
+        if (!production.equals("steady") && !production.equals("irregular")) {
+            throw new ParameterException(spec.commandLine(), "--production " + production + ": give steady or"
+                    + " irregular");
+        }
+        if ((supersedes == null) != (reason == null || reason.isBlank())) {
+            throw new ParameterException(spec.commandLine(), "--supersedes and --reason go together: a correction"
+                    + " names the record it corrects and why");
+        }
+        if (noRecord && supersedes != null) {
+            throw new ParameterException(spec.commandLine(), "--supersedes records a correction; it cannot go with"
+                    + " --no-record");
+        }
+        boolean family = lotgate.plan.PlanFamily.isFamily(planFile);
         SheetSource source = SheetSource.open(sheetFile);
         LotDetails lot = given.orElse(LotDetails.read(source, lotFile));
-        List<String> notices = new ArrayList<>();
-        lot = checkLot(lot, plan, notices);
-        int[] cutoffs = plan.classes().stream().mapToInt(c -> c.plan().maxSampleSize()).distinct().toArray();
-        InspectionSample sample = new SampleReader(source, sheet, columns, cutoffs, range[0], range[1]).read();
-        checkSampleSize(plan, sample, range);
-        Map<DefectClass, Integer> found = counts(plan, sample);
-        Sentence sentence = Sentencer.sentence(plan, found, lot.lotSize(), confidence);
-        LotDecision decision = new LotDecision(lot, plan, planFile, sample, Sha256.of(sheetFile), sentence, confidence,
-                Instant.now().truncatedTo(ChronoUnit.SECONDS), Version.number(), notices);
-        for (Path report : reports) {
-            LotReport.write(decision, report);
+        if ((!noRecord || family) && (lot.supplier() == null || lot.part() == null)) {
+            throw new ParameterException(spec.commandLine(), "give the lot's --supplier and --part (or put them in the"
+                    + " lot details) so that the lot joins its supplier's history, or sentence with --no-record");
         }
-        if (record != null) {
-            AtomicWrite.writeString(record, Json.text(DecisionJson.of(decision)) + "\n");
+        Inspection inspection = noRecord && !family ? null : Inspection.open(storeOption, planFile, family, lot,
+                supersedes);
+        Sentence sentence;
+        try {
+            SavedPlan plan = inspection == null ? PlanFormat.read(planFile) : inspection.plan();
+            List<String> notices = new ArrayList<>();
+            if (inspection != null && inspection.notice() != null) {
+                notices.add(inspection.notice());
+            }
+            lot = checkLot(lot, plan, notices);
+            int[] cutoffs = plan.classes().stream().mapToInt(c -> c.plan().maxSampleSize()).distinct().toArray();
+            InspectionSample sample = new SampleReader(source, sheet, columns, cutoffs, range[0], range[1]).read();
+            checkSampleSize(plan, sample, range);
+            Map<DefectClass, Integer> found = counts(plan, sample);
+            sentence = Sentencer.sentence(plan, found, lot.lotSize(), confidence);
+            Path appliedPlan = inspection == null ? planFile : inspection.planFile();
+            LotDecision decision = new LotDecision(lot, plan, appliedPlan, sample, Sha256.of(sheetFile), sentence,
+                    confidence, Instant.now().truncatedTo(ChronoUnit.SECONDS), Version.number(), notices);
+            Inspection.Recorded recorded = null;
+            if (inspection != null && !noRecord) {
+                recorded = inspection.record(decision, production, reason);
+            }
+            for (Path report : reports) {
+                LotReport.write(decision, report);
+            }
+            if (record != null) {
+                AtomicWrite.writeString(record, Json.text(DecisionJson.of(decision)) + "\n");
+            }
+            PrintWriter out = spec.commandLine().getOut();
+            switch (format.kind) {
+                case json -> {
+                    var node = DecisionJson.of(decision);
+                    if (inspection != null) {
+                        node.set("history", inspection.json(recorded));
+                    }
+                    out.println(Json.text(node));
+                }
+                case csv -> out.print(csv(decision));
+                case text -> {
+                    printText(out, decision);
+                    if (inspection != null) {
+                        inspection.printText(out, recorded);
+                    }
+                }
+            }
+            out.flush();
+        } finally {
+            if (inspection != null) {
+                inspection.close();
+            }
         }
-        PrintWriter out = spec.commandLine().getOut();
-        switch (format.kind) {
-            case json -> out.println(Json.text(DecisionJson.of(decision)));
-            case csv -> out.print(csv(decision));
-            case text -> printText(out, decision);
-        }
-        out.flush();
         if (!sentence.accepted()) {
             throw new Main.Failure(ExitCode.REJECTED, null);
         }

@@ -33,6 +33,8 @@ public final class HistoryStore implements AutoCloseable {
     private final String location;
     private final Connection connection;
     private final boolean postgres;
+    /** The schema version after migration, which decides the columns a record is written with. */
+    private int version;
 
     private HistoryStore(String location, Connection connection, boolean postgres) {
         this.location = location;
@@ -162,6 +164,7 @@ public final class HistoryStore implements AutoCloseable {
                     update.executeUpdate();
                 }
             }
+            this.version = Math.max(version, targetVersion);
             return null;
         });
     }
@@ -184,8 +187,12 @@ public final class HistoryStore implements AutoCloseable {
      * @param content the record's content: kind, supplier, part, lot and the rest (see {@link RecordContent})
      */
     public StoredRecord append(ObjectNode content, Instant recordedAt) {
-        String text = CanonicalJson.text(content);
-        return transaction("record the lot", () -> {
+        return appendAll(List.of(content), recordedAt).get(0);
+    }
+
+    /** Appends several records in one transaction: all of them, or none. */
+    public List<StoredRecord> appendAll(List<ObjectNode> contents, Instant recordedAt) {
+        return transaction("record the lots", () -> {
             long last;
             String previous;
             try (Statement statement = connection.createStatement();
@@ -195,16 +202,22 @@ public final class HistoryStore implements AutoCloseable {
                 last = head.getLong(1);
                 previous = head.getString(2);
             }
-            long seq = last + 1;
-            String hash = StoredRecord.hashOf(previous, seq, recordedAt, text);
-            Migrations.insertRecord(connection, schemaVersion(), seq, recordedAt, text, content, previous, hash);
+            List<StoredRecord> stored = new ArrayList<>();
+            for (ObjectNode content : contents) {
+                String text = CanonicalJson.text(content);
+                long seq = ++last;
+                String hash = StoredRecord.hashOf(previous, seq, recordedAt, text);
+                Migrations.insertRecord(connection, version, seq, recordedAt, text, content, previous, hash);
+                stored.add(new StoredRecord(seq, recordedAt, text, previous, hash));
+                previous = hash;
+            }
             try (PreparedStatement update = connection.prepareStatement("UPDATE chain_head SET seq = ?, hash = ?"
                     + " WHERE id = 1")) {
-                update.setLong(1, seq);
-                update.setString(2, hash);
+                update.setLong(1, last);
+                update.setString(2, previous);
                 update.executeUpdate();
             }
-            return new StoredRecord(seq, recordedAt, text, previous, hash);
+            return stored;
         });
     }
 

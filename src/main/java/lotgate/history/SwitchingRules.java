@@ -45,6 +45,36 @@ public record SwitchingRules(String edition, int tightenRejected, int tightenWit
         }
     }
 
+    /** The rules a plan family names: an edition, with any of its numbers replaced by the site's. */
+    public static SwitchingRules fromJson(com.fasterxml.jackson.databind.JsonNode node) {
+        if (node == null || node.isNull() || node.isMissingNode()) {
+            return CURRENT;
+        }
+        SwitchingRules base = edition(node.path("edition").asText("current").split(" ")[0]);
+        return new SwitchingRules(node.path("edition").asText(base.edition()),
+                node.path("tightenRejected").asInt(base.tightenRejected()),
+                node.path("tightenWithin").asInt(base.tightenWithin()),
+                node.path("normalAfterAccepted").asInt(base.normalAfterAccepted()),
+                node.path("reduceAfterAccepted").asInt(base.reduceAfterAccepted()),
+                node.path("reduceDefectiveLimit").asInt(base.reduceDefectiveLimit()),
+                node.path("discontinueRejected").asInt(base.discontinueRejected()),
+                node.path("discontinueLotsOnTightened").asInt(base.discontinueLotsOnTightened()));
+    }
+
+    /** The rules as a plan family holds them. */
+    public com.fasterxml.jackson.databind.node.ObjectNode toJson() {
+        var node = com.fasterxml.jackson.databind.node.JsonNodeFactory.instance.objectNode();
+        node.put("edition", edition);
+        node.put("tightenRejected", tightenRejected);
+        node.put("tightenWithin", tightenWithin);
+        node.put("normalAfterAccepted", normalAfterAccepted);
+        node.put("reduceAfterAccepted", reduceAfterAccepted);
+        node.put("reduceDefectiveLimit", reduceDefectiveLimit);
+        node.put("discontinueRejected", discontinueRejected);
+        node.put("discontinueLotsOnTightened", discontinueLotsOnTightened);
+        return node;
+    }
+
     public static SwitchingRules edition(String name) {
         return switch (name) {
             case "current" -> CURRENT;

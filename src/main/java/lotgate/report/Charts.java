@@ -70,6 +70,70 @@ public final class Charts {
         return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, true));
     }
 
+    /**
+     * The p-chart: each lot's fraction nonconforming in receiving order, with the centre line and the
+     * 3-sigma limits for each lot's sample size.
+     */
+    public static JFreeChart pChart(String title, List<String> lots, double[] fraction, double[] centre,
+            double[] lower, double[] upper) {
+        XYSeriesCollection data = new XYSeriesCollection();
+        String[] names = {"Lot fraction nonconforming", "Centre (process average)", "Upper control limit",
+                "Lower control limit"};
+        double[][] values = {fraction, centre, upper, lower};
+        for (int s = 0; s < names.length; s++) {
+            XYSeries series = new XYSeries(names[s], false, true);
+            for (int i = 0; i < lots.size(); i++) {
+                series.add(i + 1, values[s][i]);
+            }
+            data.addSeries(series);
+        }
+        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
+        renderer.setSeriesShapesVisible(0, true);
+        renderer.setSeriesShape(0, new Rectangle2D.Double(-3, -3, 6, 6));
+        Color[] colours = {PALETTE[0], PALETTE[2], PALETTE[1], PALETTE[1]};
+        for (int s = 0; s < names.length; s++) {
+            renderer.setSeriesPaint(s, colours[s]);
+            renderer.setSeriesStroke(s, s == 0 ? new BasicStroke(1.5f) : new BasicStroke(1.2f, BasicStroke.CAP_BUTT,
+                    BasicStroke.JOIN_MITER, 10f, new float[] {5f, 3f}, 0f));
+        }
+        renderer.setSeriesVisibleInLegend(3, false);
+        NumberAxis order = new NumberAxis("Lot, in order received (1 = " + (lots.isEmpty() ? "" : lots.get(0)) + ")");
+        order.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
+        XYPlot plot = new XYPlot(data, order, percentAxis("Fraction nonconforming"), renderer);
+        return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, style(plot), true));
+    }
+
+    /** The Pareto chart: defect types as bars, most frequent first, with the cumulative share as a line. */
+    public static JFreeChart pareto(String title, List<String> types, long[] counts, double[] cumulative) {
+        org.jfree.data.category.DefaultCategoryDataset bars = new org.jfree.data.category.DefaultCategoryDataset();
+        org.jfree.data.category.DefaultCategoryDataset line = new org.jfree.data.category.DefaultCategoryDataset();
+        for (int i = 0; i < types.size(); i++) {
+            String label = types.get(i).length() > 24 ? types.get(i).substring(0, 23) + "~" : types.get(i);
+            bars.addValue(counts[i], "Nonconforming units", label + "​".repeat(i));
+            line.addValue(cumulative[i], "Cumulative share", label + "​".repeat(i));
+        }
+        org.jfree.chart.plot.CategoryPlot plot = new org.jfree.chart.plot.CategoryPlot(bars,
+                new org.jfree.chart.axis.CategoryAxis("Defect type"), new NumberAxis("Nonconforming units"),
+                new org.jfree.chart.renderer.category.BarRenderer());
+        plot.getRenderer().setSeriesPaint(0, PALETTE[0]);
+        ((org.jfree.chart.renderer.category.BarRenderer) plot.getRenderer()).setShadowVisible(false);
+        ((org.jfree.chart.renderer.category.BarRenderer) plot.getRenderer())
+                .setBarPainter(new org.jfree.chart.renderer.category.StandardBarPainter());
+        plot.setDataset(1, line);
+        plot.setRangeAxis(1, percentAxis("Cumulative share"));
+        plot.getRangeAxis(1).setRange(0, 1.05);
+        plot.mapDatasetToRangeAxis(1, 1);
+        org.jfree.chart.renderer.category.LineAndShapeRenderer cumulativeRenderer =
+                new org.jfree.chart.renderer.category.LineAndShapeRenderer();
+        cumulativeRenderer.setSeriesPaint(0, PALETTE[1]);
+        plot.setRenderer(1, cumulativeRenderer);
+        plot.setDatasetRenderingOrder(org.jfree.chart.plot.DatasetRenderingOrder.FORWARD);
+        plot.getDomainAxis().setCategoryLabelPositions(org.jfree.chart.axis.CategoryLabelPositions.UP_45);
+        plot.setBackgroundPaint(Color.WHITE);
+        plot.setRangeGridlinePaint(new Color(0xdd, 0xdd, 0xdd));
+        return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, true));
+    }
+
     /** Adds a line under the title, such as the model and lot size. */
     public static JFreeChart withSubtitle(JFreeChart chart, String subtitle) {
         TextTitle line = new TextTitle(subtitle, new Font(Font.SANS_SERIF, Font.PLAIN, 13));

@@ -30,6 +30,58 @@ public final class DemoData {
         kestruneCritical(folder.resolve("kestrune-kc0907.xlsx"));
         mirelleDefects(folder.resolve("mirelle-ms1130.csv"));
         mirelleMalformed(folder.resolve("mirelle-ms1204-malformed.xlsx"));
+        pastYear(folder.resolve("lots-2025.csv"));
+    }
+
+    /**
+     * An invented year of past lots: Arnwick slides into tightened inspection and recovers (and has a
+     * rejected lot near the end of the year), Mirelle earns
+     * reduced inspection, Kestrune has one rejected lot, and Quorrin Plastics has only three lots.
+     */
+    static void pastYear(Path file) throws IOException {
+        List<List<Object>> rows = new ArrayList<>();
+        rows.add(row("lot", "supplier", "part", "received", "lot size", "sample size", "acceptance number",
+                "nonconforming", "verdict", "defects", "production", "inspector"));
+        java.util.Random random = new java.util.Random(2025);
+        String[] boltDefects = {"thread damage", "head burr", "plating missing"};
+        int[] arnwick = {1, 0, 2, 1, 3, 5, 2, 4, 1, 0, 2, 1, 0, 1, 2, 0, 1, 3, 0, 1, 2, 1, 4, 1};
+        int[] mirelle = {0, 1, 0, 0, 2, 0, 1, 0, 0, 1, 0, 0};
+        int[] kestrune = {1, 0, 0, 3, 1, 0, 2, 0, 1, 0};
+        int[] quorrin = {2, 1, 4};
+        LocalDate start = LocalDate.of(2025, 1, 6);
+        int lots = Math.max(Math.max(arnwick.length, mirelle.length), Math.max(kestrune.length, quorrin.length));
+        for (int i = 0; i < lots; i++) {
+            LocalDate week = start.plusWeeks(2L * i);
+            if (i < arnwick.length) {
+                rows.add(pastLot(String.format("AF-25%02d", i + 1), "Arnwick Fasteners (invented)", "AF-M8-40", week,
+                        5000, 132, 3, arnwick[i], boltDefects, random));
+            }
+            if (i < mirelle.length) {
+                rows.add(pastLot(String.format("MS-25%02d", i + 1), "Mirelle Seals (invented)", "MS-22", week.plusDays(2),
+                        10000, 84, 3, mirelle[i], new String[] {"surface blemish", "flash"}, random));
+            }
+            if (i < kestrune.length) {
+                rows.add(pastLot(String.format("KC-25%02d", i + 1), "Kestrune Castings (invented)", "KC-114",
+                        week.plusDays(3), 400, 82, 2, kestrune[i], new String[] {"flange out of flat", "casting flash"},
+                        random));
+            }
+            if (i < quorrin.length) {
+                rows.add(pastLot(String.format("QP-25%02d", i + 1), "Quorrin Plastics (invented)", "QP-7", week.plusDays(4),
+                        2000, 125, 3, quorrin[i], new String[] {"short shot", "sink mark"}, random));
+            }
+        }
+        csv(file, ',', false, rows);
+    }
+
+    private static List<Object> pastLot(String lot, String supplier, String part, LocalDate received, int lotSize,
+            int n, int c, int found, String[] types, java.util.Random random) {
+        java.util.Map<String, Integer> defects = new java.util.TreeMap<>();
+        for (int k = 0; k < found; k++) {
+            defects.merge(types[random.nextInt(types.length)], 1, Integer::sum);
+        }
+        String list = String.join("; ", defects.entrySet().stream().map(e -> e.getKey() + ":" + e.getValue()).toList());
+        return row(lot, supplier, part, received.toString(), lotSize, n, c, found, found <= c ? "accept" : "reject",
+                list, "steady", "D. Varga (invented)");
     }
 
     /** A row of cells: strings, numbers or null for an empty cell. */

@@ -1,0 +1,213 @@
+package lotgate.cli;
+
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.time.LocalDate;
+import java.time.format.DateTimeParseException;
+import java.time.temporal.ChronoUnit;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import lotgate.history.HistoryStore;
+import lotgate.history.LotRow;
+import lotgate.history.RecordContent;
+import lotgate.history.Severity;
+import lotgate.history.SupplierHistory;
+import lotgate.history.SwitchingRules;
+import lotgate.inspection.Cell;
+import lotgate.inspection.SheetException;
+import lotgate.inspection.SheetSource;
+import org.apache.poi.ss.usermodel.DateUtil;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** Imports past lots from a spreadsheet or CSV into the history, all or nothing. */
+@Command(name = "import", mixinStandardHelpOptions = true, sortOptions = false, usageHelpAutoWidth = true,
+        header = "Import past lots into the history store, all or nothing.",
+        description = {"Reads one past lot per row under a header row (columns, any order: lot, supplier, part,"
+                + " received, sample size, nonconforming, verdict; optional: lot size, acceptance number, inspector,"
+                + " defects as 'type:count; type:count', production steady or irregular) and records them in the"
+                + " file's order in one transaction. Every row is checked first; one bad cell records nothing.", ""})
+final class ImportCommand implements Runnable {
+    @Parameters(index = "0", paramLabel = "FILE", description = "The list of past lots: .xlsx, .xls or .csv.")
+    Path file;
+
+    @Option(names = "--sheet", paramLabel = "NAME", description = "The workbook sheet (default: the first).")
+    String sheet;
+
+    @Mixin
+    StoreOption storeOption;
+
+    @Spec
+    CommandSpec spec;
+
+    private static final List<String> REQUIRED = List.of("lot", "supplier", "part", "received", "sample size",
+            "nonconforming", "verdict");
+    private static final List<String> OPTIONAL = List.of("lot size", "acceptance number", "inspector", "defects",
+            "production");
+
+    @Override
+    public void run() {
+        SheetSource source = SheetSource.open(file);
+        String sheetName = sheet != null ? sheet : source.sheetNames().get(0);
+        List<RecordContent.Lot> lots = new ArrayList<>();
+        Map<String, Integer> columns = new HashMap<>();
+        source.read(sheet, (row, cells) -> {
+            if (columns.isEmpty()) {
+                for (Cell cell : cells) {
+                    String name = cell.text().trim().toLowerCase(Locale.ROOT);
+                    if (REQUIRED.contains(name) || OPTIONAL.contains(name)) {
+                        columns.put(name, cell.column());
+                    }
+                }
+                for (String name : REQUIRED) {
+                    if (!columns.containsKey(name)) {
+                        throw new SheetException(file, "no '" + name + "' column in the header, "
+                                + source.whereRow(sheetName, row) + "; a list of past lots needs "
+                                + String.join(", ", REQUIRED));
+                    }
+                }
+                return;
+            }
+            lots.add(lot(source, sheetName, row, cells, columns));
+        });
+        if (lots.isEmpty()) {
+            throw new SheetException(file, "no lots to import below the header");
+        }
+        int written;
+        String location;
+        try (HistoryStore store = storeOption.open()) {
+            List<ObjectNode> contents = withSeverities(store, lots);
+            written = store.appendAll(contents, Instant.now().truncatedTo(ChronoUnit.MILLIS)).size();
+            location = store.location();
+        }
+        PrintWriter out = spec.commandLine().getOut();
+        out.println("Imported " + written + " lots from " + file + " into " + location + ".");
+        out.flush();
+    }
+
+    /** Each lot with the severity the switching rules had it under, continuing its part's recorded history. */
+    private static List<ObjectNode> withSeverities(HistoryStore store, List<RecordContent.Lot> lots) {
+        Map<String, List<LotRow>> histories = new LinkedHashMap<>();
+        List<ObjectNode> contents = new ArrayList<>();
+        long fake = -1;
+        for (RecordContent.Lot lot : lots) {
+            String key = lot.supplier() + "\u0000" + lot.part();
+            List<LotRow> rows = histories.computeIfAbsent(key, k -> new ArrayList<>(store.rows(lot.supplier(),
+                    lot.part())));
+            Severity severity = new SupplierHistory(rows, SwitchingRules.CURRENT).current();
+            RecordContent.Lot placed = new RecordContent.Lot(lot.supplier(), lot.part(), lot.lot(), lot.lotSize(),
+                    lot.received(), lot.inspector(), lot.verdict(), lot.inspected(), lot.nonconforming(),
+                    lot.defectTypes(), severity.label(), lot.production(), 0, null);
+            rows.add(new LotRow(fake--, Instant.EPOCH, "lot", lot.supplier(), lot.part(), lot.lot(), lot.lotSize(),
+                    lot.received(), lot.verdict(), lot.inspected(), lot.nonconforming(), severity.label(),
+                    lot.production(), 0));
+            contents.add(RecordContent.lot(placed, null, "import"));
+        }
+        return contents;
+    }
+
+    private RecordContent.Lot lot(SheetSource source, String sheetName, int row, List<Cell> cells,
+            Map<String, Integer> columns) {
+        Map<Integer, Cell> byColumn = new HashMap<>();
+        cells.forEach(c -> byColumn.put(c.column(), c));
+        java.util.function.Function<String, Cell> cell = name -> columns.containsKey(name)
+                ? byColumn.get(columns.get(name)) : null;
+        java.util.function.BiFunction<String, String, SheetException> bad = (name, problem) -> new SheetException(file,
+                source.where(sheetName, row, columns.get(name)) + ": " + problem);
+        for (String name : REQUIRED) {
+            if (cell.apply(name) == null) {
+                throw bad.apply(name, name + " is missing");
+            }
+        }
+        int inspected = whole(cell.apply("sample size"), 1, () -> bad.apply("sample size", "sample size '"
+                + cell.apply("sample size").text() + "' is not a whole number of 1 or more"));
+        int found = whole(cell.apply("nonconforming"), 0, () -> bad.apply("nonconforming", "nonconforming '"
+                + cell.apply("nonconforming").text() + "' is not a whole number of 0 or more"));
+        if (found > inspected) {
+            throw bad.apply("nonconforming", found + " nonconforming in a sample of " + inspected);
+        }
+        String verdict = cell.apply("verdict").text().trim().toLowerCase(Locale.ROOT);
+        if (!verdict.equals("accept") && !verdict.equals("reject")) {
+            throw bad.apply("verdict", "verdict '" + cell.apply("verdict").text().trim() + "' is neither accept nor reject");
+        }
+        Cell acceptance = cell.apply("acceptance number");
+        if (acceptance != null) {
+            int c = whole(acceptance, 0, () -> bad.apply("acceptance number", "acceptance number '" + acceptance.text()
+                    + "' is not a whole number of 0 or more"));
+            if ((found <= c) != verdict.equals("accept")) {
+                throw bad.apply("verdict", "verdict " + verdict + " does not follow from " + found
+                        + " nonconforming with acceptance number " + c);
+            }
+        }
+        Cell sizeCell = cell.apply("lot size");
+        int lotSize = sizeCell == null ? 0 : whole(sizeCell, inspected, () -> bad.apply("lot size", "lot size '"
+                + sizeCell.text() + "' is not a whole number of at least the sample size " + inspected));
+        LocalDate received = date(cell.apply("received"), () -> bad.apply("received", "received '"
+                + cell.apply("received").text() + "' is not a date such as 2026-03-14"));
+        Map<String, Integer> defects = new LinkedHashMap<>();
+        Cell defectCell = cell.apply("defects");
+        if (defectCell != null) {
+            for (String item : defectCell.text().split(";")) {
+                if (item.isBlank()) {
+                    continue;
+                }
+                int colon = item.lastIndexOf(':');
+                try {
+                    int count = Integer.parseInt(item.substring(colon + 1).trim());
+                    if (colon < 1 || count < 0) {
+                        throw new NumberFormatException();
+                    }
+                    defects.merge(item.substring(0, colon).trim(), count, Integer::sum);
+                } catch (NumberFormatException | StringIndexOutOfBoundsException e) {
+                    throw bad.apply("defects", "defects '" + item.trim() + "' is not type:count, as in burr:2");
+                }
+            }
+        }
+        Cell productionCell = cell.apply("production");
+        String production = productionCell == null ? "steady" : productionCell.text().trim().toLowerCase(Locale.ROOT);
+        if (!production.equals("steady") && !production.equals("irregular")) {
+            throw bad.apply("production", "production '" + productionCell.text() + "' is neither steady nor irregular");
+        }
+        Cell inspector = cell.apply("inspector");
+        return new RecordContent.Lot(cell.apply("supplier").text().trim(), cell.apply("part").text().trim(),
+                cell.apply("lot").text().trim(), lotSize, received, inspector == null ? null : inspector.text().trim(),
+                verdict, inspected, found, defects, null, production, 0, null);
+    }
+
+    private static int whole(Cell cell, int least, java.util.function.Supplier<SheetException> bad) {
+        double value = cell.kind() == Cell.Kind.NUMBER ? cell.number() : parse(cell.text());
+        if (!(value >= least) || value != Math.rint(value) || value > Integer.MAX_VALUE) {
+            throw bad.get();
+        }
+        return (int) value;
+    }
+
+    private static double parse(String text) {
+        try {
+            return Double.parseDouble(text.trim());
+        } catch (NumberFormatException e) {
+            return Double.NaN;
+        }
+    }
+
+    private static LocalDate date(Cell cell, java.util.function.Supplier<SheetException> bad) {
+        if (cell.kind() == Cell.Kind.NUMBER) {
+            return DateUtil.getLocalDateTime(cell.number()).toLocalDate();
+        }
+        try {
+            return LocalDate.parse(cell.text().trim());
+        } catch (DateTimeParseException e) {
+            throw bad.get();
+        }
+    }
+}

@@ -1,0 +1,204 @@
+package lotgate.cli;
+
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.time.temporal.ChronoUnit;
+import java.util.List;
+import lotgate.history.HistoryStore;
+import lotgate.history.LotRow;
+import lotgate.history.RecordContent;
+import lotgate.history.Severity;
+import lotgate.history.SeverityTracker;
+import lotgate.history.StoredRecord;
+import lotgate.history.SupplierHistory;
+import lotgate.history.SwitchingRules;
+import lotgate.inspection.LotDetails;
+import lotgate.plan.DefectClass;
+import lotgate.plan.PlanFamily;
+import lotgate.plan.PlanFormat;
+import lotgate.plan.SavedPlan;
+import lotgate.report.DecisionJson;
+import lotgate.sentencing.LotDecision;
+
+/**
+ * A lot's place in its supplier's history while it is sentenced: the severity the switching rules
+ * ask for, the plan that severity selects from a family, and the record the decision becomes.
+ */
+final class Inspection implements AutoCloseable {
+    /** What recording the lot gave: its place in the store and the severity for the next lot. */
+    record Recorded(StoredRecord record, Severity next, SeverityTracker.Switch caused) {
+    }
+
+    private final HistoryStore store;
+    private final SwitchingRules rules;
+    private final LotDetails lot;
+    private final Severity severity;
+    private final SavedPlan plan;
+    private final Path planFile;
+    private final String notice;
+    private final long supersedes;
+
+    private Inspection(HistoryStore store, SwitchingRules rules, LotDetails lot, Severity severity, SavedPlan plan,
+            Path planFile, String notice, long supersedes) {
+        this.store = store;
+        this.rules = rules;
+        this.lot = lot;
+        this.severity = severity;
+        this.plan = plan;
+        this.planFile = planFile;
+        this.notice = notice;
+        this.supersedes = supersedes;
+    }
+
+    static Inspection open(StoreOption option, Path planFile, boolean family, LotDetails lot, Long supersedes) {
+        PlanFamily plans = family ? PlanFamily.read(planFile) : null;
+        SwitchingRules rules = family ? SwitchingRules.fromJson(plans.switching()) : SwitchingRules.CURRENT;
+        HistoryStore store = option.open();
+        try {
+            List<LotRow> rows = store.rows(lot.supplier(), lot.part());
+            SupplierHistory history = new SupplierHistory(rows, rules);
+            Severity severity = history.current();
+            if (supersedes == null) {
+                for (SupplierHistory.Entry entry : history.entries()) {
+                    if (entry.row().lot().equals(lot.lot())) {
+                        throw new Main.Failure(ExitCode.USAGE, "lot " + lot.lot() + " of " + lot.supplier() + ", part "
+                                + lot.part() + " is already recorded as #" + entry.row().seq() + " in "
+                                + store.location() + "; to correct that record, sentence again with --supersedes "
+                                + entry.row().seq() + " --reason TEXT");
+                    }
+                }
+            }
+            if (supersedes != null) {
+                severity = correctedSeverity(store, history, lot, supersedes);
+            } else if (severity == Severity.DISCONTINUED) {
+                SeverityTracker.Switch last = history.switches().get(history.switches().size() - 1);
+                throw new Main.Failure(ExitCode.DISCONTINUED, "inspection of part " + lot.part() + " from "
+                        + lot.supplier() + " is discontinued since lot " + last.lot() + " (" + last.reason() + ");"
+                        + " record the supplier's corrective action with 'lotgate corrective-action' first");
+            }
+            SavedPlan plan;
+            Path file = planFile;
+            String notice = null;
+            if (plans == null) {
+                plan = PlanFormat.read(planFile);
+                if (severity != Severity.NORMAL) {
+                    notice = "the switching rules call for " + severity.label() + " inspection of this part; the plan"
+                            + " given was applied as it is (a plan family switches plans with the severity)";
+                }
+            } else {
+                String wanted = severity.label();
+                if (!plans.variants().containsKey(wanted)) {
+                    if (severity == Severity.TIGHTENED) {
+                        throw new Main.Failure(ExitCode.BAD_INPUT, planFile + ": the switching rules call for tightened"
+                                + " inspection, but the family has no tightened plan");
+                    }
+                    notice = "the family has no " + wanted + " plan: the normal plan was applied";
+                    wanted = "normal";
+                }
+                plan = plans.variants().get(wanted);
+                file = plans.files().get(wanted);
+            }
+            return new Inspection(store, rules, lot, severity, plan, file, notice, supersedes == null ? 0 : supersedes);
+        } catch (RuntimeException e) {
+            store.close();
+            throw e;
+        }
+    }
+
+    /** The severity the corrected lot was inspected under, after checking that the record can be corrected. */
+    private static Severity correctedSeverity(HistoryStore store, SupplierHistory history, LotDetails lot, long seq) {
+        StoredRecord old = store.record(seq);
+        if (old == null) {
+            throw new Main.Failure(ExitCode.USAGE, "--supersedes " + seq + ": the store " + store.location()
+                    + " has no record " + seq);
+        }
+        var content = old.json();
+        if (!"lot".equals(content.path("kind").asText()) || !lot.supplier().equals(content.path("supplier").asText())
+                || !lot.part().equals(content.path("part").asText())) {
+            throw new Main.Failure(ExitCode.USAGE, "--supersedes " + seq + ": record " + seq + " is not a lot of "
+                    + lot.supplier() + ", part " + lot.part());
+        }
+        for (SupplierHistory.Entry entry : history.entries()) {
+            if (entry.row().seq() == seq || entry.row().supersedes() == seq) {
+                return entry.inspectedUnder();
+            }
+        }
+        throw new Main.Failure(ExitCode.USAGE, "--supersedes " + seq + ": record " + seq + " was already corrected;"
+                + " supersede its latest correction instead");
+    }
+
+    SavedPlan plan() {
+        return plan;
+    }
+
+    Path planFile() {
+        return planFile;
+    }
+
+    String notice() {
+        return notice;
+    }
+
+    Recorded record(LotDecision decision, String production, String reason) {
+        int nonconforming = decision.sample().all().nonconformingUnits(DefectClass.ANY);
+        RecordContent.Lot content = new RecordContent.Lot(lot.supplier(), lot.part(), decision.lot().lot(),
+                decision.lot().lotSize(), decision.lot().received(), decision.lot().inspector(),
+                decision.sentence().verdict(), decision.sample().units(), nonconforming, decision.sample().defectTypes(),
+                severity.label(), production, supersedes, reason);
+        StoredRecord stored = store.append(RecordContent.lot(content, DecisionJson.of(decision), "sentence"),
+                Instant.now().truncatedTo(ChronoUnit.MILLIS));
+        SupplierHistory after = new SupplierHistory(store.rows(lot.supplier(), lot.part()), rules);
+        SeverityTracker.Switch caused = null;
+        for (SupplierHistory.Entry entry : after.entries()) {
+            if (entry.row().seq() == stored.seq()) {
+                caused = entry.caused();
+            }
+        }
+        return new Recorded(stored, after.current(), caused);
+    }
+
+    ObjectNode json(Recorded recorded) {
+        ObjectNode node = Json.object();
+        node.put("store", store.location());
+        node.put("severityApplied", severity.label());
+        node.put("switchingRules", rules.edition());
+        node.put("recorded", recorded != null);
+        if (recorded != null) {
+            node.put("seq", recorded.record().seq());
+            node.put("recordHash", recorded.record().hash());
+            node.put("severityNext", recorded.next().label());
+            if (recorded.caused() != null) {
+                node.put("switch", recorded.caused().from().label() + " to " + recorded.caused().to().label());
+                node.put("switchReason", recorded.caused().reason());
+            }
+            if (supersedes > 0) {
+                node.put("supersedes", supersedes);
+            }
+        }
+        return node;
+    }
+
+    void printText(PrintWriter out, Recorded recorded) {
+        out.println("  inspection severity: " + severity.label() + " (" + rules.edition() + " switching rules)"
+);
+        if (recorded == null) {
+            out.println("  not recorded (--no-record)");
+            return;
+        }
+        out.println("  recorded as #" + recorded.record().seq() + " in " + store.location()
+                + (supersedes > 0 ? ", superseding #" + supersedes : ""));
+        if (recorded.caused() != null) {
+            out.println("  SWITCH: " + recorded.caused().from().label() + " to " + recorded.caused().to().label()
+                    + " inspection for the next lot: " + recorded.caused().reason());
+        } else {
+            out.println("  next lot of this part: " + recorded.next().label() + " inspection");
+        }
+    }
+
+    @Override
+    public void close() {
+        store.close();
+    }
+}

@@ -1,0 +1,52 @@
+package lotgate.history;
+
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * What an audit reads about one supplier (and part) over a period: lots, acceptance, the process
+ * average with its exact interval, the p-chart, the Pareto of defect types, the severity timeline
+ * with every switch, and the rejected lots. Built from the store's rows; computes, stores nothing.
+ *
+ * @param lotsInOrder the period's lots in the order received, the same order as {@code pChart}
+ */
+public record SupplierAudit(String supplier, String part, LocalDate from, LocalDate to, double confidence,
+        List<Part> parts, long lots, long accepted, long rejected, QualityStatistics.ProcessAverage acceptanceRate,
+        QualityStatistics.ProcessAverage processAverage, List<QualityStatistics.PChartPoint> pChart,
+        List<QualityStatistics.ParetoBar> pareto, List<LotRow> rejectedLots, List<LotRow> lotsInOrder) {
+
+    /** One part's severity now and its switches (over all its lots, not only the period). */
+    public record Part(String part, Severity current, List<SeverityTracker.Switch> switches, int lots) {
+    }
+
+    public static SupplierAudit of(String supplier, String part, LocalDate from, LocalDate to, List<LotRow> rows,
+            Map<String, Long> defectTypes, SwitchingRules rules, double confidence) {
+        List<Part> parts = new ArrayList<>();
+        List<LotRow> inPeriod = new ArrayList<>();
+        for (Map.Entry<String, List<LotRow>> entry : SupplierHistory.byPart(rows).entrySet()) {
+            SupplierHistory history = new SupplierHistory(entry.getValue(), rules);
+            parts.add(new Part(entry.getKey(), history.current(), history.switches(), history.entries().size()));
+            for (SupplierHistory.Entry lot : history.entries()) {
+                LocalDate day = lot.row().received();
+                if ((from == null || (day != null && !day.isBefore(from))) && (to == null || (day != null && !day.isAfter(to)))) {
+                    inPeriod.add(lot.row());
+                }
+            }
+        }
+        inPeriod.sort(java.util.Comparator.comparing((LotRow r) -> r.received() == null ? LocalDate.MIN : r.received())
+                .thenComparingLong(LotRow::seq));
+        long accepted = inPeriod.stream().filter(LotRow::accepted).count();
+        long inspected = inPeriod.stream().mapToLong(LotRow::inspected).sum();
+        long nonconforming = inPeriod.stream().mapToLong(LotRow::nonconforming).sum();
+        int[] n = inPeriod.stream().mapToInt(LotRow::inspected).toArray();
+        int[] d = inPeriod.stream().mapToInt(LotRow::nonconforming).toArray();
+        List<String> names = inPeriod.stream().map(LotRow::lot).toList();
+        return new SupplierAudit(supplier, part, from, to, confidence, parts, inPeriod.size(), accepted,
+                inPeriod.size() - accepted, QualityStatistics.acceptanceRate(inPeriod.size(), accepted, confidence),
+                QualityStatistics.processAverage(inspected, nonconforming, confidence),
+                QualityStatistics.pChart(names, n, d), QualityStatistics.pareto(defectTypes),
+                inPeriod.stream().filter(r -> !r.accepted()).toList(), List.copyOf(inPeriod));
+    }
+}
