@@ -259,7 +259,7 @@ public final class SupplierReport {
                 .append("h1 { font-size: 14pt; } h2 { font-size: 11pt; margin: 10pt 0 3pt; }\n")
                 .append("table { border-collapse: collapse; } td, th { border-bottom: 1px solid #ccc; padding: 2pt 6pt;")
                 .append(" text-align: left; } th { background: #f0f0f0; } td.n { text-align: right; }\n")
-                .append("svg { width: 100%; height: auto; } .bad { color: #a32020; font-weight: bold; }\n")
+                .append("svg { width: 100%; height: auto; } td:nth-child(-n+5) { white-space: nowrap; }\n")
                 .append("</style></head><body>\n<h1>").append(LotReportHtml.escape(title(audit))).append("</h1>\n<ul>\n");
         for (String line : summary(audit)) {
             html.append("<li>").append(LotReportHtml.escape(line)).append("</li>\n");
