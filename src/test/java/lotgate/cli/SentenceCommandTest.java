@@ -45,7 +45,7 @@ class SentenceCommandTest {
 
     @Test
     void anAcceptedLotGivesItsVerdictAndExactEvidence() throws Exception {
-        Cli.Result result = Cli.run("sentence", BOLTS, demo("arnwick-af2611.xlsx"), "--format", "json");
+        Cli.Result result = Cli.run("sentence", "--no-record", BOLTS, demo("arnwick-af2611.xlsx"), "--format", "json");
         assertEquals(ExitCode.OK, result.exitCode(), result.err());
         JsonNode decision = json(result);
         assertEquals("accept", decision.get("verdict").asText());
@@ -75,7 +75,7 @@ class SentenceCommandTest {
 
     @Test
     void aRejectedLotExitsWithCode1() throws Exception {
-        Cli.Result result = Cli.run("sentence", BOLTS, demo("arnwick-af2618.csv"));
+        Cli.Result result = Cli.run("sentence", "--no-record", BOLTS, demo("arnwick-af2618.csv"));
         assertEquals(ExitCode.REJECTED, result.exitCode());
         assertTrue(result.out().startsWith("REJECT lot AF-2618"), result.out());
         assertTrue(result.out().contains("6 nonconforming units found in 132 units, at or above the rejection number 4"));
@@ -84,11 +84,11 @@ class SentenceCommandTest {
 
     @Test
     void aCriticalNonconformityRejectsAndPrintsTheQuarantineNotice() throws Exception {
-        Cli.Result result = Cli.run("sentence", "plans/kestrune-kc-114-classes.json", demo("kestrune-kc0907.xlsx"));
+        Cli.Result result = Cli.run("sentence", "--no-record", "plans/kestrune-kc-114-classes.json", demo("kestrune-kc0907.xlsx"));
         assertEquals(ExitCode.REJECTED, result.exitCode());
         assertTrue(result.out().startsWith("!! CRITICAL NONCONFORMITY FOUND"), result.out());
         assertTrue(result.out().contains("Quarantine this lot now"));
-        JsonNode decision = json(Cli.run("sentence", "plans/kestrune-kc-114-classes.json",
+        JsonNode decision = json(Cli.run("sentence", "--no-record", "plans/kestrune-kc-114-classes.json",
                 demo("kestrune-kc0907.xlsx"), "--format", "json"));
         assertTrue(decision.get("criticalFound").asBoolean());
         // Each class is judged on its own first n units: critical 175, major 82, minor 50.
@@ -101,7 +101,7 @@ class SentenceCommandTest {
 
     @Test
     void aPoissonPlanCountsNonconformitiesNotUnits() throws Exception {
-        JsonNode decision = json(Cli.run("sentence", "plans/mirelle-ms-22.json", demo("mirelle-ms1130.csv"),
+        JsonNode decision = json(Cli.run("sentence", "--no-record", "plans/mirelle-ms-22.json", demo("mirelle-ms1130.csv"),
                 "--format", "json"));
         JsonNode any = decision.get("classes").get(0);
         assertEquals(3, any.get("found").asInt(), "2 + 1 surface blemishes on 2 rings");
@@ -114,7 +114,7 @@ class SentenceCommandTest {
 
     @Test
     void aMalformedSheetNamesTheCell() {
-        Cli.Result result = Cli.run("sentence", "plans/mirelle-ms-22.json", demo("mirelle-ms1204-malformed.xlsx"));
+        Cli.Result result = Cli.run("sentence", "--no-record", "plans/mirelle-ms-22.json", demo("mirelle-ms1204-malformed.xlsx"));
         assertEquals(ExitCode.BAD_INPUT, result.exitCode());
         assertEquals("lotgate: " + demo("mirelle-ms1204-malformed.xlsx") + ": sheet 'Sample' cell B9: minor count"
                 + " 'two' is not a whole number of 0 or more" + System.lineSeparator(), result.err());
@@ -136,7 +136,7 @@ class SentenceCommandTest {
     @Test
     void anIncompleteSampleIsRefusedAndNothingIsRecorded() throws Exception {
         Path record = folder.resolve("out/record.json");
-        Cli.Result result = Cli.run("sentence", BOLTS, sheet("short.xlsx", 117).toString(), "--lot", "L-1",
+        Cli.Result result = Cli.run("sentence", "--no-record", BOLTS, sheet("short.xlsx", 117).toString(), "--lot", "L-1",
                 "--record", record.toString());
         assertEquals(ExitCode.INCOMPLETE_SAMPLE, result.exitCode());
         assertTrue(result.err().startsWith("lotgate: incomplete sample: 117 of 132 units in "), result.err());
@@ -146,17 +146,17 @@ class SentenceCommandTest {
     @Test
     void moreUnitsThanThePlanSamplesNeedTheRowsOfTheSample() throws Exception {
         Path file = sheet("long.xlsx", 140, 135);
-        Cli.Result result = Cli.run("sentence", BOLTS, file.toString(), "--lot", "L-2");
+        Cli.Result result = Cli.run("sentence", "--no-record", BOLTS, file.toString(), "--lot", "L-2");
         assertEquals(ExitCode.INCOMPLETE_SAMPLE, result.exitCode());
         assertTrue(result.err().contains("holds 140 units but plan arnwick-af-m8-40 samples 132; name the sample's rows"
                 + " with --rows FIRST-LAST"), result.err());
-        Cli.Result chosen = Cli.run("sentence", BOLTS, file.toString(), "--lot", "L-2", "--rows", "2-133");
+        Cli.Result chosen = Cli.run("sentence", "--no-record", BOLTS, file.toString(), "--lot", "L-2", "--rows", "2-133");
         assertEquals(ExitCode.OK, chosen.exitCode(), chosen.err());
     }
 
     @Test
     void optionsWinOverTheLotSheet() throws Exception {
-        JsonNode decision = json(Cli.run("sentence", BOLTS, demo("arnwick-af2611.xlsx"), "--lot", "AF-2611-B",
+        JsonNode decision = json(Cli.run("sentence", "--no-record", BOLTS, demo("arnwick-af2611.xlsx"), "--lot", "AF-2611-B",
                 "--inspector", "Q. Invented", "--format", "json"));
         assertEquals("AF-2611-B", decision.get("lot").get("lot").asText());
         assertEquals("Q. Invented", decision.get("lot").get("inspector").asText());
@@ -165,7 +165,7 @@ class SentenceCommandTest {
 
     @Test
     void aLotWithoutAnIdIsRefused() throws Exception {
-        Cli.Result result = Cli.run("sentence", BOLTS, sheet("anon.xlsx", 132).toString());
+        Cli.Result result = Cli.run("sentence", "--no-record", BOLTS, sheet("anon.xlsx", 132).toString());
         assertEquals(ExitCode.USAGE, result.exitCode());
         assertTrue(result.err().startsWith("lotgate: name the lot: give --lot ID"), result.err());
     }
@@ -181,7 +181,7 @@ class SentenceCommandTest {
         }
         Path file = folder.resolve("classes.xlsx");
         DemoData.workbook(file, "Sample", rows, null);
-        Cli.Result result = Cli.run("sentence", plan.toString(), file.toString(), "--lot", "L-3");
+        Cli.Result result = Cli.run("sentence", "--no-record", plan.toString(), file.toString(), "--lot", "L-3");
         assertEquals(ExitCode.BAD_INPUT, result.exitCode());
         assertTrue(result.err().contains("the sheet records critical nonconformities (1 units) but plan majors has no"
                 + " criteria for critical"), result.err());
@@ -190,7 +190,7 @@ class SentenceCommandTest {
     @Test
     void theRecordHoldsThePlanTheSheetAndTheEvidence() throws Exception {
         Path record = folder.resolve("records/af2611.json");
-        Cli.Result result = Cli.run("sentence", BOLTS, demo("arnwick-af2611.xlsx"), "--record", record.toString());
+        Cli.Result result = Cli.run("sentence", "--no-record", BOLTS, demo("arnwick-af2611.xlsx"), "--record", record.toString());
         assertEquals(0, result.exitCode(), result.err());
         JsonNode saved = JSON.readTree(record.toFile());
         assertEquals("lotgate-decision", saved.get("format").asText());
@@ -213,7 +213,7 @@ class SentenceCommandTest {
         DemoData.workbook(file, "Sample", rows, Map.of("lot", "L-<b>4</b>", "supplier", "@Evil \"Quotes\" & Co \u00e9"));
         Path xlsx = folder.resolve("report.xlsx");
         Path html = folder.resolve("report.html");
-        Cli.Result result = Cli.run("sentence", BOLTS, file.toString(), "--report", xlsx.toString(), "--report",
+        Cli.Result result = Cli.run("sentence", "--no-record", BOLTS, file.toString(), "--report", xlsx.toString(), "--report",
                 html.toString());
         assertEquals(0, result.exitCode(), result.err());
         String page = Files.readString(html);
@@ -232,20 +232,20 @@ class SentenceCommandTest {
                     "the nonconforming unit is highlighted");
             assertEquals(1, workbook.getAllPictures().size(), "the OC chart");
         }
-        Cli.Result csv = Cli.run("sentence", BOLTS, file.toString(), "--format", "csv");
+        Cli.Result csv = Cli.run("sentence", "--no-record", BOLTS, file.toString(), "--format", "csv");
         assertTrue(csv.out().contains("'L-<b>4</b>") || csv.out().contains("L-<b>4</b>"));
     }
 
     @Test
     void badOutputNamesAreRefusedBeforeAnythingIsRead() {
-        Cli.Result result = Cli.run("sentence", BOLTS, "missing.xlsx", "--report", "out.pdf");
+        Cli.Result result = Cli.run("sentence", "--no-record", BOLTS, "missing.xlsx", "--report", "out.pdf");
         assertEquals(ExitCode.USAGE, result.exitCode());
         assertTrue(result.err().startsWith("lotgate: --report out.pdf: a lot report is a .xlsx or .html file"));
     }
 
     @Test
     void aMissingSheetFileIsNamed() {
-        Cli.Result result = Cli.run("sentence", BOLTS, "missing.xlsx", "--lot", "L-5");
+        Cli.Result result = Cli.run("sentence", "--no-record", BOLTS, "missing.xlsx", "--lot", "L-5");
         assertEquals(ExitCode.BAD_INPUT, result.exitCode());
         assertEquals("lotgate: missing.xlsx: no such file" + System.lineSeparator(), result.err());
     }
