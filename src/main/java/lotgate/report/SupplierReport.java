@@ -175,6 +175,10 @@ public final class SupplierReport {
                         new CellRangeAddress(1, n, 1, 1));
                 XDDFLineChartData data = (XDDFLineChartData) chart.createData(ChartTypes.LINE, bottom, left);
                 String[] series = {"Lot fraction", "Centre", "Lower limit", "Upper limit"};
+                org.apache.poi.xddf.usermodel.PresetColor[] colours = {org.apache.poi.xddf.usermodel.PresetColor.NAVY,
+                        org.apache.poi.xddf.usermodel.PresetColor.SEA_GREEN,
+                        org.apache.poi.xddf.usermodel.PresetColor.DARK_RED,
+                        org.apache.poi.xddf.usermodel.PresetColor.DARK_RED};
                 for (int s = 0; s < series.length; s++) {
                     XDDFNumericalDataSource<Double> values = XDDFDataSourcesFactory.fromNumericCellRange(lots,
                             new CellRangeAddress(1, n, 6 + s, 6 + s));
@@ -182,6 +186,16 @@ public final class SupplierReport {
                     line.setTitle(series[s], null);
                     line.setMarkerStyle(s == 0 ? MarkerStyle.CIRCLE : MarkerStyle.NONE);
                     line.setSmooth(false);
+                    // Spreadsheet programs differ in their default line; name it so that every one draws it.
+                    org.apache.poi.xddf.usermodel.XDDFLineProperties stroke = new org.apache.poi.xddf.usermodel.XDDFLineProperties(
+                            new org.apache.poi.xddf.usermodel.XDDFSolidFillProperties(
+                                    org.apache.poi.xddf.usermodel.XDDFColor.from(colours[s])));
+                    stroke.setWidth(s == 0 ? 1.75 : 1.25);
+                    if (s > 0) {
+                        stroke.setPresetDash(new org.apache.poi.xddf.usermodel.XDDFPresetLineDash(
+                                org.apache.poi.xddf.usermodel.PresetLineDash.DASH));
+                    }
+                    line.setLineProperties(stroke);
                 }
                 chart.plot(data);
             }
