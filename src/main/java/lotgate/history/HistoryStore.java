@@ -74,11 +74,12 @@ public final class HistoryStore implements AutoCloseable {
                 properties.setProperty("journal_mode", "WAL");
                 properties.setProperty("synchronous", "FULL");
                 properties.setProperty("busy_timeout", "60000");
-                properties.setProperty("transaction_mode", "IMMEDIATE");
                 properties.setProperty("foreign_keys", "true");
                 connection = DriverManager.getConnection(url, properties);
             }
-            connection.setAutoCommit(false);
+            // SQLite: lotgate begins each transaction itself (the driver would otherwise begin the next one at
+            // once after every commit and, for writes, hold the lock for as long as the connection is open).
+            connection.setAutoCommit(!postgres);
         } catch (SQLException e) {
             throw new StoreException("cannot open the history store " + location + " (" + firstLine(e) + ")", e);
         }
@@ -118,17 +119,42 @@ public final class HistoryStore implements AutoCloseable {
         T run() throws SQLException;
     }
 
-    /** Runs one transaction; on any failure it is rolled back and nothing is written. */
+    private void execute(String sql) throws SQLException {
+        try (Statement statement = connection.createStatement()) {
+            statement.execute(sql);
+        }
+    }
+
+    /** Runs a writing transaction; on any failure it is rolled back and nothing is written. */
     private <T> T transaction(String what, Work<T> work) {
+        return transaction(what, true, work);
+    }
+
+    /**
+     * Runs one transaction: on SQLite a write takes the database's write lock at its start (BEGIN
+     * IMMEDIATE), so that concurrent appends queue instead of failing; a read sees one snapshot.
+     */
+    private <T> T transaction(String what, boolean write, Work<T> work) {
         try {
+            if (!postgres) {
+                execute(write ? "BEGIN IMMEDIATE" : "BEGIN");
+            }
             T result = work.run();
-            connection.commit();
+            if (postgres) {
+                connection.commit();
+            } else {
+                execute("COMMIT");
+            }
             return result;
         } catch (SQLException | RuntimeException e) {
             try {
-                connection.rollback();
+                if (postgres) {
+                    connection.rollback();
+                } else {
+                    execute("ROLLBACK");
+                }
             } catch (SQLException ignored) {
-                // The original failure is the one worth reporting.
+                // The original failure is the one worth reporting (there may be no transaction to roll back).
             }
             if (e instanceof StoreException store) {
                 throw store;
@@ -324,7 +350,7 @@ public final class HistoryStore implements AutoCloseable {
     }
 
     private <T> T read(String what, Work<T> work) {
-        return transaction(what, work);
+        return transaction(what, false, work);
     }
 
     // ---- verification ----
