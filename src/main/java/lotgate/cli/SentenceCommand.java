@@ -50,8 +50,11 @@ import picocli.CommandLine.Spec;
                         + " known lot size an upper bound on its nonconforming units, and where the count sits on"
                         + " the plan's OC curve.",
                 "",
+                "The lot is recorded in the supplier's history (see --store), unless --no-record.",
+                "",
                 "Exit code 0: accepted; 1: rejected; 4: the sheet holds fewer or more units than the plan samples;"
-                        + " 2 and 3: bad options or input.",
+                        + " 8: inspection of the part is discontinued; 2 and 3: bad options or input; 7: the history"
+                        + " store cannot be used.",
                 ""})
 final class SentenceCommand implements Runnable {
 
