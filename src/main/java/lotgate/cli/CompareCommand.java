@@ -12,6 +12,7 @@ import lotgate.report.Charts;
 import lotgate.sampling.OperatingCharacteristic;
 import lotgate.sampling.RiskPoints;
 import lotgate.sampling.SinglePlan;
+import lotgate.report.CsvTable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -159,7 +160,7 @@ final class CompareCommand implements Runnable {
             line.add(2, atLtpd);
             table.add(line);
         }
-        return Csv.table(List.of("plan", "aql", "ltpd", "model", "n", "c", "lotSize", "acceptanceAtAql",
+        return CsvTable.table(List.of("plan", "aql", "ltpd", "model", "n", "c", "lotSize", "acceptanceAtAql",
                 "producerRisk", "consumerRisk", "qualityAtAcceptance95", "qualityAtAcceptance50",
                 "qualityAtAcceptance10", "aoql"), table);
     }

@@ -13,6 +13,7 @@ import lotgate.sampling.CurvePoint;
 import lotgate.sampling.OperatingCharacteristic;
 import lotgate.sampling.RiskPoints;
 import lotgate.sampling.SinglePlan;
+import lotgate.report.CsvTable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -267,7 +268,7 @@ final class CurveCommand implements Runnable {
             rows.add(List.of(point.quality(), point.defectives() >= 0 ? point.defectives() : "",
                     point.acceptance(), point.aoq(), Double.isNaN(point.ati()) ? "" : point.ati()));
         }
-        return Csv.table(List.of("quality", "defectivesInLot", "acceptance", "aoq", "ati"), rows);
+        return CsvTable.table(List.of("quality", "defectivesInLot", "acceptance", "aoq", "ati"), rows);
     }
 
     private static ObjectNode json(PlanChoice choice, List<CurvePoint> table, KeyLevels keys, Double markAql,

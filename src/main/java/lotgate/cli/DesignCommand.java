@@ -17,6 +17,7 @@ import lotgate.sampling.RiskPoints;
 import lotgate.sampling.SingleDesign;
 import lotgate.sampling.SinglePlan;
 import lotgate.sampling.SinglePlanDesigner;
+import lotgate.report.CsvTable;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -295,7 +296,7 @@ final class DesignCommand implements Runnable {
                 }
                 out.println(Json.text(node));
             }
-            case csv -> out.print(Csv.table(List.of("planFound", "reason", "recommendation"),
+            case csv -> out.print(CsvTable.table(List.of("planFound", "reason", "recommendation"),
                     List.of(List.of(false, reason, "inspect every unit of the lot (100% inspection)"))));
             case text -> {
                 out.println("No sampling plan meets the request: " + reason + ".");
@@ -483,6 +484,6 @@ final class DesignCommand implements Runnable {
             row.add(saved == null ? "" : saved.fingerprint());
             rows.add(row);
         }
-        return Csv.table(header, rows);
+        return CsvTable.table(header, rows);
     }
 }

@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.List;
 import lotgate.history.HistoryStore;
 import lotgate.history.LotRow;
+import lotgate.report.CsvTable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -73,7 +74,7 @@ final class HistoryCommand implements Runnable {
                             row.verdict() == null ? "" : row.verdict(), row.inspected(), row.nonconforming(),
                             row.severity() == null ? "" : row.severity(), row.supersedes()));
                 }
-                out.print(Csv.table(List.of("seq", "recordedAt", "kind", "supplier", "part", "lot", "received",
+                out.print(CsvTable.table(List.of("seq", "recordedAt", "kind", "supplier", "part", "lot", "received",
                         "verdict", "inspected", "nonconforming", "severity", "supersedes"), table));
             }
             case text -> {

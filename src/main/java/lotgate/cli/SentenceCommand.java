@@ -32,6 +32,7 @@ import lotgate.sentencing.Evidence;
 import lotgate.sentencing.LotDecision;
 import lotgate.sentencing.Sentence;
 import lotgate.sentencing.Sentencer;
+import lotgate.report.CsvTable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -438,7 +439,7 @@ final class SentenceCommand implements Runnable {
                     evidence.lotUpperBound() >= 0 ? evidence.lotUpperBound() : "", decision.sentence().verdict(),
                     decision.plan().fingerprint(), decision.sheetSha256()));
         }
-        return Csv.table(List.of("lot", "class", "sampleSize", "found", "acceptanceNumber", "rejectionNumber",
+        return CsvTable.table(List.of("lot", "class", "sampleSize", "found", "acceptanceNumber", "rejectionNumber",
                 "classVerdict", "pValueAtAql", "lowerBound", "upperBound", "lotUpperBound", "verdict", "planFingerprint",
                 "sheetSha256"), rows);
     }

@@ -9,6 +9,7 @@ import lotgate.plan.ClassPlan;
 import lotgate.plan.PlanFormat;
 import lotgate.plan.SavedPlan;
 import lotgate.sampling.SinglePlan;
+import lotgate.report.CsvTable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -92,7 +93,7 @@ final class ShowCommand implements Runnable {
                     plan.n(), plan.c(), saved.lotSize() > 0 ? saved.lotSize() : "", criteria.achieved().producerRisk(),
                     criteria.achieved().consumerRisk(), saved.fingerprint()));
         }
-        return Csv.table(List.of("file", "name", "class", "model", "n", "c", "lotSize", "producerRisk", "consumerRisk",
+        return CsvTable.table(List.of("file", "name", "class", "model", "n", "c", "lotSize", "producerRisk", "consumerRisk",
                 "fingerprint"), rows);
     }
 

@@ -16,6 +16,7 @@ import lotgate.history.SwitchingRules;
 import lotgate.plan.PlanFamily;
 import lotgate.report.SentenceText;
 import lotgate.report.SupplierReport;
+import lotgate.report.CsvTable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -259,7 +260,7 @@ final class SupplierCommand implements Runnable {
                     lot.nonconforming(), point.fraction(), point.centre(), point.lower(), point.upper(),
                     lot.severity() == null ? "" : lot.severity()));
         }
-        return Csv.table(List.of("seq", "supplier", "part", "lot", "received", "verdict", "inspected", "nonconforming",
+        return CsvTable.table(List.of("seq", "supplier", "part", "lot", "received", "verdict", "inspected", "nonconforming",
                 "fraction", "centre", "lowerLimit", "upperLimit", "severity"), rows);
     }
 }

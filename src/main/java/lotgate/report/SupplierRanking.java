@@ -24,21 +24,15 @@ public final class SupplierRanking {
     }
 
     public static String csv(List<QualityStatistics.Ranked> ranking) {
-        StringBuilder out = new StringBuilder("rank,supplier,lots,rejected,processAverage,processAverageLower,"
-                + "processAverageUpper,rejectionRate,rejectionRateLower,rejectionRateUpper\n");
+        List<List<Object>> rows = new ArrayList<>();
         int rank = 1;
         for (QualityStatistics.Ranked supplier : ranking) {
-            String name = supplier.supplier();
-            if (LotReport.looksLikeFormula(name)) {
-                name = "'" + name;
-            }
-            out.append(rank++).append(',').append('"').append(name.replace("\"", "\"\"")).append('"').append(',')
-                    .append(supplier.lots()).append(',').append(supplier.rejected()).append(',')
-                    .append(supplier.average().average()).append(',').append(supplier.average().lower()).append(',')
-                    .append(supplier.average().upper()).append(',').append(supplier.rejection().average()).append(',')
-                    .append(supplier.rejection().lower()).append(',').append(supplier.rejection().upper()).append('\n');
+            rows.add(List.of(rank++, supplier.supplier(), supplier.lots(), supplier.rejected(), supplier.average().average(),
+                    supplier.average().lower(), supplier.average().upper(), supplier.rejection().average(),
+                    supplier.rejection().lower(), supplier.rejection().upper()));
         }
-        return out.toString();
+        return CsvTable.table(List.of("rank", "supplier", "lots", "rejected", "processAverage", "processAverageLower",
+                "processAverageUpper", "rejectionRate", "rejectionRateLower", "rejectionRateUpper"), rows);
     }
 
     public static void write(List<QualityStatistics.Ranked> ranking, double confidence, Path file) {

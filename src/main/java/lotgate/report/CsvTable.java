@@ -1,4 +1,4 @@
-package lotgate.cli;
+package lotgate.report;
 
 import java.io.IOException;
 import java.io.StringWriter;
@@ -8,16 +8,16 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 
 /** CSV output that a spreadsheet opens safely: text cells that would start a formula are quoted inert. */
-final class Csv {
-    private Csv() {
+public final class CsvTable {
+    private CsvTable() {
     }
 
-    static String table(List<String> header, List<List<Object>> rows) {
+    public static String table(List<String> header, List<List<Object>> rows) {
         StringWriter out = new StringWriter();
         try (CSVPrinter printer = new CSVPrinter(out, CSVFormat.RFC4180.builder().setRecordSeparator("\n").get())) {
             printer.printRecord(header);
             for (List<Object> row : rows) {
-                printer.printRecord(row.stream().map(Csv::cell).toList());
+                printer.printRecord(row.stream().map(CsvTable::cell).toList());
             }
         } catch (IOException e) {
             throw new UncheckedIOException(e);
@@ -26,11 +26,11 @@ final class Csv {
     }
 
     /** Numbers stay numbers; text starting with = + - @ (or a tab or carriage return) gets a leading quote. */
-    static Object cell(Object value) {
+    public static Object cell(Object value) {
         if (value == null) {
             return "";
         }
-        if (value instanceof String text && !text.isEmpty() && "=+-@\t\r".indexOf(text.charAt(0)) >= 0) {
+        if (value instanceof String text && LotReport.looksLikeFormula(text)) {
             return "'" + text;
         }
         return value;
