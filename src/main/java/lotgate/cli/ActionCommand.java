@@ -30,7 +30,7 @@ final class ActionCommand implements Runnable {
             description = "What the supplier did (the corrective action report's summary).")
     String reason;
 
-    @Option(names = "--date", paramLabel = "DATE", description = "The day the action was accepted (default today).")
+    @Option(names = "--date", paramLabel = "DATE", converter = Values.Day.class, description = "The day the action was accepted (default today).")
     LocalDate date;
 
     @Mixin

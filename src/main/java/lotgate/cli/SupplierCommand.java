@@ -39,10 +39,10 @@ final class SupplierCommand implements Runnable {
     @Option(names = "--part", paramLabel = "PART", description = "Only this part.")
     String part;
 
-    @Option(names = "--from", paramLabel = "DATE", description = "First received date of the period (2026-01-01).")
+    @Option(names = "--from", paramLabel = "DATE", converter = Values.Day.class, description = "First received date of the period (2026-01-01).")
     LocalDate from;
 
-    @Option(names = "--to", paramLabel = "DATE", description = "Last received date of the period.")
+    @Option(names = "--to", paramLabel = "DATE", converter = Values.Day.class, description = "Last received date of the period.")
     LocalDate to;
 
     @Option(names = "--switching", paramLabel = "EDITION-OR-FAMILY", defaultValue = "current",

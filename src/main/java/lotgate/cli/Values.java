@@ -57,6 +57,18 @@ final class Values {
         }
     }
 
+    /** Calendar days written as 2026-03-14. */
+    static final class Day implements ITypeConverter<java.time.LocalDate> {
+        @Override
+        public java.time.LocalDate convert(String text) {
+            try {
+                return java.time.LocalDate.parse(text.trim());
+            } catch (java.time.format.DateTimeParseException e) {
+                throw new TypeConversionException("'" + text + "' is not a date; write it as 2026-03-14");
+            }
+        }
+    }
+
     /** Whole numbers of 1 or more (sample and lot sizes). */
     static final class Count implements ITypeConverter<Integer> {
         @Override
