@@ -119,9 +119,17 @@ final class DemoCommand implements Runnable {
         step(out, "14. The supplier audit: Arnwick's year, with its switches of severity, in a workbook and a page:",
                 "supplier", "Arnwick Fasteners (invented)", "--store", store,
                 "--report", reports + "/arnwick-audit.xlsx", "--report", reports + "/arnwick-audit.html");
-        step(out, "15. All suppliers ranked; Quorrin's three lots leave it a wide interval:",
+        step(out, "15. Mirelle's year: ten accepted lots in a row earned reduced inspection:",
+                "supplier", "Mirelle Seals (invented)", "--store", store,
+                "--report", reports + "/mirelle-audit.xlsx", "--report", reports + "/mirelle-audit.html");
+        for (String other : new String[] {"Kestrune Castings (invented)", "Quorrin Plastics (invented)"}) {
+            quietly("supplier", other, "--store", store, "--report", reports + "/"
+                    + other.substring(0, other.indexOf(' ')).toLowerCase(java.util.Locale.ROOT) + "-audit.html");
+        }
+        step(out, "16. All suppliers ranked; Quorrin's three lots leave it a wide interval (the audits of Kestrune"
+                        + " and Quorrin are in the reports folder too):",
                 "suppliers", "--store", store, "--report", reports + "/ranking.html");
-        step(out, "16. Nothing in the history was altered or removed:", "verify", "--store", store);
+        step(out, "17. Nothing in the history was altered or removed:", "verify", "--store", store);
         out.println("Demo done. Plans are in " + plans + ", charts in " + charts + ", lot and audit reports in "
                 + reports + ", the history in " + folder.resolve("history.sqlite") + ".");
         out.println("Open " + charts + "/arnwick-af-m8-40.png for the OC, AOQ and ATI curves together, "
@@ -151,6 +159,18 @@ final class DemoCommand implements Runnable {
                 + " (the same as demo-data/ in the repository).");
         out.println();
         return target.toString();
+    }
+
+    /** Runs a step whose output the demo does not show (its report is the point). */
+    private void quietly(String... args) {
+        PrintWriter nowhere = new PrintWriter(java.io.Writer.nullWriter());
+        CommandLine cli = Main.commandLine();
+        cli.setOut(nowhere);
+        cli.setErr(spec.commandLine().getErr());
+        int code = cli.execute(args);
+        if (code != ExitCode.OK) {
+            throw new Main.Failure(code, "the demo step 'lotgate " + String.join(" ", args) + "' failed");
+        }
     }
 
     private void step(PrintWriter out, String story, String... args) {
