@@ -29,6 +29,7 @@ import org.xml.sax.helpers.DefaultHandler;
  */
 final class XlsxSheets implements SheetSource {
     private final Path file;
+    private List<String> sheetNames;
 
     XlsxSheets(Path file) {
         this.file = file;
@@ -86,6 +87,14 @@ final class XlsxSheets implements SheetSource {
 
     @Override
     public List<String> sheetNames() {
+        if (sheetNames == null) {
+            sheetNames = List.copyOf(readSheetNames());
+        }
+        return sheetNames;
+    }
+
+    /** Opening the file is the costly part; a sentence asks for the names several times. */
+    private List<String> readSheetNames() {
         return withPackage(pkg -> {
             List<String> names = new ArrayList<>();
             XSSFReader.SheetIterator sheets = (XSSFReader.SheetIterator) new XSSFReader(pkg).getSheetsData();
