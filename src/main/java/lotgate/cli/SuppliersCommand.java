@@ -5,7 +5,6 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import lotgate.history.HistoryStore;
 import lotgate.history.QualityStatistics;
 import lotgate.report.SentenceText;
@@ -43,8 +42,7 @@ final class SuppliersCommand implements Runnable {
     @Override
     public void run() {
         for (Path report : reports) {
-            String name = report.getFileName().toString().toLowerCase(Locale.ROOT);
-            if (!name.endsWith(".xlsx") && !name.endsWith(".html")) {
+            if (!lotgate.report.SupplierReport.supported(report)) {
                 throw new ParameterException(spec.commandLine(), "--report " + report + ": a ranking report is a .xlsx"
                         + " or .html file");
             }
