@@ -21,6 +21,24 @@ public sealed interface OcModel permits OcModel.Binomial, OcModel.Hypergeometric
     /** The model's name as written in plan files and on the command line. */
     String name();
 
+    /**
+     * P(X = x) for the next n units, after {@code drawn} units with {@code found} counted: a later stage of
+     * a multi-stage or sequential plan. Only a finite lot remembers what was drawn before.
+     */
+    default double exactlyAfter(int drawn, int found, int n, int x, double quality) {
+        return exactly(n, x, quality);
+    }
+
+    /** P(X <= c) for the next n units, after {@code drawn} units with {@code found} counted; 0 when c < 0. */
+    default double atMostAfter(int drawn, int found, int n, int c, double quality) {
+        return c < 0 ? 0.0 : atMost(n, c, quality);
+    }
+
+    /** P(X > c) for the next n units, after {@code drawn} units with {@code found} counted; 1 when c < 0. */
+    default double moreThanAfter(int drawn, int found, int n, int c, double quality) {
+        return c < 0 ? 1.0 : moreThan(n, c, quality);
+    }
+
     /** The lot size this model is tied to, or 0 when it describes a process (type B). */
     default int lotSize() {
         return 0;
@@ -187,6 +205,34 @@ public sealed interface OcModel permits OcModel.Binomial, OcModel.Hypergeometric
         @Override
         public String name() {
             return "hypergeometric";
+        }
+
+        @Override
+        public double exactlyAfter(int drawn, int found, int n, int x, double p) {
+            int left = lotSize - drawn;
+            int bad = defectives(p) - found;
+            if (n > left || bad < 0 || x < 0 || x > n || x > bad || n - x > left - bad) {
+                return 0.0;
+            }
+            return Tails.hypergeometricExactly(left, bad, n, x);
+        }
+
+        @Override
+        public double atMostAfter(int drawn, int found, int n, int c, double p) {
+            if (c < 0) {
+                return 0.0;
+            }
+            int bad = Math.max(0, defectives(p) - found);
+            return Tails.hypergeometricAtMost(lotSize - drawn, Math.min(bad, lotSize - drawn), n, c);
+        }
+
+        @Override
+        public double moreThanAfter(int drawn, int found, int n, int c, double p) {
+            if (c < 0) {
+                return 1.0;
+            }
+            int bad = Math.max(0, defectives(p) - found);
+            return Tails.hypergeometricMoreThan(lotSize - drawn, Math.min(bad, lotSize - drawn), n, c);
         }
 
         private void checkDraw(int n, int c) {

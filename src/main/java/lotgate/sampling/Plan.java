@@ -6,7 +6,7 @@ package lotgate.sampling;
  * <p>Each kind is a record that implements the operating characteristics itself, so that a new kind
  * cannot compile until it answers every question below (Java 17 has no pattern switch).
  */
-public sealed interface Plan permits SinglePlan {
+public sealed interface Plan permits SinglePlan, DoublePlan, MultiplePlan, SequentialPlan {
 
     /** The plan kind's name as written in plan files and in JSON output. */
     String scheme();
@@ -25,6 +25,9 @@ public sealed interface Plan permits SinglePlan {
      * limit for a very large lot).
      */
     double averageOutgoingQuality(OcModel model, double quality, int lotSize);
+
+    /** The average sample number (ASN): the expected number of units inspected to reach a decision. */
+    double averageSampleNumber(OcModel model, double quality);
 
     /** The expected number of units inspected per lot of the given size under rectifying inspection. */
     double averageTotalInspection(OcModel model, double quality, int lotSize);

@@ -42,6 +42,11 @@ public record SinglePlan(int n, int c) implements Plan {
     }
 
     @Override
+    public double averageSampleNumber(OcModel model, double quality) {
+        return n;
+    }
+
+    @Override
     public double averageOutgoingQuality(OcModel model, double quality, int lotSize) {
         if (model instanceof OcModel.Hypergeometric h) {
             // Exact for a finite lot: the D - x nonconforming units an accepted sample did not find stay.

@@ -65,6 +65,11 @@ final class Tails {
     }
 
     static double hypergeometricExactly(int lotSize, int defectives, int n, int x) {
+        // Commons Math answers NaN when the lot holds no nonconforming unit (or only such units).
+        if (defectives == 0 || defectives == lotSize || n == lotSize) {
+            int certain = defectives == 0 ? 0 : defectives == lotSize ? n : defectives;
+            return x == certain ? 1.0 : 0.0;
+        }
         return new HypergeometricDistribution(null, lotSize, defectives, n).probability(x);
     }
 
