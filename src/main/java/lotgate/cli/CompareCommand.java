@@ -11,7 +11,8 @@ import lotgate.report.ChartFile;
 import lotgate.report.Charts;
 import lotgate.sampling.OperatingCharacteristic;
 import lotgate.sampling.RiskPoints;
-import lotgate.sampling.SinglePlan;
+import lotgate.plan.PlanFormat;
+import lotgate.report.PlanWording;
 import lotgate.report.CsvTable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -23,12 +24,13 @@ import picocli.CommandLine.Spec;
 
 /** Puts several plans side by side: their risks at the same AQL and LTPD, key levels, and one OC chart. */
 @Command(name = "compare", mixinStandardHelpOptions = true, sortOptions = false, usageHelpAutoWidth = true,
-        header = "Compare plans side by side and on one OC chart.",
+        header = "Compare plans side by side, on one OC chart and one ASN chart.",
         description = {
                 "Compares plans at the same quality levels: P(accept) at the AQL and the LTPD, the producer's and"
                         + " consumer's risks there, the quality levels at 95%%, 50%% and 10%% acceptance, and the"
-                        + " AOQL. Each PLAN is a saved plan file or a plan written as n,c (such as 45,0), under"
-                        + " --model.",
+                        + " AOQL, and what each costs: the average sample number (ASN) at the AQL and the LTPD and the"
+                        + " most units it can inspect. Each PLAN is a saved plan file of any kind (single, double,"
+                        + " multiple, sequential) or a single plan written as n,c (such as 45,0), under --model.",
                 ""})
 final class CompareCommand implements Runnable {
 
@@ -49,6 +51,10 @@ final class CompareCommand implements Runnable {
     @Option(names = "--chart", paramLabel = "FILE", description = "Draw all OC curves on one chart; .png or .svg.")
     Path chart;
 
+    @Option(names = "--asn-chart", paramLabel = "FILE",
+            description = "Draw all ASN curves (average units inspected per lot) on one chart; .png or .svg.")
+    Path asnChart;
+
     @Mixin
     OutputFormat format;
 
@@ -56,12 +62,13 @@ final class CompareCommand implements Runnable {
     CommandSpec spec;
 
     record Row(PlanChoice choice, OperatingCharacteristic oc, double atAql, double atLtpd,
-            CurveCommand.KeyLevels keys) {
+            CurveCommand.KeyLevels keys, double asnAtAql, double asnAtLtpd) {
     }
 
     @Override
     public void run() {
         CurveCommand.checkChartName(spec, chart);
+        CurveCommand.checkChartName(spec, asnChart);
         List<PlanChoice> choices = new ArrayList<>();
         for (String text : plans) {
             choices.add(PlanChoice.parse(spec, text, models));
@@ -81,11 +88,13 @@ final class CompareCommand implements Runnable {
         for (PlanChoice choice : choices) {
             ModelOptions.checkLevel(spec, choice.model(), "--ltpd", atLtpd);
             OperatingCharacteristic oc = new OperatingCharacteristic(choice.plan(), choice.model(), choice.lotSize());
-            rows.add(new Row(choice, oc, oc.acceptance(choice.model().producerPoint(atAql)),
-                    oc.acceptance(choice.model().consumerPoint(atLtpd)), CurveCommand.KeyLevels.of(oc)));
+            double aqlPoint = choice.model().producerPoint(atAql);
+            double ltpdPoint = choice.model().consumerPoint(atLtpd);
+            rows.add(new Row(choice, oc, oc.acceptance(aqlPoint), oc.acceptance(ltpdPoint), CurveCommand.KeyLevels.of(oc),
+                    oc.asn(aqlPoint), oc.asn(ltpdPoint)));
         }
-        if (chart != null) {
-            drawChart(rows, atAql, atLtpd);
+        if (chart != null || asnChart != null) {
+            drawCharts(rows, atAql, atLtpd);
         }
         PrintWriter out = spec.commandLine().getOut();
         switch (format.kind) {
@@ -96,7 +105,7 @@ final class CompareCommand implements Runnable {
         out.flush();
     }
 
-    private void drawChart(List<Row> rows, double atAql, double atLtpd) {
+    private void drawCharts(List<Row> rows, double atAql, double atLtpd) {
         double range = 0;
         List<ChartCurve> curves = new ArrayList<>();
         for (Row row : rows) {
@@ -108,25 +117,40 @@ final class CompareCommand implements Runnable {
         }
         boolean perUnit = rows.stream().allMatch(r -> !r.choice().model().countsUnits());
         PlanChoice firstChoice = rows.get(0).choice();
-        ChartFile.write(Charts.oc("OC curves compared", perUnit, curves,
-                CurveCommand.marks(firstChoice, atAql, atLtpd)), chart, 900, 600);
+        if (chart != null) {
+            ChartFile.write(Charts.oc("OC curves compared", perUnit, curves,
+                    CurveCommand.marks(firstChoice, atAql, atLtpd)), chart, 900, 600);
+        }
+        if (asnChart != null) {
+            ChartFile.write(Charts.asn("Average sample number compared", perUnit, curves), asnChart, 900, 600);
+        }
     }
 
     private static void printText(PrintWriter out, List<Row> rows, double atAql, double atLtpd) {
         out.println("Plans compared at AQL " + Percent.level(atAql) + " and LTPD " + Percent.level(atLtpd));
         out.println();
-        out.printf("  %-34s %-15s %23s %32s%n", "", "", "----- P(accept) -----", "-- quality where P(accept) is --");
-        out.printf("  %-34s %-15s %11s %11s %10s %10s %10s %10s%n", "plan", "model", "at AQL", "at LTPD",
-                "95%", "50%", "10%", "AOQL");
-        for (Row row : rows) {
-            out.printf("  %-34s %-15s %11s %11s %10s %10s %10s %10s%n", CurveCommand.planLabel(row.choice()),
-                    row.choice().model().name(), Percent.probability(row.atAql()), Percent.probability(row.atLtpd()),
-                    Percent.measured(row.keys().at95()), Percent.measured(row.keys().at50()),
-                    Percent.measured(row.keys().at10()), Percent.measured(row.keys().aoql().limit()));
+        for (int i = 0; i < rows.size(); i++) {
+            PlanChoice choice = rows.get(i).choice();
+            out.printf("  %d  %s, %s model%s%n", i + 1, CurveCommand.planLabel(choice), choice.model().name(),
+                    choice.lotSize() > 0 ? ", lot size " + choice.lotSize() : "");
+        }
+        out.println();
+        out.printf("  %-3s %23s %43s %27s%n", "", "----- P(accept) -----", "----- quality where P(accept) is -----",
+                "---- units inspected ----");
+        out.printf("  %-3s %11s %11s %10s %10s %10s %10s %9s %9s %7s%n", "", "at AQL", "at LTPD", "95%", "50%",
+                "10%", "AOQL", "ASN AQL", "ASN LTPD", "most");
+        for (int i = 0; i < rows.size(); i++) {
+            Row row = rows.get(i);
+            out.printf("  %-3d %11s %11s %10s %10s %10s %10s %9s %9s %7d%n", i + 1, Percent.probability(row.atAql()),
+                    Percent.probability(row.atLtpd()), Percent.measured(row.keys().at95()),
+                    Percent.measured(row.keys().at50()), Percent.measured(row.keys().at10()),
+                    Percent.measured(row.keys().aoql().limit()), units(row.asnAtAql()), units(row.asnAtLtpd()),
+                    row.choice().plan().maxSampleSize());
         }
         out.println();
         out.println("  Producer's risk = 100% - P(accept) at the AQL; consumer's risk = P(accept) at the LTPD.");
         out.println("  AOQL is for the lot size of each plan, or for a very large lot where none is given.");
+        out.println("  ASN: units inspected on average to reach a decision; most: the largest number a lot can need.");
         for (Row row : rows) {
             if (row.choice().saved() != null) {
                 out.println("  " + row.choice().label() + ": fingerprint " + row.choice().saved().shortFingerprint());
@@ -134,13 +158,17 @@ final class CompareCommand implements Runnable {
         }
     }
 
+    private static String units(double value) {
+        return value == Math.rint(value) ? String.format(java.util.Locale.ROOT, "%.0f", value)
+                : String.format(java.util.Locale.ROOT, "%.1f", value);
+    }
+
     private static List<Object> fields(Row row) {
-        SinglePlan plan = (SinglePlan) row.choice().plan();
         List<Object> fields = new ArrayList<>();
         fields.add(row.choice().label());
+        fields.add(row.choice().plan().scheme());
+        fields.add(PlanWording.brief(row.choice().plan()));
         fields.add(row.choice().model().name());
-        fields.add(plan.n());
-        fields.add(plan.c());
         fields.add(row.choice().lotSize() > 0 ? row.choice().lotSize() : "");
         fields.add(row.atAql());
         fields.add(1 - row.atAql());
@@ -149,6 +177,9 @@ final class CompareCommand implements Runnable {
         fields.add(row.keys().at50());
         fields.add(row.keys().at10());
         fields.add(row.keys().aoql().limit());
+        fields.add(row.asnAtAql());
+        fields.add(row.asnAtLtpd());
+        fields.add(row.choice().plan().maxSampleSize());
         return fields;
     }
 
@@ -160,9 +191,9 @@ final class CompareCommand implements Runnable {
             line.add(2, atLtpd);
             table.add(line);
         }
-        return CsvTable.table(List.of("plan", "aql", "ltpd", "model", "n", "c", "lotSize", "acceptanceAtAql",
-                "producerRisk", "consumerRisk", "qualityAtAcceptance95", "qualityAtAcceptance50",
-                "qualityAtAcceptance10", "aoql"), table);
+        return CsvTable.table(List.of("plan", "aql", "ltpd", "scheme", "numbers", "model", "lotSize",
+                "acceptanceAtAql", "producerRisk", "consumerRisk", "qualityAtAcceptance95", "qualityAtAcceptance50",
+                "qualityAtAcceptance10", "aoql", "asnAtAql", "asnAtLtpd", "maxSampleSize"), table);
     }
 
     private static ObjectNode json(List<Row> rows, double atAql, double atLtpd) {
@@ -171,13 +202,13 @@ final class CompareCommand implements Runnable {
         node.put("ltpd", atLtpd);
         ArrayNode list = node.putArray("plans");
         for (Row row : rows) {
-            SinglePlan plan = (SinglePlan) row.choice().plan();
             ObjectNode item = list.addObject();
             item.put("plan", row.choice().label());
-            item.put("scheme", plan.scheme());
+            item.put("scheme", row.choice().plan().scheme());
             item.put("model", row.choice().model().name());
-            item.put("n", plan.n());
-            item.put("c", plan.c());
+            ObjectNode structure = PlanFormat.planJson(row.choice().plan());
+            structure.remove("scheme");
+            item.setAll(structure);
             if (row.choice().lotSize() > 0) {
                 item.put("lotSize", row.choice().lotSize());
             }
@@ -190,6 +221,9 @@ final class CompareCommand implements Runnable {
             item.put("qualityAtAcceptance50", row.keys().at50());
             item.put("qualityAtAcceptance10", row.keys().at10());
             item.put("aoql", row.keys().aoql().limit());
+            item.put("asnAtAql", row.asnAtAql());
+            item.put("asnAtLtpd", row.asnAtLtpd());
+            item.put("maxSampleSize", row.choice().plan().maxSampleSize());
         }
         return node;
     }

@@ -12,7 +12,14 @@ import lotgate.report.Charts;
 import lotgate.sampling.CurvePoint;
 import lotgate.sampling.OperatingCharacteristic;
 import lotgate.sampling.RiskPoints;
+import lotgate.plan.PlanFormat;
+import lotgate.report.PlanWording;
+import lotgate.sampling.DoublePlan;
+import lotgate.sampling.Plan;
+import lotgate.sampling.SequentialPlan;
 import lotgate.sampling.SinglePlan;
+import lotgate.sampling.WaldSequential;
+import lotgate.sentencing.Stopping;
 import lotgate.report.CsvTable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -24,11 +31,13 @@ import picocli.CommandLine.Spec;
 
 /** Tabulates and draws a plan's OC, AOQ and ATI curves with their key quality levels. */
 @Command(name = "curve", mixinStandardHelpOptions = true, sortOptions = false, usageHelpAutoWidth = true,
-        header = "Tabulate and draw a plan's OC, AOQ and ATI curves.",
+        header = "Tabulate and draw a plan's OC, AOQ, ATI and ASN curves.",
         description = {
                 "Shows a plan's operating characteristics over a range of incoming quality levels: P(accept)"
                         + " (the OC curve), AOQ, and ATI when the lot size is known; the quality levels at"
-                        + " P(accept) = 95%%, 50%% (indifference quality) and 10%%; and the AOQL.",
+                        + " P(accept) = 95%%, 50%% (indifference quality) and 10%%; and the AOQL. For double, multiple"
+                        + " and sequential plans also the ASN (average sample number), and for a sequential plan"
+                        + " Wald's approximate P(accept) and ASN beside the exact values of the truncated plan.",
                 "",
                 "Give a saved plan file, or the plan as --sample-size and --acceptance with a model.",
                 ""})
@@ -82,6 +91,15 @@ final class CurveCommand implements Runnable {
             description = "Draw the ATI curve alone (needs a lot size); .png or .svg.")
     Path atiChart;
 
+    @Option(names = "--asn-chart", paramLabel = "FILE",
+            description = "Draw the ASN curve alone (average units inspected per lot); .png or .svg.")
+    Path asnChart;
+
+    @Option(names = "--curtailed",
+            description = "For a double plan: the ASN with inspection of the second sample stopped as soon as the"
+                    + " lot is rejected.")
+    boolean curtailed;
+
     @Mixin
     OutputFormat format;
 
@@ -91,8 +109,11 @@ final class CurveCommand implements Runnable {
     @Override
     public void run() {
         PlanChoice choice = choose(spec, planFile, defectClass, sampleSize, acceptance, models);
-        for (Path file : new Path[] {chart, ocChart, aoqChart, atiChart}) {
+        for (Path file : new Path[] {chart, ocChart, aoqChart, atiChart, asnChart}) {
             checkChartName(spec, file);
+        }
+        if (curtailed && !(choice.plan() instanceof DoublePlan)) {
+            throw new ParameterException(spec.commandLine(), "--curtailed is for double plans");
         }
         if (atiChart != null && choice.lotSize() == 0) {
             throw new ParameterException(spec.commandLine(), "--ati-chart needs a lot size: add --lot-size N");
@@ -165,18 +186,18 @@ final class CurveCommand implements Runnable {
 
     private void drawCharts(PlanChoice choice, OperatingCharacteristic oc, double range, Double markAql,
             Double markLtpd, KeyLevels keys) {
-        if (chart == null && ocChart == null && aoqChart == null && atiChart == null) {
+        if (chart == null && ocChart == null && aoqChart == null && atiChart == null && asnChart == null) {
             return;
         }
         boolean perUnit = !choice.model().countsUnits();
         ChartCurve curve = new ChartCurve(planLabel(choice), oc.curve(range, 400));
         List<Charts.RiskMark> marks = marks(choice, markAql, markLtpd);
-        SinglePlan plan = (SinglePlan) choice.plan();
+        int fewest = fewestInspected(choice.plan());
         String subject = planLabel(choice);
         String about = DesignCommand.modelLine(choice.model(), choice.lotSize());
         if (chart != null) {
             ChartFile.write(Charts.withSubtitle(Charts.all("OC, AOQ and ATI of " + subject, perUnit, curve, marks,
-                    keys.aoql().limit(), keys.aoql().quality(), plan.n(), choice.lotSize()), about), chart, 900,
+                    keys.aoql().limit(), keys.aoql().quality(), fewest, choice.lotSize()), about), chart, 900,
                     choice.lotSize() > 0 ? 1100 : 850);
         }
         if (ocChart != null) {
@@ -189,14 +210,37 @@ final class CurveCommand implements Runnable {
         }
         if (atiChart != null) {
             ChartFile.write(Charts.withSubtitle(Charts.ati("Average total inspection of " + subject, perUnit, curve,
-                    plan.n(), choice.lotSize()), about), atiChart, 900, 600);
+                    fewest, choice.lotSize()), about), atiChart, 900, 600);
+        }
+        if (asnChart != null) {
+            ChartFile.write(Charts.withSubtitle(Charts.asn("Average sample number of " + subject, perUnit,
+                    List.of(curve)), about), asnChart, 900, 600);
         }
     }
 
     static String planLabel(PlanChoice choice) {
-        SinglePlan plan = (SinglePlan) choice.plan();
-        String nc = "n = " + plan.n() + ", c = " + plan.c();
-        return choice.saved() == null ? nc : choice.label() + " (" + nc + ")";
+        String numbers = PlanWording.brief(choice.plan());
+        return choice.saved() == null ? numbers : choice.label() + " (" + numbers + ")";
+    }
+
+    /** The fewest units the plan can inspect: its first stage, or the first unit that can accept. */
+    static int fewestInspected(Plan plan) {
+        if (plan instanceof SequentialPlan sequential) {
+            int first = SchemeDesign.firstUnitAccepting(sequential, 0);
+            return Math.min(first > 0 ? first : sequential.truncation(), sequential.rejectionNumber(1));
+        }
+        return Stopping.stages(plan).get(0).n();
+    }
+
+    /** Wald's approximation for a saved sequential plan, or null. */
+    private static WaldSequential wald(PlanChoice choice) {
+        return choice.plan() instanceof SequentialPlan && choice.designedFor() != null
+                ? WaldSequential.of(choice.designedFor(), choice.model()) : null;
+    }
+
+    private double asn(PlanChoice choice, CurvePoint point) {
+        return curtailed ? ((DoublePlan) choice.plan()).curtailedAverageSampleNumber(choice.model(), point.quality())
+                : point.asn();
     }
 
     private static String quality(PlanChoice choice, double level) {
@@ -208,7 +252,8 @@ final class CurveCommand implements Runnable {
 
     private void printText(PrintWriter out, PlanChoice choice, List<CurvePoint> table, KeyLevels keys,
             Double markAql, Double markLtpd, OperatingCharacteristic oc) {
-        SinglePlan plan = (SinglePlan) choice.plan();
+        boolean staged = !(choice.plan() instanceof SinglePlan);
+        WaldSequential wald = wald(choice);
         out.println("Operating characteristics of " + planLabel(choice));
         out.println("  " + DesignCommand.modelLine(choice.model(), choice.lotSize()));
         if (choice.saved() != null) {
@@ -226,6 +271,12 @@ final class CurveCommand implements Runnable {
         if (ati) {
             heading.append(String.format(" %10s", "ATI"));
         }
+        if (staged) {
+            heading.append(String.format(" %10s", curtailed ? "ASN curt." : "ASN"));
+        }
+        if (wald != null) {
+            heading.append(String.format(" %12s %10s", "Wald P(acc)", "Wald ASN"));
+        }
         out.println(heading);
         for (CurvePoint point : table) {
             StringBuilder row = new StringBuilder(String.format("  %10s", Percent.level(point.quality())));
@@ -236,6 +287,13 @@ final class CurveCommand implements Runnable {
                     Percent.measured(point.aoq())));
             if (ati) {
                 row.append(String.format(" %10.1f", point.ati()));
+            }
+            if (staged) {
+                row.append(String.format(" %10.1f", asn(choice, point)));
+            }
+            if (wald != null) {
+                row.append(String.format(" %12s %10.1f", Percent.probability(wald.acceptance(point.quality())),
+                        wald.averageSampleNumber(point.quality())));
             }
             out.println(row);
         }
@@ -256,29 +314,40 @@ final class CurveCommand implements Runnable {
             out.println("    at the LTPD " + Percent.level(markLtpd) + ": P(accept) = "
                     + Percent.probability(oc.acceptance(choice.model().consumerPoint(markLtpd))));
         }
-        if (plan.c() == 0) {
+        if (wald != null) {
+            out.println();
+            out.println("  Wald's columns approximate the untruncated test; P(accept) and ASN are exact for the plan as"
+                    + " truncated.");
+        }
+        if (choice.plan() instanceof SinglePlan single && single.c() == 0) {
             out.println();
             out.println(Cautions.ZERO_ACCEPTANCE.indent(2).stripTrailing());
         }
     }
 
-    private static String csv(PlanChoice choice, List<CurvePoint> table) {
+    private String csv(PlanChoice choice, List<CurvePoint> table) {
+        WaldSequential wald = wald(choice);
         List<List<Object>> rows = new ArrayList<>();
         for (CurvePoint point : table) {
             rows.add(List.of(point.quality(), point.defectives() >= 0 ? point.defectives() : "",
-                    point.acceptance(), point.aoq(), Double.isNaN(point.ati()) ? "" : point.ati()));
+                    point.acceptance(), point.aoq(), Double.isNaN(point.ati()) ? "" : point.ati(), asn(choice, point),
+                    wald == null ? "" : wald.acceptance(point.quality()),
+                    wald == null ? "" : wald.averageSampleNumber(point.quality())));
         }
-        return CsvTable.table(List.of("quality", "defectivesInLot", "acceptance", "aoq", "ati"), rows);
+        return CsvTable.table(List.of("quality", "defectivesInLot", "acceptance", "aoq", "ati", "asn",
+                "waldAcceptance", "waldAsn"), rows);
     }
 
-    private static ObjectNode json(PlanChoice choice, List<CurvePoint> table, KeyLevels keys, Double markAql,
+    private ObjectNode json(PlanChoice choice, List<CurvePoint> table, KeyLevels keys, Double markAql,
             Double markLtpd, OperatingCharacteristic oc) {
-        SinglePlan plan = (SinglePlan) choice.plan();
+        WaldSequential wald = wald(choice);
         ObjectNode node = Json.object();
-        node.put("scheme", plan.scheme());
+        node.put("scheme", choice.plan().scheme());
         node.put("model", choice.model().name());
-        node.put("n", plan.n());
-        node.put("c", plan.c());
+        ObjectNode structure = PlanFormat.planJson(choice.plan());
+        structure.remove("scheme");
+        node.setAll(structure);
+        node.put("curtailed", curtailed);
         if (choice.lotSize() > 0) {
             node.put("lotSize", choice.lotSize());
         }
@@ -308,6 +377,11 @@ final class CurveCommand implements Runnable {
             row.put("aoq", point.aoq());
             if (!Double.isNaN(point.ati())) {
                 row.put("ati", point.ati());
+            }
+            row.put("asn", asn(choice, point));
+            if (wald != null) {
+                row.put("waldAcceptance", wald.acceptance(point.quality()));
+                row.put("waldAsn", wald.averageSampleNumber(point.quality()));
             }
         }
         return node;

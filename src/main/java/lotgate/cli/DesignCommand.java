@@ -28,12 +28,17 @@ import picocli.CommandLine.Spec;
 
 /** Designs a single-sampling plan from the two risks, or evaluates one given as n and c, and saves it. */
 @Command(name = "design", mixinStandardHelpOptions = true, sortOptions = false, usageHelpAutoWidth = true,
-        header = "Design a single-sampling plan from the producer's and consumer's risks.",
+        header = "Design a sampling plan from the producer's and consumer's risks.",
         description = {
                 "Finds the plan (n, c) with the smallest sample size n whose producer's risk P(reject | AQL) is at"
                         + " most alpha and whose consumer's risk P(accept | LTPD) is at most beta, computed exactly."
                         + " With --acceptance alone: the smallest n for that acceptance number that meets the LTPD"
                         + " point. With --sample-size and --acceptance: the risks of that plan.",
+                "",
+                "--scheme double finds the double plan with the smallest average sample number (ASN) at the AQL"
+                        + " that meets both risks exactly; --scheme sequential gives Wald's item-by-item plan with"
+                        + " its exact risks once truncated; --scheme multiple evaluates stages given with --stage."
+                        + " Each is compared with the single plan for the same risks.",
                 "",
                 "Quality levels and risks are written as percent (1%%, 0.65%%) or as fractions (0.01).",
                 ""})
@@ -75,6 +80,44 @@ final class DesignCommand implements Runnable {
                     + " n is judged on the first units of the sample.")
     List<String> classSpecs = new ArrayList<>();
 
+    @Option(names = "--scheme", paramLabel = "SCHEME", defaultValue = "single",
+            description = "The kind of plan: single (the default), double (a second sample when the first does not"
+                    + " decide; designed for the smallest average sample number), multiple (up to 7 stages, given"
+                    + " with --stage) or sequential (item by item, Wald's lines for both risks).")
+    String scheme;
+
+    @Option(names = "--second-ratio", paramLabel = "K", defaultValue = "1",
+            description = "Double plans: the second sample is K times the first (default ${DEFAULT-VALUE}, equal"
+                    + " samples as in the double plans of ISO 2859-1), or 'free' to search every second sample"
+                    + " size.")
+    String secondRatio;
+
+    @Option(names = "--first-rejection", paramLabel = "R1", converter = Values.Count.class,
+            description = "Double plans: fix the first sample's rejection number r1 (default: c2 + 1, so that the"
+                    + " first sample rejects only what the second could not accept).")
+    Integer firstRejection;
+
+    @Option(names = "--asn-at", paramLabel = "LEVEL", converter = Values.Quality.class,
+            description = "Double plans: the quality level at which the average sample number is minimised"
+                    + " (default: the AQL, where most lots should be).")
+    Double asnAt;
+
+    @Option(names = "--stage", paramLabel = "N:C:R",
+            description = "A given stage of a double or multiple plan, repeatable in order: sample size, acceptance"
+                    + " number (- where the stage cannot accept) and rejection number, on the cumulative count,"
+                    + " e.g. --stage 50:1:4 --stage 100:3 (the last stage's R is C + 1 and may be left out).")
+    List<String> stageSpecs = new ArrayList<>();
+
+    @Option(names = "--truncate-at", paramLabel = "N", converter = Values.Count.class,
+            description = "Sequential plans: the most units inspected (default: 3 times the single plan's n for the"
+                    + " same risks).")
+    Integer truncateAt;
+
+    @Option(names = "--curtailed",
+            description = "Double plans: show the ASN with inspection of the second sample stopped as soon as the"
+                    + " rejection number is reached (the design still minimises the full ASN).")
+    boolean curtailed;
+
     @ArgGroup(exclusive = false)
     SaveOptions save;
 
@@ -112,6 +155,19 @@ final class DesignCommand implements Runnable {
     public void run() {
         OcModel model = models.resolve(spec);
         int lotSize = models.lotSizeOrZero();
+        if (!List.of("single", "double", "multiple", "sequential").contains(scheme)) {
+            throw new ParameterException(spec.commandLine(), "--scheme " + scheme + ": give single, double, multiple"
+                    + " or sequential");
+        }
+        if (!scheme.equals("single")) {
+            new SchemeDesign(this, model, lotSize).run();
+            return;
+        }
+        if (!stageSpecs.isEmpty() || truncateAt != null || firstRejection != null || asnAt != null || curtailed
+                || !secondRatio.equals("1")) {
+            throw new ParameterException(spec.commandLine(), "--stage, --truncate-at, --first-rejection, --asn-at,"
+                    + " --second-ratio and --curtailed are for --scheme double, multiple or sequential");
+        }
         List<ClassRequest> requests = classSpecs.isEmpty()
                 ? List.of(plainRequest(model, lotSize))
                 : classRequests(model, lotSize);
@@ -264,7 +320,7 @@ final class DesignCommand implements Runnable {
         return new ClassOutcome(request, designer.design(points), SavedPlan.SMALLEST_SAMPLE);
     }
 
-    private void checkSaveTarget() {
+    void checkSaveTarget() {
         Path file = save.file;
         if (!file.getFileName().toString().endsWith(".json")) {
             throw new ParameterException(spec.commandLine(), "--save " + file + ": a plan file name must end in .json");
@@ -278,12 +334,12 @@ final class DesignCommand implements Runnable {
         }
     }
 
-    private static String stem(Path file) {
+    static String stem(Path file) {
         String name = file.getFileName().toString();
         return name.substring(0, name.length() - ".json".length());
     }
 
-    private void printNoPlan(PrintWriter out, String reason, OcModel model, int lotSize) {
+    void printNoPlan(PrintWriter out, String reason, OcModel model, int lotSize) {
         switch (format.kind) {
             case json -> {
                 ObjectNode node = Json.object();
@@ -401,14 +457,14 @@ final class DesignCommand implements Runnable {
         }
     }
 
-    private static String pointNote(OcModel model, double point, int lotSize) {
+    static String pointNote(OcModel model, double point, int lotSize) {
         if (model instanceof OcModel.Hypergeometric) {
             return " (D = " + Math.round(point * lotSize) + ")";
         }
         return "";
     }
 
-    private static String verdict(boolean met) {
+    static String verdict(boolean met) {
         return met ? "met" : "NOT MET";
     }
 

@@ -20,6 +20,8 @@ public final class ExitCode {
     public static final int STORE = 7;
     /** Inspection of this supplier's part is discontinued until a corrective action is recorded. */
     public static final int DISCONTINUED = 8;
+    /** Sentencing: a double, multiple or sequential plan has not decided yet; inspect more units. */
+    public static final int NOT_DECIDED = 9;
     /** A fault in lotgate itself; rerun with --debug and report it. */
     public static final int INTERNAL = 70;
 

@@ -32,6 +32,14 @@ import lotgate.sentencing.Evidence;
 import lotgate.sentencing.LotDecision;
 import lotgate.sentencing.Sentence;
 import lotgate.sentencing.Sentencer;
+import lotgate.sentencing.Outcome;
+import lotgate.sentencing.Pending;
+import lotgate.sentencing.Stopping;
+import lotgate.sampling.Plan;
+import lotgate.sampling.SequentialPlan;
+import lotgate.report.ChartFile;
+import lotgate.report.PlanWording;
+import lotgate.report.SamplingChart;
 import lotgate.report.CsvTable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -53,9 +61,14 @@ import picocli.CommandLine.Spec;
                 "",
                 "The lot is recorded in the supplier's history (see --store), unless --no-record.",
                 "",
+                "A double or multiple plan stops at the first sample (stage) whose count decides; a sequential"
+                        + " plan after the first unit at which the count crosses a line. The sheet lists the units in"
+                        + " the order inspected; when the plan has not decided yet, lotgate says how many more units to"
+                        + " inspect (exit code 9) and records nothing.",
+                "",
                 "Exit code 0: accepted; 1: rejected; 4: the sheet holds fewer or more units than the plan samples;"
-                        + " 8: inspection of the part is discontinued; 2 and 3: bad options or input; 7: the history"
-                        + " store cannot be used.",
+                        + " 8: inspection of the part is discontinued; 9: no decision yet, inspect more units;"
+                        + " 2 and 3: bad options or input; 7: the history store cannot be used.",
                 ""})
 final class SentenceCommand implements Runnable {
 
@@ -129,6 +142,12 @@ final class SentenceCommand implements Runnable {
     @Mixin
     StoreOption storeOption;
 
+    @Option(names = "--chart", paramLabel = "FILE",
+            description = "Draw the sampling chart: the count found against units inspected, with the plan's"
+                    + " acceptance and rejection numbers (lines for a sequential plan, steps for a plan in stages);"
+                    + " .png or .svg.")
+    Path chart;
+
     @Option(names = "--report", paramLabel = "FILE",
             description = "Write a lot report: .xlsx (summary, sample, OC chart) or .html (printable); repeatable.")
     List<Path> reports = new ArrayList<>();
@@ -174,11 +193,30 @@ final class SentenceCommand implements Runnable {
                 notices.add(inspection.notice());
             }
             lot = checkLot(lot, plan, notices);
-            int[] cutoffs = plan.classes().stream().mapToInt(c -> c.plan().maxSampleSize()).distinct().toArray();
-            InspectionSample sample = new SampleReader(source, sheet, columns, cutoffs, range[0], range[1]).read();
+            if (chart != null && !plan.unclassified()) {
+                throw new ParameterException(spec.commandLine(), "--chart draws the sampling chart of a plan without"
+                        + " defect classes; plan " + plan.name() + " has criteria per class");
+            }
+            int[] cutoffs = plan.classes().stream().flatMap(c -> Stopping.boundaries(c.plan()).stream())
+                    .mapToInt(Integer::intValue).distinct().toArray();
+            SampleReader reader = new SampleReader(source, sheet, columns, cutoffs, range[0], range[1]);
+            if (plan.classes().stream().anyMatch(c -> c.plan() instanceof SequentialPlan)) {
+                reader.keepSequence();
+            }
+            InspectionSample sample = reader.read();
             checkSampleSize(plan, sample, range);
-            Map<DefectClass, Integer> found = counts(plan, sample);
-            sentence = Sentencer.sentence(plan, found, lot.lotSize(), confidence);
+            Outcome outcome = Sentencer.sentence(plan, counts(plan, sample), lot.lotSize(), confidence);
+            if (outcome instanceof Pending pending) {
+                printPending(spec.commandLine().getOut(), plan, sample, pending, lot);
+                throw new Main.Failure(ExitCode.NOT_DECIDED, null);
+            }
+            sentence = (Sentence) outcome;
+            int used = sentence.classes().stream().mapToInt(ClassVerdict::inspected).max().orElse(sample.units());
+            if (used < sample.units()) {
+                ClassVerdict first = sentence.classes().get(0);
+                notices.add("the plan decided at " + first.step() + ", after " + used + " units; the other "
+                        + (sample.units() - used) + " units on the sheet do not count toward the verdict");
+            }
             Path appliedPlan = inspection == null ? planFile : inspection.planFile();
             LotDecision decision = new LotDecision(lot, plan, appliedPlan, sample, Sha256.of(sheetFile), sentence,
                     confidence, Instant.now().truncatedTo(ChronoUnit.SECONDS), Version.number(), notices);
@@ -191,6 +229,9 @@ final class SentenceCommand implements Runnable {
             }
             if (record != null) {
                 AtomicWrite.writeString(record, Json.text(DecisionJson.of(decision)) + "\n");
+            }
+            if (chart != null) {
+                ChartFile.write(SamplingChart.of(decision), chart, 900, 560);
             }
             PrintWriter out = spec.commandLine().getOut();
             switch (format.kind) {
@@ -220,7 +261,41 @@ final class SentenceCommand implements Runnable {
         }
     }
 
+    /** The counts the plan is judged on, by its model: units, or nonconformities, over the first m units. */
+    private Sentencer.Counts counts(SavedPlan plan, InspectionSample sample) {
+        checkClasses(plan, sample);
+        boolean units = plan.model().countsUnits();
+        long[] cumulative = null;
+        if (sample.sequence() != null) {
+            cumulative = new long[sample.units() + 1];
+            for (int i = 0; i < sample.units(); i++) {
+                int count = sample.sequence()[i];
+                cumulative[i + 1] = cumulative[i] + (units ? (count > 0 ? 1 : 0) : count);
+            }
+        }
+        long[] prefix = cumulative;
+        return new Sentencer.Counts() {
+            @Override
+            public int units() {
+                return sample.units();
+            }
+
+            @Override
+            public long countAt(DefectClass defectClass, int m) {
+                if (prefix != null && defectClass == DefectClass.ANY) {
+                    return prefix[m];
+                }
+                Tally tally = m == sample.units() ? sample.all() : sample.tallies().get(m);
+                if (tally == null) {
+                    throw new IllegalStateException("no count kept after " + m + " units");
+                }
+                return units ? tally.nonconformingUnits(defectClass) : tally.nonconformities(defectClass);
+            }
+        };
+    }
+
     private void checkOutputs() {
+        CurveCommand.checkChartName(spec, chart);
         if (record != null && !record.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".json")) {
             throw new ParameterException(spec.commandLine(), "--record " + record + ": a decision record is a .json file");
         }
@@ -301,6 +376,25 @@ final class SentenceCommand implements Runnable {
     }
 
     private void checkSampleSize(SavedPlan plan, InspectionSample sample, int[] range) {
+        Plan first = plan.classes().get(0).plan();
+        if (first instanceof SequentialPlan) {
+            if (sample.units() == 0) {
+                throw new Main.Failure(ExitCode.INCOMPLETE_SAMPLE, "no units recorded in " + sheetFile + "; record the"
+                        + " units in the order inspected (nothing was recorded)");
+            }
+            return;
+        }
+        List<Integer> boundaries = Stopping.boundaries(first);
+        if (boundaries.size() > 1) {
+            if (!boundaries.contains(sample.units())) {
+                String ends = String.join(", ", boundaries.stream().map(String::valueOf).toList());
+                throw new Main.Failure(ExitCode.INCOMPLETE_SAMPLE, sheetFile + " holds " + sample.units() + " units"
+                        + (sample.units() == 0 ? "" : ", " + rowsOf(sample)) + ", but plan " + plan.name()
+                        + "'s samples end at " + ends + " units; record whole samples in the order inspected"
+                        + (range[0] > 0 ? "" : " (or name the rows with --rows FIRST-LAST)") + " (nothing was recorded)");
+            }
+            return;
+        }
         int wanted = plan.sampleSize();
         String rowsRead = sample.units() == 0 ? "" : ", " + rowsOf(sample);
         if (sample.units() < wanted) {
@@ -315,6 +409,64 @@ final class SentenceCommand implements Runnable {
         }
     }
 
+    /** A plan in stages or a sequential plan that has not decided yet: what to inspect next. */
+    private void printPending(PrintWriter out, SavedPlan plan, InspectionSample sample, Pending pending,
+            LotDetails lot) {
+        Stopping.Point point = pending.point();
+        String counted = DesignCommand.unitWord(plan.model(), (int) Math.min(Integer.MAX_VALUE, point.found()));
+        String what;
+        if (pending.plan() instanceof SequentialPlan sequential) {
+            what = "inspect the next unit and sentence again with it on the sheet; with no further " + (plan.model()
+                    .countsUnits() ? "nonconforming unit" : "nonconformity") + " the lot is accepted after unit "
+                    + pending.cleanAcceptance() + " (the plan stops by unit " + sequential.truncation() + " at the latest)";
+        } else {
+            what = "inspect the " + (pending.plan() instanceof lotgate.sampling.DoublePlan ? "second sample"
+                    : "next stage") + ": " + point.moreUnits() + " more units, then sentence again with all "
+                    + pending.nextTotal() + " units on the sheet";
+        }
+        switch (format.kind) {
+            case json -> {
+                var node = Json.object();
+                node.put("verdict", "continue");
+                node.put("lot", lot.lot());
+                node.put("plan", plan.name());
+                node.put("planFingerprint", plan.fingerprint());
+                node.put("inspected", point.inspected());
+                node.put("found", point.found());
+                node.put("step", point.step());
+                if (point.acceptanceNumber() >= 0) {
+                    node.put("acceptanceNumber", point.acceptanceNumber());
+                } else {
+                    node.putNull("acceptanceNumber");
+                }
+                node.put("rejectionNumber", point.rejectionNumber());
+                node.put("moreUnits", point.moreUnits());
+                node.put("nextTotal", pending.nextTotal());
+                if (pending.cleanAcceptance() > 0) {
+                    node.put("acceptedIfCleanAfterUnit", pending.cleanAcceptance());
+                }
+                node.put("instruction", what);
+                out.println(Json.text(node));
+            }
+            case csv -> out.print(CsvTable.table(List.of("lot", "verdict", "inspected", "found", "step", "moreUnits",
+                    "nextTotal", "planFingerprint"), List.of(List.of(lot.lot(), "continue", point.inspected(),
+                    point.found(), point.step(), point.moreUnits(), pending.nextTotal(), plan.fingerprint()))));
+            case text -> {
+                out.println("NO DECISION YET " + lotLine(lot));
+                out.println("  " + point.found() + " " + counted + " found in " + point.inspected() + " units ("
+                        + point.step() + "): above the acceptance number " + PlanWording.acceptance(point.acceptanceNumber())
+                        + " and below the rejection number " + point.rejectionNumber());
+                out.println("  plan " + plan.name() + " (fingerprint " + plan.shortFingerprint() + "), "
+                        + PlanWording.brief(pending.plan()));
+                out.println("  sample of " + sample.units() + " units from " + sample.file() + ", " + rowsOf(sample));
+                out.println();
+                out.println("  Next: " + what.replace("; ", ";\n        ") + ".");
+                out.println("  Nothing was recorded.");
+            }
+        }
+        out.flush();
+    }
+
     private static String rowsOf(InspectionSample sample) {
         String rows = "rows " + sample.firstRow() + " to " + sample.lastRow();
         return sample.file().toString().toLowerCase(Locale.ROOT).endsWith(".csv") ? rows
@@ -326,8 +478,8 @@ final class SentenceCommand implements Runnable {
                 : "sheet '" + sample.sheet() + "' row " + row;
     }
 
-    /** The count each class of the plan is judged on, by the plan's model: units, or nonconformities. */
-    private Map<DefectClass, Integer> counts(SavedPlan plan, InspectionSample sample) {
+    /** Checks that the sheet records what the plan judges: its way of counting and its defect classes. */
+    private void checkClasses(SavedPlan plan, InspectionSample sample) {
         boolean units = plan.model().countsUnits();
         if (sample.passFail() && !units) {
             throw new SheetException(sheetFile, "the sheet records pass or fail per unit, but plan " + plan.name()
@@ -355,14 +507,6 @@ final class SentenceCommand implements Runnable {
                 }
             }
         }
-        Map<DefectClass, Integer> found = new EnumMap<>(DefectClass.class);
-        for (ClassPlan criteria : plan.classes()) {
-            Tally tally = sample.tallies().get(criteria.plan().maxSampleSize());
-            long count = units ? tally.nonconformingUnits(criteria.defectClass())
-                    : tally.nonconformities(criteria.defectClass());
-            found.put(criteria.defectClass(), (int) Math.min(Integer.MAX_VALUE, count));
-        }
-        return found;
     }
 
     static String lotLine(LotDetails lot) {
@@ -398,15 +542,19 @@ final class SentenceCommand implements Runnable {
         out.println("  " + SentenceText.reason(decision));
         out.println("  plan " + decision.plan().name() + " (fingerprint " + decision.plan().shortFingerprint() + "), "
                 + DesignCommand.modelLine(decision.plan().model(), decision.lot().lotSize()));
+        if (!(decision.plan().classes().get(0).plan() instanceof lotgate.sampling.SinglePlan)) {
+            out.println("  " + decision.plan().plan().scheme() + " plan: " + PlanWording.brief(decision.plan().plan()));
+        }
         out.println("  sample of " + sample.units() + " units from " + sample.file() + ", " + rowsOf(sample));
         out.println();
         String what = decision.countsUnits() ? "nonconforming units" : "nonconformities";
-        out.printf("  %-9s %10s %7s %13s %10s  %s%n", "class", "inspected", "found", "accept up to", "reject at",
-                "verdict");
+        boolean staged = sentence.classes().stream().anyMatch(v -> !(v.plan() instanceof lotgate.sampling.SinglePlan));
+        String row = staged ? "  %-9s %10s %7s %13s %10s  %-8s %s%n" : "  %-9s %10s %7s %13s %10s  %s%n";
+        out.printf(row, "class", "inspected", "found", "accept up to", "reject at", "verdict", "decided at");
         for (ClassVerdict verdict : sentence.classes()) {
-            out.printf("  %-9s %10d %7d %13d %10d  %s%n", verdict.defectClass().label(), verdict.inspected(),
-                    verdict.found(), verdict.acceptanceNumber(), verdict.rejectionNumber(),
-                    verdict.accepted() ? "accept" : "REJECT");
+            out.printf(row, verdict.defectClass().label(), verdict.inspected(), verdict.found(),
+                    PlanWording.acceptance(verdict.acceptanceNumber()), verdict.rejectionNumber(),
+                    verdict.accepted() ? "accept" : "REJECT", verdict.step());
         }
         out.println("  (found: " + what + ")");
         out.println();
@@ -427,6 +575,9 @@ final class SentenceCommand implements Runnable {
         for (Path report : reports) {
             out.println("  report written to " + report);
         }
+        if (chart != null) {
+            out.println("  sampling chart written to " + chart);
+        }
     }
 
     private static String csv(LotDecision decision) {
@@ -434,7 +585,8 @@ final class SentenceCommand implements Runnable {
         for (ClassVerdict verdict : decision.sentence().classes()) {
             Evidence evidence = verdict.evidence();
             rows.add(List.of(decision.lot().lot(), verdict.defectClass().label(), verdict.inspected(), verdict.found(),
-                    verdict.acceptanceNumber(), verdict.rejectionNumber(), verdict.accepted() ? "accept" : "reject",
+                    PlanWording.acceptance(verdict.acceptanceNumber()), verdict.rejectionNumber(),
+                    verdict.accepted() ? "accept" : "reject",
                     evidence.pValue(), evidence.lower(), evidence.upper(),
                     evidence.lotUpperBound() >= 0 ? evidence.lotUpperBound() : "", decision.sentence().verdict(),
                     decision.plan().fingerprint(), decision.sheetSha256()));

@@ -8,6 +8,8 @@ import java.util.List;
 import lotgate.plan.ClassPlan;
 import lotgate.plan.PlanFormat;
 import lotgate.plan.SavedPlan;
+import lotgate.report.PlanWording;
+import lotgate.sampling.Plan;
 import lotgate.sampling.SinglePlan;
 import lotgate.report.CsvTable;
 import picocli.CommandLine.Command;
@@ -72,10 +74,7 @@ final class ShowCommand implements Runnable {
     }
 
     private static void putClass(ObjectNode node, ClassPlan criteria) {
-        SinglePlan plan = (SinglePlan) criteria.plan();
-        node.put("scheme", plan.scheme());
-        node.put("n", plan.n());
-        node.put("c", plan.c());
+        node.setAll(lotgate.plan.PlanFormat.planJson(criteria.plan()));
         node.put("aql", criteria.designedFor().aql());
         node.put("alpha", criteria.designedFor().alpha());
         node.put("ltpd", criteria.designedFor().ltpd());
@@ -88,17 +87,18 @@ final class ShowCommand implements Runnable {
     private String csv(SavedPlan saved) {
         List<List<Object>> rows = new ArrayList<>();
         for (ClassPlan criteria : saved.classes()) {
-            SinglePlan plan = (SinglePlan) criteria.plan();
+            Plan plan = criteria.plan();
             rows.add(List.of(planFile.toString(), saved.name(), criteria.defectClass().label(), saved.model().name(),
-                    plan.n(), plan.c(), saved.lotSize() > 0 ? saved.lotSize() : "", criteria.achieved().producerRisk(),
+                    plan.scheme(), PlanWording.brief(plan), plan.maxSampleSize(),
+                    saved.lotSize() > 0 ? saved.lotSize() : "", criteria.achieved().producerRisk(),
                     criteria.achieved().consumerRisk(), saved.fingerprint()));
         }
-        return CsvTable.table(List.of("file", "name", "class", "model", "n", "c", "lotSize", "producerRisk", "consumerRisk",
-                "fingerprint"), rows);
+        return CsvTable.table(List.of("file", "name", "class", "model", "scheme", "plan", "maxSampleSize", "lotSize",
+                "producerRisk", "consumerRisk", "fingerprint"), rows);
     }
 
     private void printText(PrintWriter out, SavedPlan saved) {
-        out.println("Plan file " + planFile + ": valid (format version " + PlanFormat.VERSION + ")");
+        out.println("Plan file " + planFile + ": valid (lotgate plan format)");
         out.println("  name         " + saved.name());
         if (!saved.description().isBlank()) {
             out.println("  description  " + saved.description());
@@ -106,9 +106,11 @@ final class ShowCommand implements Runnable {
         out.println("  created      " + saved.created());
         out.println("  model        " + DesignCommand.modelLine(saved.model(), saved.lotSize()));
         for (ClassPlan criteria : saved.classes()) {
-            SinglePlan plan = (SinglePlan) criteria.plan();
+            Plan plan = criteria.plan();
             String heading = saved.unclassified() ? "plan" : criteria.defectClass().label();
-            out.printf("  %-12s n = %d, c = %d (reject at %d)%n", heading, plan.n(), plan.c(), plan.rejectionNumber());
+            out.printf("  %-12s %s%n", heading, plan instanceof SinglePlan single ? "n = " + single.n() + ", c = "
+                    + single.c() + " (reject at " + single.rejectionNumber() + ")"
+                    : plan.scheme() + ": " + PlanWording.brief(plan));
             out.println("               designed for AQL " + Percent.level(criteria.designedFor().aql()) + " with alpha "
                     + Percent.level(criteria.designedFor().alpha()) + ", LTPD "
                     + Percent.level(criteria.designedFor().ltpd()) + " with beta "

@@ -16,11 +16,13 @@ import lotgate.plan.DefectClass;
  * @param defectTypes      nonconforming units per defect type named in the defect column
  * @param firstCriticalRow the first row with a critical nonconformity, or -1
  * @param nonconformingRows the sheet rows of all nonconforming units
+ * @param sequence         each unit's nonconformities in sheet order, when the reader was asked to keep them;
+ *                         else null
  */
 public record InspectionSample(Path file, String sheet, int headerRow, List<String> headers, boolean passFail,
         Set<DefectClass> classColumns, int units, int firstRow, int lastRow, Map<Integer, Tally> tallies,
         Tally all, List<InspectedUnit> nonconforming, int nonconformingTotal, Map<String, Integer> defectTypes,
-        int firstCriticalRow, BitSet nonconformingRows) {
+        int firstCriticalRow, BitSet nonconformingRows, int[] sequence) {
 
     public InspectionSample {
         nonconformingRows = (BitSet) nonconformingRows.clone();

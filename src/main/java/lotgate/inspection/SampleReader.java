@@ -47,6 +47,7 @@ public final class SampleReader implements RowHandler {
     private int firstCriticalRow = -1;
     private final UnitIds unitIds = new UnitIds();
     private final java.util.BitSet nonconformingRows = new java.util.BitSet();
+    private int[] sequence;
 
     /**
      * @param sheet   the sheet to read, or null for the first sheet not named "lot"
@@ -71,6 +72,15 @@ public final class SampleReader implements RowHandler {
         return names.stream().filter(n -> !n.equalsIgnoreCase(LotDetails.SHEET)).findFirst().orElse(names.get(0));
     }
 
+    /**
+     * Also keeps every unit's count of nonconformities in sheet order (1 for a failed unit of a pass/fail
+     * sheet), for plans that decide unit by unit.
+     */
+    public SampleReader keepSequence() {
+        sequence = new int[64];
+        return this;
+    }
+
     /** Reads the whole sheet and checks unit identifiers for repeats. */
     public InspectionSample read() {
         if (!source.sheetNames().contains(sheet)) {
@@ -85,7 +95,8 @@ public final class SampleReader implements RowHandler {
         return new InspectionSample(source.file(), sheet, headerRow, List.copyOf(headers), passFail,
                 Set.copyOf(classColumns), units, firstRow, lastRow, Map.copyOf(tallies),
                 new Tally(units, unitCounts, nonconformityCounts), List.copyOf(kept), nonconformingTotal,
-                Map.copyOf(defectTypes), firstCriticalRow, nonconformingRows);
+                Map.copyOf(defectTypes), firstCriticalRow, nonconformingRows,
+                sequence == null ? null : java.util.Arrays.copyOf(sequence, units));
     }
 
     private String where() {
@@ -233,6 +244,12 @@ public final class SampleReader implements RowHandler {
                         ? defect : "(other types)";
                 defectTypes.merge(type, 1, Integer::sum);
             }
+        }
+        if (sequence != null) {
+            if (units == sequence.length) {
+                sequence = java.util.Arrays.copyOf(sequence, 2 * units);
+            }
+            sequence[units] = passFail ? (failed ? 1 : 0) : critical + major + minor;
         }
         units++;
         for (int cutoff : cutoffs) {

@@ -27,7 +27,12 @@ import lotgate.sampling.OcModel;
 import lotgate.sampling.Plan;
 import lotgate.sampling.PlanRisks;
 import lotgate.sampling.RiskPoints;
+import lotgate.sampling.DoublePlan;
+import lotgate.sampling.MultiplePlan;
+import lotgate.sampling.SequentialPlan;
 import lotgate.sampling.SinglePlan;
+import lotgate.sampling.Stage;
+import lotgate.sampling.WaldSequential;
 
 /**
  * Reads and writes plan files (format "lotgate-plan"; writes version 2, reads 1 and 2) and computes
@@ -38,7 +43,9 @@ import lotgate.sampling.SinglePlan;
  */
 public final class PlanFormat {
     public static final String FORMAT = "lotgate-plan";
-    public static final int VERSION = 2;
+    public static final int VERSION = 3;
+    /** The version written for plans that only hold single plans, so that lotgate 0.1.0 still reads them. */
+    static final int SINGLE_ONLY_VERSION = 2;
     /** A plan file is a few hundred bytes; anything this large is not one. */
     private static final long LARGEST_FILE = 1 << 20;
     /** Relative agreement required between recorded and recomputed risks. */
@@ -96,7 +103,8 @@ public final class PlanFormat {
     static ObjectNode toJson(SavedPlan saved) {
         ObjectNode root = JsonNodeFactory.instance.objectNode();
         root.put("format", FORMAT);
-        root.put("formatVersion", VERSION);
+        boolean singleOnly = saved.classes().stream().allMatch(c -> c.plan() instanceof SinglePlan);
+        root.put("formatVersion", singleOnly ? SINGLE_ONLY_VERSION : VERSION);
         root.put("name", saved.name());
         root.put("description", saved.description());
         root.put("created", saved.created().toString());
@@ -125,15 +133,38 @@ public final class PlanFormat {
         return root;
     }
 
-    /** A plan's stage structure as JSON, as plan files and records hold it. */
+    /** A plan's stage structure as JSON, as plan files, records and outputs hold it. */
     public static ObjectNode planJson(Plan plan) {
         ObjectNode node = JsonNodeFactory.instance.objectNode();
         node.put("scheme", plan.scheme());
         if (plan instanceof SinglePlan single) {
             node.put("n", single.n());
             node.put("c", single.c());
+        } else if (plan instanceof DoublePlan twice) {
+            putStages(node, twice.stages());
+        } else if (plan instanceof MultiplePlan multiple) {
+            putStages(node, multiple.stages());
+        } else if (plan instanceof SequentialPlan sequential) {
+            node.put("h1", sequential.h1());
+            node.put("h2", sequential.h2());
+            node.put("s", sequential.slope());
+            node.put("truncation", sequential.truncation());
         }
         return node;
+    }
+
+    private static void putStages(ObjectNode node, List<Stage> stages) {
+        var list = node.putArray("stages");
+        for (Stage stage : stages) {
+            ObjectNode entry = list.addObject();
+            entry.put("n", stage.n());
+            if (stage.c() == Stage.NO_ACCEPTANCE) {
+                entry.putNull("c");
+            } else {
+                entry.put("c", stage.c());
+            }
+            entry.put("r", stage.r());
+        }
     }
 
     /** The plan file's JSON, for embedding in decision records. */
@@ -279,7 +310,7 @@ public final class PlanFormat {
 
         private ClassPlan criteria(JsonNode container, String prefix, DefectClass defectClass, OcModel model,
                 int lotSize) {
-            Plan plan = plan(container, prefix, lotSize);
+            Plan plan = plan(container, prefix, lotSize, defectClass);
             JsonNode design = object(container, prefix + "designedFor");
             RiskPoints points;
             try {
@@ -290,9 +321,23 @@ public final class PlanFormat {
                 throw invalid("field '" + prefix + "designedFor': " + e.getMessage());
             }
             String method = text(design, prefix + "designedFor.method");
-            if (!Set.of(SavedPlan.SMALLEST_SAMPLE, SavedPlan.FIXED_ACCEPTANCE, SavedPlan.GIVEN).contains(method)) {
-                throw invalid("field '" + prefix + "designedFor.method' must be " + SavedPlan.SMALLEST_SAMPLE + ", "
-                        + SavedPlan.FIXED_ACCEPTANCE + " or " + SavedPlan.GIVEN + ", got \"" + method + "\"");
+            Set<String> methods = switch (plan.scheme()) {
+                case "single" -> Set.of(SavedPlan.SMALLEST_SAMPLE, SavedPlan.FIXED_ACCEPTANCE, SavedPlan.GIVEN);
+                case "double" -> Set.of(SavedPlan.SMALLEST_ASN, SavedPlan.GIVEN);
+                case "sequential" -> Set.of(SavedPlan.WALD);
+                default -> Set.of(SavedPlan.GIVEN);
+            };
+            if (!methods.contains(method)) {
+                throw invalid("field '" + prefix + "designedFor.method' must be " + String.join(" or ",
+                        methods.stream().sorted().toList()) + " for a " + plan.scheme() + " plan, got \"" + method
+                        + "\"");
+            }
+            if (plan instanceof SequentialPlan sequential) {
+                try {
+                    checkLines(prefix, sequential, WaldSequential.of(points, model));
+                } catch (IllegalArgumentException e) {
+                    throw invalid("field '" + prefix + "designedFor': " + e.getMessage());
+                }
             }
             return new ClassPlan(defectClass, plan, points, method, PlanRisks.of(plan, model, points));
         }
@@ -316,21 +361,115 @@ public final class PlanFormat {
             return OcModel.of(name, lotSize);
         }
 
-        private Plan plan(JsonNode container, String prefix, int lotSize) {
+        private Plan plan(JsonNode container, String prefix, int lotSize, DefectClass defectClass) {
             JsonNode plan = object(container, prefix + "plan");
             String scheme = text(plan, prefix + "plan.scheme");
-            if (!scheme.equals("single")) {
-                throw invalid("field '" + prefix + "plan.scheme' must be single, got \"" + scheme + "\"");
+            int version = root.get("formatVersion").asInt();
+            Set<String> schemes = version < VERSION ? Set.of("single")
+                    : Set.of("single", "double", "multiple", "sequential");
+            if (!schemes.contains(scheme)) {
+                throw invalid("field '" + prefix + "plan.scheme' must be " + String.join(" or ",
+                        schemes.stream().sorted().toList()) + " in format version " + version + ", got \"" + scheme
+                        + "\"");
             }
+            Set<String> fields = switch (scheme) {
+                case "double", "multiple" -> Set.of("scheme", "stages");
+                case "sequential" -> Set.of("scheme", "h1", "h2", "s", "truncation");
+                default -> Set.of("scheme", "n", "c");
+            };
+            for (Iterator<String> it = plan.fieldNames(); it.hasNext();) {
+                String field = it.next();
+                if (!fields.contains(field)) {
+                    throw invalid("unknown field '" + prefix + "plan." + field + "' for a " + scheme + " plan");
+                }
+            }
+            if (!scheme.equals("single") && defectClass != DefectClass.ANY) {
+                throw invalid("field '" + prefix + "plan.scheme': a " + scheme + " plan cannot hold criteria per defect"
+                        + " class (only single plans can)");
+            }
+            Plan result;
+            try {
+                result = switch (scheme) {
+                    case "double" -> doublePlan(plan, prefix);
+                    case "multiple" -> new MultiplePlan(stages(plan, prefix + "plan."));
+                    case "sequential" -> new SequentialPlan(number(plan, prefix + "plan.h1"),
+                            number(plan, prefix + "plan.h2"), number(plan, prefix + "plan.s"),
+                            wholeNumber(plan, prefix + "plan.truncation", 1));
+                    default -> singlePlan(plan, prefix);
+                };
+            } catch (IllegalArgumentException e) {
+                throw invalid("field '" + prefix + "plan': " + e.getMessage());
+            }
+            if (lotSize > 0 && result.maxSampleSize() > lotSize) {
+                throw invalid("field '" + prefix + "plan' may inspect " + result.maxSampleSize()
+                        + " units, more than the lot size " + lotSize);
+            }
+            return result;
+        }
+
+        private Plan singlePlan(JsonNode plan, String prefix) {
             int n = wholeNumber(plan, prefix + "plan.n", 1);
             int c = wholeNumber(plan, prefix + "plan.c", 0);
             if (c >= n) {
                 throw invalid("field '" + prefix + "plan.c' must be below plan.n = " + n + ", got " + c);
             }
-            if (lotSize > 0 && n > lotSize) {
-                throw invalid("field '" + prefix + "plan.n' = " + n + " exceeds the lot size " + lotSize);
-            }
             return new SinglePlan(n, c);
+        }
+
+        private Plan doublePlan(JsonNode plan, String prefix) {
+            List<Stage> stages = stages(plan, prefix + "plan.");
+            if (stages.size() != 2) {
+                throw invalid("field '" + prefix + "plan.stages' must hold 2 stages for a double plan, got "
+                        + stages.size());
+            }
+            Stage first = stages.get(0);
+            Stage second = stages.get(1);
+            if (first.c() == Stage.NO_ACCEPTANCE) {
+                throw invalid("field '" + prefix + "plan.stages[0].c' must be a number for a double plan");
+            }
+            return new DoublePlan(first.n(), first.c(), first.r(), second.n(), second.c());
+        }
+
+        private List<Stage> stages(JsonNode plan, String prefix) {
+            JsonNode list = plan.get("stages");
+            if (list == null || !list.isArray() || list.isEmpty()) {
+                throw invalid("field '" + prefix + "stages' must be a list of stages");
+            }
+            List<Stage> stages = new java.util.ArrayList<>();
+            for (int i = 0; i < list.size(); i++) {
+                String where = prefix + "stages[" + i + "]";
+                JsonNode entry = list.get(i);
+                if (!entry.isObject()) {
+                    throw invalid("field '" + where + "' must be an object");
+                }
+                for (Iterator<String> it = entry.fieldNames(); it.hasNext();) {
+                    String field = it.next();
+                    if (!Set.of("n", "c", "r").contains(field)) {
+                        throw invalid("unknown field '" + where + "." + field + "'");
+                    }
+                }
+                if (!entry.has("c")) {
+                    throw invalid("field '" + where + ".c' is missing (null for a stage that cannot accept)");
+                }
+                int c = entry.get("c").isNull() ? Stage.NO_ACCEPTANCE : wholeNumber(entry, where + ".c", 0);
+                try {
+                    stages.add(new Stage(wholeNumber(entry, where + ".n", 1), c, wholeNumber(entry, where + ".r", 1)));
+                } catch (IllegalArgumentException e) {
+                    throw invalid("field '" + where + "': " + e.getMessage());
+                }
+            }
+            return stages;
+        }
+
+        private void checkLines(String prefix, SequentialPlan plan, WaldSequential lines) {
+            double[][] pairs = {{plan.h1(), lines.h1()}, {plan.h2(), lines.h2()}, {plan.slope(), lines.slope()}};
+            String[] names = {"h1", "h2", "s"};
+            for (int i = 0; i < pairs.length; i++) {
+                if (Math.abs(pairs[i][0] - pairs[i][1]) > 1e-12 * Math.abs(pairs[i][1])) {
+                    throw invalid("field '" + prefix + "plan." + names[i] + "' is " + pairs[i][0] + " but Wald's line"
+                            + " for the design points gives " + pairs[i][1] + ": the file is inconsistent");
+                }
+            }
         }
 
         private JsonNode field(JsonNode parent, String path) {

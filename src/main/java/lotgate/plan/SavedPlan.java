@@ -22,6 +22,10 @@ public record SavedPlan(String name, String description, Instant created, OcMode
     public static final String SMALLEST_SAMPLE = "smallest-sample";
     public static final String FIXED_ACCEPTANCE = "fixed-acceptance-number";
     public static final String GIVEN = "given";
+    /** A double plan with the smallest average sample number that meets both risks. */
+    public static final String SMALLEST_ASN = "smallest-asn";
+    /** A sequential plan with Wald's lines for the design points. */
+    public static final String WALD = "wald";
 
     public SavedPlan {
         Objects.requireNonNull(name, "name");

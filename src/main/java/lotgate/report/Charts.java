@@ -70,6 +70,81 @@ public final class Charts {
         return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, true));
     }
 
+    /** ASN curves: the units inspected on average to reach a decision, against incoming quality. */
+    public static JFreeChart asn(String title, boolean perUnit, List<ChartCurve> curves) {
+        XYSeriesCollection data = new XYSeriesCollection();
+        for (ChartCurve curve : curves) {
+            data.addSeries(series(curve, CurvePoint::asn));
+        }
+        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
+        for (int i = 0; i < curves.size(); i++) {
+            renderer.setSeriesPaint(i, PALETTE[i % PALETTE.length]);
+            renderer.setSeriesStroke(i, new BasicStroke(2f));
+        }
+        NumberAxis units = new NumberAxis("Average sample number (units)");
+        units.setAutoRangeIncludesZero(true);
+        XYPlot plot = new XYPlot(data, qualityAxisOf(perUnit), units, renderer);
+        plot.getDomainAxis().setRange(0, widest(curves));
+        return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, style(plot), true));
+    }
+
+    /**
+     * The sampling chart of a lot: the count found against the units inspected, with the counts that accept
+     * and those that reject at each point where the plan may stop.
+     *
+     * @param acceptance per unit inspected (index m), the largest count that accepts there, or NaN where the plan
+     *                   cannot stop; likewise {@code rejection}
+     * @param path       the count found after each unit (index m), or NaN where it is not known
+     */
+    public static JFreeChart sampling(String title, boolean units, double[] acceptance, double[] rejection,
+            double[] path, boolean lines) {
+        XYSeriesCollection data = new XYSeriesCollection();
+        XYSeries accept = new XYSeries("Accept at or below", false, true);
+        XYSeries reject = new XYSeries("Reject at or above", false, true);
+        XYSeries found = new XYSeries("Count found in this lot", false, true);
+        for (int m = 1; m < acceptance.length; m++) {
+            if (!Double.isNaN(acceptance[m])) {
+                accept.add(m, acceptance[m]);
+            }
+            if (!Double.isNaN(rejection[m])) {
+                reject.add(m, rejection[m]);
+            }
+        }
+        found.add(0, 0);
+        for (int m = 1; m < path.length; m++) {
+            if (!Double.isNaN(path[m])) {
+                found.add(m, path[m]);
+            }
+        }
+        data.addSeries(accept);
+        data.addSeries(reject);
+        data.addSeries(found);
+        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, !lines);
+        renderer.setSeriesPaint(0, PALETTE[2]);
+        renderer.setSeriesPaint(1, PALETTE[1]);
+        renderer.setSeriesPaint(2, PALETTE[0]);
+        renderer.setSeriesStroke(0, new BasicStroke(1.6f));
+        renderer.setSeriesStroke(1, new BasicStroke(1.6f));
+        renderer.setSeriesStroke(2, new BasicStroke(2.2f));
+        renderer.setSeriesShapesVisible(2, true);
+        renderer.setSeriesShape(2, new Rectangle2D.Double(-2.5, -2.5, 5, 5));
+        if (!lines) {
+            // A plan in stages decides only at the end of each stage: its numbers are points, not lines.
+            renderer.setSeriesLinesVisible(0, false);
+            renderer.setSeriesLinesVisible(1, false);
+            renderer.setSeriesShape(0, new Rectangle2D.Double(-5, -5, 10, 10));
+            renderer.setSeriesShape(1, new Rectangle2D.Double(-5, -5, 10, 10));
+        }
+        NumberAxis inspected = new NumberAxis("Units inspected");
+        inspected.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
+        inspected.setAutoRangeIncludesZero(true);
+        NumberAxis count = new NumberAxis(units ? "Nonconforming units found" : "Nonconformities found");
+        count.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
+        count.setAutoRangeIncludesZero(true);
+        XYPlot plot = new XYPlot(data, inspected, count, renderer);
+        return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, style(plot), true));
+    }
+
     /**
      * The p-chart: each lot's fraction nonconforming in receiving order, with the centre line and the
      * 3-sigma limits for each lot's sample size.
@@ -220,7 +295,7 @@ public final class Charts {
         XYPlot plot = new XYPlot(data, qualityAxisOf(perUnit), units, renderer);
         for (double level : new double[] {sampleSize, lotSize}) {
             ValueMarker marker = new ValueMarker(level, MARK, new BasicStroke(0.8f));
-            marker.setLabel((level == lotSize ? "whole lot N = " : "sample n = ") + (int) level + "  ");
+            marker.setLabel((level == lotSize ? "whole lot N = " : "fewest inspected = ") + (int) level + "  ");
             marker.setLabelFont(LABEL);
             marker.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
             marker.setLabelTextAnchor(TextAnchor.BOTTOM_RIGHT);

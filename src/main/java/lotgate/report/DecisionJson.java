@@ -68,7 +68,13 @@ public final class DecisionJson {
             entry.put("class", verdict.defectClass().label());
             entry.put("sampleSize", verdict.inspected());
             entry.put("found", verdict.found());
-            entry.put("acceptanceNumber", verdict.acceptanceNumber());
+            entry.put("scheme", verdict.plan().scheme());
+            entry.put("decidedAt", verdict.step());
+            if (verdict.acceptanceNumber() >= 0) {
+                entry.put("acceptanceNumber", verdict.acceptanceNumber());
+            } else {
+                entry.putNull("acceptanceNumber");
+            }
             entry.put("rejectionNumber", verdict.rejectionNumber());
             entry.put("verdict", verdict.accepted() ? "accept" : "reject");
             Evidence evidence = verdict.evidence();

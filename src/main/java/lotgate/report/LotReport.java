@@ -48,7 +48,7 @@ public final class LotReport {
         for (ClassVerdict verdict : decision.sentence().classes()) {
             OperatingCharacteristic oc = new OperatingCharacteristic(verdict.plan(), model, lotSize);
             String label = (decision.plan().unclassified() ? "" : verdict.defectClass().label() + ": ")
-                    + "n = " + verdict.plan().n() + ", c = " + verdict.plan().c();
+                    + PlanWording.brief(verdict.plan());
             curves.add(new ChartCurve(label, oc.curve(range, 300)));
             marks.add(new Charts.RiskMark((decision.plan().unclassified() ? "" : verdict.defectClass().label() + " ")
                     + "found " + verdict.found() + " of " + verdict.inspected(), verdict.evidence().observed(),

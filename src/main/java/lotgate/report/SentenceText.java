@@ -26,18 +26,24 @@ public final class SentenceText {
         for (ClassVerdict verdict : decision.sentence().classes()) {
             if (!verdict.accepted()) {
                 rejected.add((decision.plan().unclassified() ? "" : verdict.defectClass().label() + ": ")
-                        + counted(decision, verdict.found()) + " found in " + verdict.inspected() + " units, at or above the"
-                        + " rejection number " + verdict.rejectionNumber());
+                        + counted(decision, verdict.found()) + " found in " + verdict.inspected() + " units"
+                        + where(verdict) + ", at or above the rejection number " + verdict.rejectionNumber());
             }
         }
         if (rejected.isEmpty()) {
             return decision.plan().unclassified()
                     ? counted(decision, decision.sentence().classes().get(0).found()) + " found in "
-                            + decision.sentence().classes().get(0).inspected() + " units, within the acceptance number "
+                            + decision.sentence().classes().get(0).inspected() + " units"
+                            + where(decision.sentence().classes().get(0)) + ", within the acceptance number "
                             + decision.sentence().classes().get(0).acceptanceNumber()
                     : "every defect class is within its acceptance number";
         }
         return String.join("; ", rejected);
+    }
+
+    /** Where a plan in stages or a sequential plan stopped, as " (second sample)"; nothing for a single plan. */
+    static String where(ClassVerdict verdict) {
+        return verdict.plan() instanceof lotgate.sampling.SinglePlan ? "" : " (decided at " + verdict.step() + ")";
     }
 
     /** A fraction as percent with four significant digits. */
@@ -63,9 +69,14 @@ public final class SentenceText {
             ClassPlan criteria = decision.plan().criteria(verdict.defectClass());
             lines.add(verdict.defectClass().label() + ": " + counted(decision, verdict.found()) + " in " + verdict.inspected()
                     + " units (" + percent(evidence.observed()) + perUnit + ")");
+            boolean fixed = verdict.plan() instanceof lotgate.sampling.SinglePlan;
             lines.add("  p-value against the AQL " + percent(criteria.designedFor().aql()) + perUnit + ": "
                     + percent(evidence.pValue()) + " (the chance of finding " + verdict.found()
-                    + " or more in a lot at the AQL)");
+                    + " or more in " + verdict.inspected() + " units of a lot at the AQL)");
+            if (!fixed) {
+                lines.add("  (the p-value and the interval treat the units inspected as one fixed sample; they do not"
+                        + " allow for the plan's stopping rule)");
+            }
             lines.add("  " + (decision.countsUnits() ? "fraction nonconforming" : "nonconformities per unit")
                     + " between " + percent(evidence.lower()) + " and " + percent(evidence.upper()) + " ("
                     + (decision.countsUnits() ? "Clopper-Pearson" : "Garwood") + ", " + level + " confidence)");

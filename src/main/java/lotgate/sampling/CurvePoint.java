@@ -6,6 +6,7 @@ package lotgate.sampling;
  * @param defectives for a finite lot (type A), the whole number of nonconforming units D the quality
  *                   stands for; otherwise -1
  * @param ati        average total inspection, or NaN without a lot size
+ * @param asn        average sample number: the units inspected on average to reach a decision
  */
-public record CurvePoint(double quality, int defectives, double acceptance, double aoq, double ati) {
+public record CurvePoint(double quality, int defectives, double acceptance, double aoq, double ati, double asn) {
 }

@@ -63,6 +63,11 @@ public record OperatingCharacteristic(Plan plan, OcModel model, int lotSize) {
         return plan.averageTotalInspection(model, quality, lotSize);
     }
 
+    /** The average sample number at a quality level. */
+    public double asn(double quality) {
+        return plan.averageSampleNumber(model, quality);
+    }
+
     public double rejection(double quality) {
         return rejection(plan, model, quality);
     }
@@ -196,7 +201,7 @@ public record OperatingCharacteristic(Plan plan, OcModel model, int lotSize) {
                 quality = (double) defectives / h.lotSize();
             }
             points.add(new CurvePoint(quality, defectives, acceptance(quality), aoq(quality),
-                    lotSize > 0 ? ati(quality) : Double.NaN));
+                    lotSize > 0 ? ati(quality) : Double.NaN, asn(quality)));
         }
         return points;
     }

@@ -1,22 +1,18 @@
 package lotgate.sentencing;
 
 import lotgate.plan.DefectClass;
-import lotgate.sampling.SinglePlan;
+import lotgate.sampling.Plan;
 
 /**
  * The verdict for one defect class.
  *
- * @param inspected the units this class was judged on (the first n of the sample)
- * @param found     nonconforming units among them, or nonconformities under a Poisson plan
+ * @param inspected        the units this class was judged on: the first units of the sample, up to where the plan
+ *                         stopped
+ * @param found            nonconforming units among them, or nonconformities under a Poisson plan
+ * @param acceptanceNumber the largest count that accepts where the plan stopped (-1 where none does)
+ * @param rejectionNumber  the smallest count that rejects there
+ * @param step             where the plan stopped: "the sample", "second sample", "stage 2 of 4", "unit 61"
  */
-public record ClassVerdict(DefectClass defectClass, SinglePlan plan, int inspected, int found, boolean accepted,
-        Evidence evidence) {
-
-    public int acceptanceNumber() {
-        return plan.c();
-    }
-
-    public int rejectionNumber() {
-        return plan.rejectionNumber();
-    }
+public record ClassVerdict(DefectClass defectClass, Plan plan, int inspected, int found, boolean accepted,
+        Evidence evidence, int acceptanceNumber, int rejectionNumber, String step) {
 }
