@@ -234,8 +234,11 @@ final class CurveCommand implements Runnable {
 
     /** Wald's approximation for a saved sequential plan, or null. */
     private static WaldSequential wald(PlanChoice choice) {
-        return choice.plan() instanceof SequentialPlan && choice.designedFor() != null
-                ? WaldSequential.of(choice.designedFor(), choice.model()) : null;
+        if (choice.plan() instanceof SequentialPlan sequential && choice.designedFor() != null) {
+            return WaldSequential.fromLines(choice.designedFor().aql(), choice.designedFor().ltpd(),
+                    !choice.model().countsUnits(), sequential.h1(), sequential.h2());
+        }
+        return null;
     }
 
     private double asn(PlanChoice choice, CurvePoint point) {

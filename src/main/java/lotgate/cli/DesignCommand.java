@@ -113,6 +113,11 @@ final class DesignCommand implements Runnable {
                     + " same risks).")
     Integer truncateAt;
 
+    @Option(names = "--plain-wald",
+            description = "Sequential plans: keep Wald's lines for the risks as asked, even where the truncated plan's"
+                    + " exact risks then exceed them (by default the lines are redrawn until both are met).")
+    boolean plainWald;
+
     @Option(names = "--curtailed",
             description = "Double plans: show the ASN with inspection of the second sample stopped as soon as the"
                     + " rejection number is reached (the design still minimises the full ASN).")
@@ -164,9 +169,9 @@ final class DesignCommand implements Runnable {
             return;
         }
         if (!stageSpecs.isEmpty() || truncateAt != null || firstRejection != null || asnAt != null || curtailed
-                || !secondRatio.equals("1")) {
+                || plainWald || !secondRatio.equals("1")) {
             throw new ParameterException(spec.commandLine(), "--stage, --truncate-at, --first-rejection, --asn-at,"
-                    + " --second-ratio and --curtailed are for --scheme double, multiple or sequential");
+                    + " --second-ratio, --curtailed and --plain-wald are for --scheme double, multiple or sequential");
         }
         List<ClassRequest> requests = classSpecs.isEmpty()
                 ? List.of(plainRequest(model, lotSize))

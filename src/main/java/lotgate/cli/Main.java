@@ -13,10 +13,10 @@ import picocli.CommandLine.Option;
         versionProvider = Version.class,
         usageHelpAutoWidth = true,
         description = {"Acceptance sampling of manufacturing lots: design exact sampling plans from the producer's"
-                + " and consumer's risks, study their OC, AOQ and ATI curves, and save them under plans/ so that"
+                + " and consumer's risks, study their OC, AOQ, ATI and ASN curves, and save them under plans/ so that"
                 + " every inspector applies the same plan.", ""},
         subcommands = {DesignCommand.class, CurveCommand.class, CompareCommand.class, ShowCommand.class,
-                SentenceCommand.class, HistoryCommand.class, SupplierCommand.class, SuppliersCommand.class,
+                SentenceCommand.class, InspectCommand.class, HistoryCommand.class, SupplierCommand.class, SuppliersCommand.class,
                 VerifyCommand.class, ActionCommand.class, ImportCommand.class, FamilyCommand.class,
                 DemoCommand.class, CommandLine.HelpCommand.class},
         footerHeading = "%nExit codes:%n",
@@ -30,6 +30,7 @@ import picocli.CommandLine.Option;
                 "   6  an output file cannot be written",
                 "   7  the history store cannot be used (unreachable, altered, or newer)",
                 "   8  inspection is discontinued until a corrective action is recorded",
+                "   9  no decision yet: inspect more units (double, multiple and sequential plans)",
                 "  70  internal fault (rerun with --debug)"})
 public final class Main implements Runnable {
     static {

@@ -20,6 +20,7 @@ import lotgate.sampling.Plan;
 import lotgate.sampling.PlanRisks;
 import lotgate.sampling.RiskPoints;
 import lotgate.sampling.SequentialPlan;
+import lotgate.sampling.SequentialPlanDesigner;
 import lotgate.sampling.SingleDesign;
 import lotgate.sampling.SinglePlan;
 import lotgate.sampling.SinglePlanDesigner;
@@ -93,7 +94,9 @@ final class SchemeDesign {
                 method = SavedPlan.GIVEN;
             }
             default -> {
-                plan = SequentialPlan.wald(WaldSequential.of(points, model), truncation(single));
+                int truncation = truncation(single);
+                plan = command.plainWald ? SequentialPlan.wald(WaldSequential.of(points, model), truncation)
+                        : new SequentialPlanDesigner(model).design(points, truncation).plan();
                 method = SavedPlan.WALD;
             }
         }
@@ -148,6 +151,9 @@ final class SchemeDesign {
         }
         if (!scheme.equals("sequential") && command.truncateAt != null) {
             misplaced.add("--truncate-at");
+        }
+        if (!scheme.equals("sequential") && command.plainWald) {
+            misplaced.add("--plain-wald");
         }
         if (scheme.equals("sequential") && !command.stageSpecs.isEmpty()) {
             misplaced.add("--stage");
@@ -262,7 +268,7 @@ final class SchemeDesign {
         out.println(PlanWording.kind(plan) + switch (result.method()) {
             case SavedPlan.SMALLEST_ASN -> ": the smallest ASN at " + (command.asnAt == null ? "the AQL"
                     : Percent.level(command.asnAt)) + " that meets both risks";
-            case SavedPlan.WALD -> ": Wald's lines for both risks, truncated at " + ((SequentialPlan) plan).truncation()
+            case SavedPlan.WALD -> ": Wald's lines, truncated at " + ((SequentialPlan) plan).truncation()
                     + " units" + (command.truncateAt == null ? " (3 times the single plan's n)" : "");
             default -> ", as given";
         });
@@ -291,7 +297,7 @@ final class SchemeDesign {
             }
             out.println("  (counts over all units inspected so far: " + counted + ")");
         } else {
-            printLines(out, (SequentialPlan) plan, counted);
+            printLines(out, (SequentialPlan) plan, counted, points);
         }
         out.println();
         printRisks(out, result, points);
@@ -307,7 +313,20 @@ final class SchemeDesign {
         return ratio == Math.rint(ratio) ? String.valueOf((long) ratio) : String.valueOf(ratio);
     }
 
-    private void printLines(PrintWriter out, SequentialPlan plan, String counted) {
+    /** Wald's test whose lines the plan has: the nominal risks they were drawn for. */
+    private WaldSequential linesOf(SequentialPlan plan, RiskPoints points) {
+        return WaldSequential.fromLines(points.aql(), points.ltpd(), !model.countsUnits(), plan.h1(), plan.h2());
+    }
+
+    private void printLines(PrintWriter out, SequentialPlan plan, String counted, RiskPoints points) {
+        WaldSequential lines = linesOf(plan, points);
+        boolean adjusted = Math.abs(lines.alpha() - points.alpha()) > 1e-9 * points.alpha()
+                || Math.abs(lines.beta() - points.beta()) > 1e-9 * points.beta();
+        out.println(adjusted ? "  Lines drawn for nominal risks alpha = " + Percent.probability(lines.alpha())
+                + " and beta = " + Percent.probability(lines.beta()) + ", so that the truncated plan meets "
+                + Percent.level(points.alpha()) + " and " + Percent.level(points.beta()) + " exactly."
+                : "  Lines drawn for alpha = " + Percent.level(points.alpha()) + " and beta = "
+                        + Percent.level(points.beta()) + " (Wald).");
         out.printf(Locale.ROOT, "  After each unit m: accept the lot when the count is at most -%.4f + %.6f m,%n"
                 + "  reject it when the count is at least %.4f + %.6f m, otherwise inspect the next unit.%n", plan.h1(),
                 plan.slope(), plan.h2(), plan.slope());
@@ -352,11 +371,12 @@ final class SchemeDesign {
         PlanRisks risks = result.risks();
         String unit = model.countsUnits() ? "" : " per unit";
         boolean wald = result.plan() instanceof SequentialPlan;
-        WaldSequential lines = wald ? WaldSequential.of(points, model) : null;
+        WaldSequential lines = wald ? linesOf((SequentialPlan) result.plan(), points) : null;
         if (wald) {
-            out.println("  Risks of the truncated plan, exact; Wald's approximation for the untruncated test beside them");
+            out.println("  Risks of the truncated plan, exact; Wald's approximation for its lines, untruncated, beside"
+                    + " them");
         }
-        String row = "  %-6s %-22s %-11s %-24s %-12s%s%n";
+        String row = "  %-6s %-22s %-11s %-24s %-16s%s%n";
         out.printf(row, "point", "quality", "P(accept)", "risk", "allowed", wald ? "Wald's P(accept)" : "");
         out.printf(row, "AQL", Percent.level(points.aql()) + unit + DesignCommand.pointNote(model, risks.aqlPoint(), lotSize),
                 Percent.probability(1 - risks.producerRisk()), "producer's " + Percent.probability(risks.producerRisk()),
@@ -369,7 +389,8 @@ final class SchemeDesign {
         if (!risks.meets(points)) {
             out.println();
             out.println("  The plan does not meet every risk asked for" + (wald ? ": truncation changes Wald's risks;"
-                    + " try a later --truncate-at, or a double plan." : "."));
+                    + (command.plainWald ? " leave out --plain-wald to redraw the lines until it does."
+                    : " try a later --truncate-at, or a double plan.") : "."));
         }
     }
 
@@ -393,7 +414,7 @@ final class SchemeDesign {
                     curtailedAsn(plan, ltpd));
         }
         if (plan instanceof SequentialPlan sequential) {
-            WaldSequential lines = WaldSequential.of(points, model);
+            WaldSequential lines = linesOf(sequential, points);
             out.printf(row, "Wald's ASN at the AQL (untruncated)", "", String.format(Locale.ROOT, "%.1f",
                     lines.averageSampleNumber(points.aql())), "");
             out.printf(row, "Wald's ASN at the LTPD (untruncated)", "", String.format(Locale.ROOT, "%.1f",
@@ -447,9 +468,11 @@ final class SchemeDesign {
                 search.put("plansEvaluated", result.candidates());
             }
         }
-        if (plan instanceof SequentialPlan) {
-            WaldSequential lines = WaldSequential.of(points, model);
+        if (plan instanceof SequentialPlan sequential) {
+            WaldSequential lines = linesOf(sequential, points);
             ObjectNode wald = node.putObject("wald");
+            wald.put("nominalAlpha", lines.alpha());
+            wald.put("nominalBeta", lines.beta());
             wald.put("producerRisk", 1 - lines.acceptance(points.aql()));
             wald.put("consumerRisk", lines.acceptance(points.ltpd()));
             wald.put("asnAtAql", lines.averageSampleNumber(points.aql()));

@@ -204,8 +204,9 @@ final class SentenceCommand implements Runnable {
                 reader.keepSequence();
             }
             InspectionSample sample = reader.read();
-            checkSampleSize(plan, sample, range);
-            Outcome outcome = Sentencer.sentence(plan, counts(plan, sample), lot.lotSize(), confidence);
+            Sentencer.Counts counts = counts(plan, sample);
+            checkSampleSize(plan, sample, range, counts);
+            Outcome outcome = Sentencer.sentence(plan, counts, lot.lotSize(), confidence);
             if (outcome instanceof Pending pending) {
                 printPending(spec.commandLine().getOut(), plan, sample, pending, lot);
                 throw new Main.Failure(ExitCode.NOT_DECIDED, null);
@@ -375,7 +376,7 @@ final class SentenceCommand implements Runnable {
         return new LotDetails(lot.lot(), lot.supplier(), lot.part(), size, lot.received(), lot.inspector());
     }
 
-    private void checkSampleSize(SavedPlan plan, InspectionSample sample, int[] range) {
+    private void checkSampleSize(SavedPlan plan, InspectionSample sample, int[] range, Sentencer.Counts counts) {
         Plan first = plan.classes().get(0).plan();
         if (first instanceof SequentialPlan) {
             if (sample.units() == 0) {
@@ -386,11 +387,12 @@ final class SentenceCommand implements Runnable {
         }
         List<Integer> boundaries = Stopping.boundaries(first);
         if (boundaries.size() > 1) {
-            if (!boundaries.contains(sample.units())) {
+            if (!boundaries.contains(sample.units()) && !curtailedRejection(first, sample, counts)) {
                 String ends = String.join(", ", boundaries.stream().map(String::valueOf).toList());
                 throw new Main.Failure(ExitCode.INCOMPLETE_SAMPLE, sheetFile + " holds " + sample.units() + " units"
                         + (sample.units() == 0 ? "" : ", " + rowsOf(sample)) + ", but plan " + plan.name()
-                        + "'s samples end at " + ends + " units; record whole samples in the order inspected"
+                        + "'s samples end at " + ends + " units; record whole samples in the order inspected, or stop"
+                        + " early only where the count reaches the rejection number"
                         + (range[0] > 0 ? "" : " (or name the rows with --rows FIRST-LAST)") + " (nothing was recorded)");
             }
             return;
@@ -406,6 +408,19 @@ final class SentenceCommand implements Runnable {
             throw new Main.Failure(ExitCode.INCOMPLETE_SAMPLE, sheetFile + " holds " + sample.units() + " units"
                     + (range[0] > 0 ? " in rows " + rows : "") + " but plan " + plan.name() + " samples " + wanted
                     + "; name the sample's rows with --rows FIRST-LAST (nothing was recorded)");
+        }
+    }
+
+    /** Whether a sample that ends inside a stage already reaches that stage's rejection number. */
+    private static boolean curtailedRejection(Plan plan, InspectionSample sample, Sentencer.Counts counts) {
+        if (sample.units() == 0 || sample.units() > plan.maxSampleSize()) {
+            return false;
+        }
+        try {
+            return Stopping.at(plan, sample.units(), m -> counts.countAt(DefectClass.ANY, m)).verdict()
+                    == Stopping.Verdict.REJECT;
+        } catch (IllegalArgumentException e) {
+            return false;
         }
     }
 

@@ -27,6 +27,18 @@ public record WaldSequential(double p1, double alpha, double p2, double beta, bo
         return new WaldSequential(points.aql(), points.alpha(), points.ltpd(), points.beta(), !model.countsUnits());
     }
 
+    /**
+     * The test whose lines for the two quality levels have the given intercepts: the nominal risks they stand
+     * for are alpha = (1 - e^(-h1 k)) / (e^(h2 k) - e^(-h1 k)) and beta = (1 - alpha) e^(-h1 k).
+     */
+    public static WaldSequential fromLines(double p1, double p2, boolean perUnit, double h1, double h2) {
+        WaldSequential shape = new WaldSequential(p1, 0.05, p2, 0.10, perUnit);
+        double k = shape.k();
+        double below = Math.exp(-h1 * k);
+        double alpha = -Math.expm1(-h1 * k) / (Math.exp(h2 * k) - below);
+        return new WaldSequential(p1, alpha, p2, (1 - alpha) * below, perUnit);
+    }
+
     /** The log-likelihood ratio added by one nonconformity. */
     public double k() {
         return perUnit ? Math.log(p2 / p1) : Math.log(p2 * (1 - p1) / (p1 * (1 - p2)));

@@ -66,7 +66,8 @@ public final class Stopping {
     /**
      * Applies the plan to the first units of a sample.
      *
-     * @param units   the units recorded: a stage boundary for plans in stages, any number for a sequential plan
+     * @param units   the units recorded: for plans in stages a stage boundary, or a point inside a stage where the
+     *                count already reaches the stage's rejection number; any number for a sequential plan
      * @param countAt the count found in the first m units
      */
     public static Point at(Plan plan, int units, IntToLongFunction countAt) {
@@ -78,11 +79,17 @@ public final class Stopping {
         for (int i = 0; i < stages.size(); i++) {
             Stage stage = stages.get(i);
             total += stage.n();
+            String step = stepName(plan, i, stages.size());
             if (total > units) {
-                throw new IllegalArgumentException("the sample ends inside stage " + (i + 1));
+                // Inside a stage only a rejection can be certain: the count never falls (curtailed inspection).
+                long sofar = countAt.applyAsLong(units);
+                if (sofar >= stage.r()) {
+                    return new Point(Verdict.REJECT, units, sofar, stage.c(), stage.r(), step + ", curtailed", 0);
+                }
+                throw new IllegalArgumentException("the sample ends inside the " + step + ", at unit " + units
+                        + " of " + total);
             }
             long found = countAt.applyAsLong(total);
-            String step = stepName(plan, i, stages.size());
             if (found <= stage.c()) {
                 return new Point(Verdict.ACCEPT, total, found, stage.c(), stage.r(), step, 0);
             }

@@ -93,7 +93,7 @@ class PlanFormatTest {
     void aNewerFormatVersionIsRefusedWithAClearMessage() throws IOException {
         Path file = saved();
         Files.writeString(file, Files.readString(file).replace("\"formatVersion\" : 2", "\"formatVersion\" : 7"));
-        assertEquals(file + ": written in plan format version 7 by a newer lotgate; this one reads versions up to 2",
+        assertEquals(file + ": written in plan format version 7 by a newer lotgate; this one reads versions up to 3",
                 refused(file));
     }
 

@@ -1,0 +1,233 @@
+package lotgate.cli;
+
+import java.io.BufferedReader;
+import java.io.InputStream;
+import java.io.InputStreamReader;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.function.Supplier;
+import lotgate.files.AtomicWrite;
+import lotgate.plan.PlanFormat;
+import lotgate.plan.SavedPlan;
+import lotgate.report.CsvTable;
+import lotgate.report.PlanWording;
+import lotgate.sampling.Plan;
+import lotgate.sampling.SequentialPlan;
+import lotgate.sampling.Stage;
+import lotgate.sentencing.Stopping;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.Spec;
+
+/** At the inspection bench: takes one unit's result per line and says after each whether to stop. */
+@Command(name = "inspect", mixinStandardHelpOptions = true, sortOptions = false, usageHelpAutoWidth = true,
+        header = "At the inspection bench: enter each unit's result and learn after each whether to stop.",
+        description = {
+                "Reads one inspected unit per line from standard input, in the order inspected: pass or fail (p, f;"
+                        + " ok, nc), or for a plan that counts nonconformities (Poisson model) the number found in"
+                        + " the unit. After each line it says where the plan stands: accept, reject, or inspect on,"
+                        + " and for how long at most. 'undo' takes back the last unit, 'quit' stops without a"
+                        + " decision. Blank lines and lines starting with # are skipped.",
+                "",
+                "Sequential plans decide after any unit; double and multiple plans at the end of a stage, or as"
+                        + " soon as the count reaches the stage's rejection number (curtailed inspection); single"
+                        + " plans after n units or at the rejection number. Nothing is recorded: save the units with"
+                        + " --save-sheet and sentence that sheet to record the lot.",
+                "",
+                "Exit code 0: accepted; 1: rejected; 9: no decision when the input ended; 2 and 3: bad options or"
+                        + " input (a bad line fails when the input is not a terminal).",
+                ""})
+final class InspectCommand implements Runnable {
+    /** Where the units come from; tests replace it. */
+    static Supplier<InputStream> input = () -> System.in;
+
+    @Parameters(index = "0", paramLabel = "PLAN", description = "The saved plan file to apply (plans/*.json).")
+    Path planFile;
+
+    @Option(names = "--save-sheet", paramLabel = "FILE",
+            description = "When the plan has decided (or the input ends), write the units entered as an inspection"
+                    + " sheet (.csv) that 'lotgate sentence' reads.")
+    Path sheet;
+
+    @Option(names = "--prefix", paramLabel = "TEXT", defaultValue = "",
+            description = "With --save-sheet: unit identifiers are TEXT followed by the unit's number (e.g. LOT17-).")
+    String prefix;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public void run() {
+        if (sheet != null && !sheet.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".csv")) {
+            throw new ParameterException(spec.commandLine(), "--save-sheet " + sheet + ": the sheet is a .csv file");
+        }
+        SavedPlan saved = PlanFormat.read(planFile);
+        if (!saved.unclassified()) {
+            throw new ParameterException(spec.commandLine(), "plan " + saved.name() + " has criteria per defect class;"
+                    + " record its units in a sheet with critical, major and minor columns and use 'lotgate sentence'");
+        }
+        Plan plan = saved.plan();
+        boolean units = saved.model().countsUnits();
+        boolean terminal = System.console() != null && input.get() == System.in;
+        PrintWriter out = spec.commandLine().getOut();
+        out.println("Plan " + saved.name() + " (fingerprint " + saved.shortFingerprint() + "): " + PlanWording.brief(plan));
+        out.println("Enter each unit as inspected: " + (units ? "pass or fail" : "the number of nonconformities")
+                + "; 'undo' takes back the last, 'quit' stops.");
+        out.flush();
+        List<Integer> entered = new ArrayList<>();
+        Stopping.Point decided = null;
+        int lineNumber = 0;
+        try (BufferedReader reader = new BufferedReader(new InputStreamReader(input.get(), StandardCharsets.UTF_8))) {
+            String line;
+            while (decided == null && (line = reader.readLine()) != null) {
+                lineNumber++;
+                String text = line.trim().toLowerCase(Locale.ROOT);
+                if (text.isEmpty() || text.startsWith("#")) {
+                    continue;
+                }
+                if (text.equals("quit")) {
+                    break;
+                }
+                if (text.equals("undo")) {
+                    if (entered.isEmpty()) {
+                        out.println("  nothing to take back");
+                    } else {
+                        entered.remove(entered.size() - 1);
+                        out.println("  unit " + (entered.size() + 1) + " taken back; " + entered.size() + " units entered");
+                    }
+                    out.flush();
+                    continue;
+                }
+                Integer count = parse(text, units);
+                if (count == null) {
+                    String problem = "line " + lineNumber + ": '" + line.trim() + "' is not " + (units
+                            ? "pass or fail" : "a whole number of nonconformities of 0 or more");
+                    if (!terminal) {
+                        throw new Main.Failure(ExitCode.BAD_INPUT, problem + " (after " + entered.size() + " units"
+                                + (sheet == null ? "" : "; no sheet was written") + ")");
+                    }
+                    out.println("  " + problem + "; enter it again");
+                    out.flush();
+                    continue;
+                }
+                entered.add(count);
+                decided = report(out, plan, entered, units);
+                out.flush();
+            }
+        } catch (java.io.IOException e) {
+            throw new Main.Failure(ExitCode.BAD_INPUT, "standard input cannot be read (" + e.getMessage() + ")");
+        }
+        if (sheet != null) {
+            writeSheet(entered, units);
+            out.println("Units written to " + sheet + "; sentence it with: lotgate sentence " + planFile + " " + sheet);
+        }
+        out.flush();
+        if (decided == null) {
+            out.println("No decision: " + entered.size() + " units entered.");
+            out.flush();
+            throw new Main.Failure(ExitCode.NOT_DECIDED, null);
+        }
+        if (decided.verdict() == Stopping.Verdict.REJECT) {
+            throw new Main.Failure(ExitCode.REJECTED, null);
+        }
+    }
+
+    private static Integer parse(String text, boolean units) {
+        switch (text) {
+            case "pass", "p", "ok", "good", "0" -> {
+                return 0;
+            }
+            case "fail", "f", "nc", "bad" -> {
+                return units ? 1 : null;
+            }
+            default -> {
+                if (units && text.equals("1")) {
+                    return 1;
+                }
+                if (!units) {
+                    try {
+                        int count = Integer.parseInt(text);
+                        return count >= 0 && count <= 1_000_000 ? count : null;
+                    } catch (NumberFormatException e) {
+                        return null;
+                    }
+                }
+                return null;
+            }
+        }
+    }
+
+    /** Prints where the plan stands after the last unit; returns the decision, or null to go on. */
+    private static Stopping.Point report(PrintWriter out, Plan plan, List<Integer> entered, boolean units) {
+        int m = entered.size();
+        long[] cumulative = new long[m + 1];
+        for (int i = 0; i < m; i++) {
+            cumulative[i + 1] = cumulative[i] + (units ? Math.min(1, entered.get(i)) : entered.get(i));
+        }
+        long found = cumulative[m];
+        String head = String.format(Locale.ROOT, "  unit %-5d %-5s found %-4d ", m, units ? (entered.get(m - 1) > 0
+                ? "fail" : "pass") : String.valueOf(entered.get(m - 1)), found);
+        Stopping.Point point = pointAfter(plan, m, cumulative);
+        if (point == null) {
+            out.println(head + "inspect on: " + untilText(plan, m, found));
+            return null;
+        }
+        switch (point.verdict()) {
+            case ACCEPT -> out.println(head + "ACCEPT the lot (" + point.step() + ": " + found + " is at most "
+                    + point.acceptanceNumber() + ")");
+            case REJECT -> out.println(head + "REJECT the lot (" + point.step() + ": " + found + " reaches "
+                    + point.rejectionNumber() + ")");
+            default -> {
+                out.println(head + "inspect on: " + untilText(plan, m, found));
+                return null;
+            }
+        }
+        return point;
+    }
+
+    /** The plan's verdict after m units, or null while m is inside a stage and no rejection is certain. */
+    private static Stopping.Point pointAfter(Plan plan, int m, long[] cumulative) {
+        if (m > plan.maxSampleSize()) {
+            return null;
+        }
+        try {
+            return Stopping.at(plan, m, unit -> cumulative[unit]);
+        } catch (IllegalArgumentException e) {
+            return null;
+        }
+    }
+
+    private static String untilText(Plan plan, int m, long found) {
+        if (plan instanceof SequentialPlan sequential) {
+            int clean = Stopping.acceptanceIfClean(sequential, m, found);
+            return "accepted after unit " + clean + " if nothing more is found; rejected at "
+                    + sequential.rejectionNumber(Math.min(m + 1, sequential.truncation())) + " found";
+        }
+        int total = 0;
+        for (Stage stage : Stopping.stages(plan)) {
+            total += stage.n();
+            if (total > m) {
+                return "this sample ends at unit " + total + " (accept there with up to "
+                        + PlanWording.acceptance(stage.c()) + ", reject at " + stage.r() + ")";
+            }
+        }
+        return "";
+    }
+
+    private void writeSheet(List<Integer> entered, boolean units) {
+        List<List<Object>> rows = new ArrayList<>();
+        for (int i = 0; i < entered.size(); i++) {
+            String id = prefix + (i + 1);
+            rows.add(units ? List.of(id, entered.get(i) > 0 ? "fail" : "pass") : List.of(id, entered.get(i)));
+        }
+        AtomicWrite.writeString(sheet, CsvTable.table(units ? List.of("unit", "result") : List.of("unit", "minor"),
+                rows));
+    }
+}
