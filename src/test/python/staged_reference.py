@@ -94,3 +94,8 @@ print("wald", "%.17g %.17g %.17g" % (h1,h2,s))
 for p in ["1/100","3/100","6/100"]:
     a,r,n = seqexact(h1,h2,s,180,F(p))
     print("seq180", p, "%.17g %.17g %.17g" % (float(a),float(r),float(n)))
+# The designed double plans of the command-line tests: n1 = 69, c1 = 0, r1 = 4, n2 = 69, c2 = 3 (equal samples)
+# and n1 = 60, c1 = 0, r1 = 4, n2 = 82, c2 = 3 (free second sample), at the AQL 1% and the LTPD 5%.
+for (n1,c1,r1,n2,c2) in [(69,0,4,69,3),(60,0,4,82,3)]:
+    for p in [0.01,0.05]:
+        print("designed", n1, n2, p, "%.17g %.17g %.17g" % dbl(n1,c1,r1,n2,c2,p))

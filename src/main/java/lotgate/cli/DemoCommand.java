@@ -116,30 +116,62 @@ final class DemoCommand implements Runnable {
         step(out, "13. A sheet with a count typed as a word is refused by its cell (exit code 3), and nothing is"
                         + " recorded:", ExitCode.BAD_INPUT,
                 "sentence", plans + "/mirelle-ms-22.json", sheets + "/mirelle-ms1204-malformed.xlsx", "--store", store);
-        step(out, "14. The supplier audit: Arnwick's year, with its switches of severity, in a workbook and a page:",
+        step(out, "14. Quorrin Plastics' snap clips (part QP-7, lots of 2000) are pull-tested to destruction, so"
+                        + " every clip inspected is lost. For the same risks as the bolts the engineer weighs the single"
+                        + " plan against a double plan (designed for the smallest average sample number at the AQL)"
+                        + " and an item-by-item sequential plan:",
+                "design", "--aql", "1%", "--ltpd", "5%", "--lot-size", "2000", "--save", plans + "/quorrin-qp-7.json",
+                "--replace", "--description", "Invented demo: Quorrin Plastics snap clip QP-7, single plan",
+                "--format", "csv");
+        step(out, "", "design", "--aql", "1%", "--ltpd", "5%", "--lot-size", "2000", "--scheme", "double",
+                "--save", plans + "/quorrin-qp-7-double.json", "--replace",
+                "--description", "Invented demo: Quorrin Plastics snap clip QP-7, double plan");
+        step(out, "", "design", "--aql", "1%", "--ltpd", "5%", "--lot-size", "2000", "--scheme", "sequential",
+                "--save", plans + "/quorrin-qp-7-sequential.json", "--replace",
+                "--description", "Invented demo: Quorrin Plastics snap clip QP-7, sequential plan");
+        step(out, "    What each costs on average and at most, on one table, one OC chart and one ASN chart:",
+                "compare", plans + "/quorrin-qp-7.json", plans + "/quorrin-qp-7-double.json",
+                plans + "/quorrin-qp-7-sequential.json", "--chart", charts + "/quorrin-compare-oc.png",
+                "--asn-chart", charts + "/quorrin-compare-asn.png");
+        step(out, "15. Quorrin lot QP-2611 under the double plan. After the first sample of 69 clips (sheet rows 2"
+                        + " to 70) one clip has failed: no decision yet (exit code 9), nothing is recorded:",
+                ExitCode.NOT_DECIDED, "sentence", plans + "/quorrin-qp-7-double.json", sheets + "/quorrin-qp2611.csv",
+                "--rows", "2-70", "--store", store);
+        step(out, "    With the second sample on the sheet the lot is accepted and recorded, with its sampling chart:",
+                "sentence", plans + "/quorrin-qp-7-double.json", sheets + "/quorrin-qp2611.csv", "--store", store,
+                "--chart", charts + "/quorrin-qp2611-double.png", "--report", reports + "/QP-2611.html");
+        step(out, "    The same clips, in the order tested, under the sequential plan (a trial, not recorded): it"
+                        + " would have stopped after 96 clips:",
+                "sentence", plans + "/quorrin-qp-7-sequential.json", sheets + "/quorrin-qp2611.csv", "--no-record",
+                "--chart", charts + "/quorrin-qp2611-sequential.png");
+        step(out, "    And under the single plan, on its 132 clips (a trial, not recorded):",
+                "sentence", plans + "/quorrin-qp-7.json", sheets + "/quorrin-qp2611.csv", "--rows", "2-133",
+                "--no-record", "--format", "csv");
+        step(out, "16. The supplier audit: Arnwick's year, with its switches of severity, in a workbook and a page:",
                 "supplier", "Arnwick Fasteners (invented)", "--store", store,
                 "--report", reports + "/arnwick-audit.xlsx", "--report", reports + "/arnwick-audit.html");
-        step(out, "15. Mirelle's year: ten accepted lots in a row earned reduced inspection:",
+        step(out, "17. Mirelle's year: ten accepted lots in a row earned reduced inspection:",
                 "supplier", "Mirelle Seals (invented)", "--store", store,
                 "--report", reports + "/mirelle-audit.xlsx", "--report", reports + "/mirelle-audit.html");
         for (String other : new String[] {"Kestrune Castings (invented)", "Quorrin Plastics (invented)"}) {
             quietly("supplier", other, "--store", store, "--report", reports + "/"
                     + other.substring(0, other.indexOf(' ')).toLowerCase(java.util.Locale.ROOT) + "-audit.html");
         }
-        step(out, "16. All suppliers ranked; Quorrin's three lots leave it a wide interval (the audits of Kestrune"
+        step(out, "18. All suppliers ranked; Quorrin's four lots leave it a wide interval (the audits of Kestrune"
                         + " and Quorrin are in the reports folder too):",
                 "suppliers", "--store", store, "--report", reports + "/ranking.html");
-        step(out, "17. Nothing in the history was altered or removed:", "verify", "--store", store);
+        step(out, "19. Nothing in the history was altered or removed:", "verify", "--store", store);
         out.println("Demo done. Plans are in " + plans + ", charts in " + charts + ", lot and audit reports in "
                 + reports + ", the history in " + folder.resolve("history.sqlite") + ".");
         out.println("Open " + charts + "/arnwick-af-m8-40.png for the OC, AOQ and ATI curves together, "
-                + reports + "/KC-0907.html for a lot report and " + reports + "/arnwick-audit.xlsx for the audit.");
+                + reports + "/KC-0907.html for a lot report, " + charts + "/quorrin-compare-asn.png for what single,"
+                + " double and sequential plans cost, and " + reports + "/arnwick-audit.xlsx for the audit.");
         out.flush();
     }
 
     private static final String[] SHEETS = {"arnwick-af2611.xlsx", "arnwick-af2618.csv", "arnwick-af2618.lot.csv",
             "kestrune-kc0907.xlsx", "mirelle-ms1130.csv", "mirelle-ms1130.lot.csv", "mirelle-ms1204-malformed.xlsx",
-            "lots-2025.csv"};
+            "lots-2025.csv", "quorrin-qp2611.csv", "quorrin-qp2611.lot.csv"};
 
     /** Copies the invented inspection sheets that travel in the jar into the demo's folder. */
     private String copySheets(PrintWriter out) {
@@ -155,7 +187,7 @@ final class DemoCommand implements Runnable {
                 throw new Main.Failure(ExitCode.INTERNAL, "cannot read the demo sheet " + name + ": " + e.getMessage());
             }
         }
-        out.println("The invented inspection sheets of five lots and last year's lot list are copied to " + target
+        out.println("The invented inspection sheets of six lots and last year's lot list are copied to " + target
                 + " (the same as demo-data/ in the repository).");
         out.println();
         return target.toString();

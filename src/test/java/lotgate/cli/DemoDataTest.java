@@ -15,9 +15,21 @@ class DemoDataTest {
             "plans/kestrune-kc-114-classes.json, demo-data/kestrune-kc0907.xlsx, 1",
             "plans/mirelle-ms-22.json, demo-data/mirelle-ms1130.csv, 0",
             "plans/mirelle-ms-22.json, demo-data/mirelle-ms1204-malformed.xlsx, 3",
+            "plans/quorrin-qp-7-double.json, demo-data/quorrin-qp2611.csv, 0",
+            "plans/quorrin-qp-7-sequential.json, demo-data/quorrin-qp2611.csv, 0",
     })
     void eachDemoLotGetsItsVerdict(String plan, String sheet, int exitCode) {
         Cli.Result result = Cli.run("sentence", "--no-record", plan, sheet);
+        assertEquals(exitCode, result.exitCode(), result.out() + result.err());
+    }
+
+    @ParameterizedTest(name = "{1} rows {2}")
+    @CsvSource({
+            "plans/quorrin-qp-7.json, demo-data/quorrin-qp2611.csv, 2-133, 0",
+            "plans/quorrin-qp-7-double.json, demo-data/quorrin-qp2611.csv, 2-70, 9",
+    })
+    void theQuorrinLotGetsItsVerdictOnPartOfItsSheet(String plan, String sheet, String rows, int exitCode) {
+        Cli.Result result = Cli.run("sentence", "--no-record", plan, sheet, "--rows", rows);
         assertEquals(exitCode, result.exitCode(), result.out() + result.err());
     }
 }

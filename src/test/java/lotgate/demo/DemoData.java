@@ -31,6 +31,32 @@ public final class DemoData {
         mirelleDefects(folder.resolve("mirelle-ms1130.csv"));
         mirelleMalformed(folder.resolve("mirelle-ms1204-malformed.xlsx"));
         pastYear(folder.resolve("lots-2025.csv"));
+        quorrinClips(folder.resolve("quorrin-qp2611.csv"));
+    }
+
+    /**
+     * Quorrin lot QP-2611: 138 snap clips pull-tested to destruction in the order drawn, two fail (units 23 and
+     * 97). The single plan (n = 132, c = 3) accepts on rows 2-133; the double plan (69 + 69) needs its second
+     * sample after one failure in the first and then accepts; the sequential plan accepts after unit 96.
+     */
+    static void quorrinClips(Path file) throws IOException {
+        List<List<Object>> rows = new ArrayList<>();
+        rows.add(row("unit", "result", "defect", "note"));
+        for (int i = 1; i <= 138; i++) {
+            String unit = String.format("QP2611-%03d", i);
+            if (i == 23) {
+                rows.add(row(unit, "fail", "latch cracked", "broke at 41 N"));
+            } else if (i == 97) {
+                rows.add(row(unit, "fail", "short shot", null));
+            } else {
+                rows.add(row(unit, "pass", null, null));
+            }
+        }
+        csv(file, ',', false, rows);
+        String stem = file.getFileName().toString().replace(".csv", ".lot.csv");
+        csv(file.resolveSibling(stem), ',', false, List.of(row("lot", "QP-2611"),
+                row("supplier", "Quorrin Plastics (invented)"), row("part", "QP-7"), row("lot size", 2000),
+                row("received", "2026-11-24"), row("inspector", "R. Okafor (invented)")));
     }
 
     /**
