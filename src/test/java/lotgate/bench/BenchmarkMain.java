@@ -23,7 +23,7 @@ public final class BenchmarkMain {
     public static void main(String[] args) throws RunnerException {
         String include = args.length > 0 ? args[0] : "lotgate.bench.*Benchmark";
         ChainedOptionsBuilder options = new OptionsBuilder().include(include);
-        if (include.contains("DesignBenchmark") || include.endsWith("*Benchmark")) {
+        if (include.contains("DesignBenchmark") || include.contains("StagedBenchmark") || include.endsWith("*Benchmark")) {
             // Design cases take milliseconds: short timed iterations. The sentencing benchmark sets its own.
             options = options.warmupTime(TimeValue.seconds(1)).measurementTime(TimeValue.seconds(1));
         }
@@ -51,6 +51,23 @@ public final class BenchmarkMain {
                     "naive/fast");
             design.forEach((request, pair) -> System.out.printf("%-42s %14.3f %14.3f %11.0fx%n", request, pair[0],
                     pair[1], pair[1] / pair[0]));
+            System.out.println();
+        }
+        String staged = StagedBenchmark.class.getName() + ".";
+        if (scores.containsKey(staged + "sequentialLattice")) {
+            System.out.println("Exact OC of a sequential plan truncated at " + StagedBenchmark.TRUNCATION
+                    + " units (ms per quality level, same run)");
+            System.out.printf("%-44s %12.3f%n", "lattice between the lines", scores.get(staged + "sequentialLattice"));
+            System.out.printf("%-44s %12.3f%n", "naive walk over the whole lattice",
+                    scores.get(staged + "sequentialFullLattice"));
+            System.out.printf("%-44s %11.0fx%n", "naive / lattice", scores.get(staged + "sequentialFullLattice")
+                    / scores.get(staged + "sequentialLattice"));
+            System.out.println("Double-plan design, AQL 0.1% / LTPD 1% (ms per design, same run)");
+            System.out.printf("%-44s %12.3f%n", "search, n2 = n1", scores.get(staged + "doubleDesign"));
+            System.out.printf("%-44s %12.3f%n", "search, n2 free", scores.get(staged + "doubleDesignFree"));
+            System.out.printf("%-44s %12.3f%n", "exhaustive box, n2 = n1", scores.get(staged + "doubleExhaustive"));
+            System.out.printf("%-44s %11.0fx%n", "exhaustive / search (n2 = n1)", scores.get(staged + "doubleExhaustive")
+                    / scores.get(staged + "doubleDesign"));
             System.out.println();
         }
         String history = HistoryBenchmark.class.getName() + ".";
