@@ -6,13 +6,13 @@ import java.util.Map;
 
 /**
  * Which header names stand for which column of an inspection sheet. The default names are the
- * roles' own (unit, result, critical, major, minor, defect, note); a site may map its own.
+ * roles' own (unit, result, critical, major, minor, defect, note, value); a site may map its own.
  */
 public final class Columns {
 
     /** What a column of an inspection sheet holds. */
     public enum Role {
-        UNIT, RESULT, CRITICAL, MAJOR, MINOR, DEFECT, NOTE;
+        UNIT, RESULT, CRITICAL, MAJOR, MINOR, DEFECT, NOTE, VALUE;
 
         public String label() {
             return name().toLowerCase(Locale.ROOT);
@@ -55,7 +55,7 @@ public final class Columns {
             }
             if (role == null) {
                 throw new IllegalArgumentException("unknown column role '" + roleName
-                        + "'; use unit, result, critical, major, minor, defect or note");
+                        + "'; use unit, result, critical, major, minor, defect, note or value");
             }
             String header = pair.substring(equals + 1).trim();
             if (header.isEmpty()) {

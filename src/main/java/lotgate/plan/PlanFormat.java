@@ -32,6 +32,7 @@ import lotgate.sampling.MultiplePlan;
 import lotgate.sampling.SequentialPlan;
 import lotgate.sampling.SinglePlan;
 import lotgate.sampling.Stage;
+import lotgate.sampling.VariablesPlan;
 import lotgate.sampling.WaldSequential;
 
 /**
@@ -61,6 +62,10 @@ public final class PlanFormat {
             "created", "plan", "model", "lotSize", "designedFor", "achieved", "fingerprint");
     private static final Set<String> TOP_FIELDS_V2 = Set.of("format", "formatVersion", "name", "description",
             "created", "model", "lotSize", "classes", "fingerprint");
+    private static final Set<String> TOP_FIELDS_V3 = Set.of("format", "formatVersion", "name", "description",
+            "created", "model", "lotSize", "classes", "fingerprint", "measurement");
+    private static final Set<String> MEASUREMENT_FIELDS = Set.of("characteristic", "lower", "upper", "unit", "sigma",
+            "limits");
     private static final Set<String> CLASS_FIELDS = Set.of("class", "plan", "designedFor", "achieved");
 
     /** What a new plan file holds for one defect class before its risks are computed. */
@@ -75,6 +80,16 @@ public final class PlanFormat {
             int lotSize, RiskPoints designedFor, String method) {
         return seal(name, description, created, model, lotSize,
                 List.of(new ClassDraft(DefectClass.ANY, plan, designedFor, method)));
+    }
+
+    /** A new variables plan, with what it measures, its risks and fingerprint computed. */
+    public static SavedPlan seal(String name, String description, Instant created, VariablesPlan plan, OcModel model,
+            int lotSize, RiskPoints designedFor, String method, Measurement measurement) {
+        List<ClassPlan> classes = List.of(new ClassPlan(DefectClass.ANY, plan, designedFor, method,
+                PlanRisks.of(plan, model, designedFor)));
+        SavedPlan unsealed = new SavedPlan(name, description, created, model, lotSize, classes, "", measurement);
+        return new SavedPlan(name, description, created, model, lotSize, classes, fingerprintOf(toJson(unsealed)),
+                measurement);
     }
 
     /** A new saved plan with criteria per defect class, its risks and fingerprint computed. */
@@ -103,7 +118,8 @@ public final class PlanFormat {
     static ObjectNode toJson(SavedPlan saved) {
         ObjectNode root = JsonNodeFactory.instance.objectNode();
         root.put("format", FORMAT);
-        boolean singleOnly = saved.classes().stream().allMatch(c -> c.plan() instanceof SinglePlan);
+        boolean singleOnly = saved.classes().stream().allMatch(c -> c.plan() instanceof SinglePlan)
+                && saved.measurement() == null;
         root.put("formatVersion", singleOnly ? SINGLE_ONLY_VERSION : VERSION);
         root.put("name", saved.name());
         root.put("description", saved.description());
@@ -127,6 +143,22 @@ public final class PlanFormat {
             achieved.put("producerRisk", criteria.achieved().producerRisk());
             achieved.put("consumerRisk", criteria.achieved().consumerRisk());
         }
+        Measurement measurement = saved.measurement();
+        if (measurement != null) {
+            ObjectNode node = root.putObject("measurement");
+            node.put("characteristic", measurement.characteristic());
+            if (measurement.lower() != null) {
+                node.put("lower", measurement.lower());
+            }
+            if (measurement.upper() != null) {
+                node.put("upper", measurement.upper());
+            }
+            node.put("unit", measurement.unit());
+            if (measurement.sigma() != null) {
+                node.put("sigma", measurement.sigma());
+            }
+            node.put("limits", measurement.limits());
+        }
         if (!saved.fingerprint().isEmpty()) {
             root.put("fingerprint", saved.fingerprint());
         }
@@ -144,6 +176,10 @@ public final class PlanFormat {
             putStages(node, twice.stages());
         } else if (plan instanceof MultiplePlan multiple) {
             putStages(node, multiple.stages());
+        } else if (plan instanceof VariablesPlan variables) {
+            node.put("n", variables.n());
+            node.put("k", variables.k());
+            node.put("sigmaKnown", variables.sigmaKnown());
         } else if (plan instanceof SequentialPlan sequential) {
             node.put("h1", sequential.h1());
             node.put("h2", sequential.h2());
@@ -238,7 +274,7 @@ public final class PlanFormat {
             if (version < 1) {
                 throw invalid("field 'formatVersion' must be 1 or more, got " + version);
             }
-            Set<String> allowed = version == 1 ? TOP_FIELDS_V1 : TOP_FIELDS_V2;
+            Set<String> allowed = version == 1 ? TOP_FIELDS_V1 : version == 2 ? TOP_FIELDS_V2 : TOP_FIELDS_V3;
             for (Iterator<String> it = root.fieldNames(); it.hasNext();) {
                 String field = it.next();
                 if (!allowed.contains(field)) {
@@ -305,7 +341,36 @@ public final class PlanFormat {
                 checkRisk(prefix + "achieved.consumerRisk", number(achievedNode, prefix + "achieved.consumerRisk"),
                         criteria.achieved().consumerRisk());
             }
-            return new SavedPlan(name, description, created, model, lotSize, classes, fingerprint);
+            Measurement measurement = root.has("measurement") ? measurement() : null;
+            boolean variables = classes.stream().anyMatch(c -> c.plan() instanceof VariablesPlan);
+            if (variables && measurement == null) {
+                throw invalid("field 'measurement' is missing: a variables plan says what it measures");
+            }
+            if (!variables && measurement != null) {
+                throw invalid("field 'measurement' belongs to variables plans only");
+            }
+            if (variables && ((VariablesPlan) classes.get(0).plan()).sigmaKnown() != measurement.sigmaKnown()) {
+                throw invalid("field 'classes[0].plan.sigmaKnown' must agree with 'measurement.sigma'");
+            }
+            return new SavedPlan(name, description, created, model, lotSize, classes, fingerprint, measurement);
+        }
+
+        private Measurement measurement() {
+            JsonNode node = object(root, "measurement");
+            for (Iterator<String> it = node.fieldNames(); it.hasNext();) {
+                String field = it.next();
+                if (!MEASUREMENT_FIELDS.contains(field)) {
+                    throw invalid("unknown field 'measurement." + field + "'");
+                }
+            }
+            try {
+                return new Measurement(text(node, "measurement.characteristic"),
+                        node.has("lower") ? number(node, "measurement.lower") : null,
+                        node.has("upper") ? number(node, "measurement.upper") : null, text(node, "measurement.unit"),
+                        node.has("sigma") ? number(node, "measurement.sigma") : null, text(node, "measurement.limits"));
+            } catch (IllegalArgumentException e) {
+                throw invalid("field 'measurement': " + e.getMessage());
+            }
         }
 
         private ClassPlan criteria(JsonNode container, String prefix, DefectClass defectClass, OcModel model,
@@ -325,6 +390,7 @@ public final class PlanFormat {
                 case "single" -> Set.of(SavedPlan.SMALLEST_SAMPLE, SavedPlan.FIXED_ACCEPTANCE, SavedPlan.GIVEN);
                 case "double" -> Set.of(SavedPlan.SMALLEST_ASN, SavedPlan.GIVEN);
                 case "sequential" -> Set.of(SavedPlan.WALD);
+                case "variables" -> Set.of(SavedPlan.SMALLEST_SAMPLE);
                 default -> Set.of(SavedPlan.GIVEN);
             };
             if (!methods.contains(method)) {
@@ -366,7 +432,7 @@ public final class PlanFormat {
             String scheme = text(plan, prefix + "plan.scheme");
             int version = root.get("formatVersion").asInt();
             Set<String> schemes = version < VERSION ? Set.of("single")
-                    : Set.of("single", "double", "multiple", "sequential");
+                    : Set.of("single", "double", "multiple", "sequential", "variables");
             if (!schemes.contains(scheme)) {
                 throw invalid("field '" + prefix + "plan.scheme' must be " + String.join(" or ",
                         schemes.stream().sorted().toList()) + " in format version " + version + ", got \"" + scheme
@@ -375,6 +441,7 @@ public final class PlanFormat {
             Set<String> fields = switch (scheme) {
                 case "double", "multiple" -> Set.of("scheme", "stages");
                 case "sequential" -> Set.of("scheme", "h1", "h2", "s", "truncation");
+                case "variables" -> Set.of("scheme", "n", "k", "sigmaKnown");
                 default -> Set.of("scheme", "n", "c");
             };
             for (Iterator<String> it = plan.fieldNames(); it.hasNext();) {
@@ -392,6 +459,8 @@ public final class PlanFormat {
                 result = switch (scheme) {
                     case "double" -> doublePlan(plan, prefix);
                     case "multiple" -> new MultiplePlan(stages(plan, prefix + "plan."));
+                    case "variables" -> new VariablesPlan(wholeNumber(plan, prefix + "plan.n", 2),
+                            number(plan, prefix + "plan.k"), bool(plan, prefix + "plan.sigmaKnown"));
                     case "sequential" -> new SequentialPlan(number(plan, prefix + "plan.h1"),
                             number(plan, prefix + "plan.h2"), number(plan, prefix + "plan.s"),
                             wholeNumber(plan, prefix + "plan.truncation", 1));
@@ -467,6 +536,14 @@ public final class PlanFormat {
                 throw invalid("field '" + prefix + "plan.s' is " + plan.slope() + " but Wald's lines for the AQL and"
                         + " LTPD have slope " + lines.slope() + ": the file is inconsistent");
             }
+        }
+
+        private boolean bool(JsonNode parent, String path) {
+            JsonNode value = field(parent, path);
+            if (!value.isBoolean()) {
+                throw invalid("field '" + path + "' must be true or false");
+            }
+            return value.asBoolean();
         }
 
         private JsonNode field(JsonNode parent, String path) {

@@ -15,9 +15,10 @@ import lotgate.sampling.RiskPoints;
  *
  * @param lotSize the lot size the plan was designed for, or 0 for none
  * @param classes one entry per defect class, in the order critical, major, minor (or one "any")
+ * @param measurement for a variables plan, what it measures and its limits; null for attribute plans
  */
 public record SavedPlan(String name, String description, Instant created, OcModel model, int lotSize,
-        List<ClassPlan> classes, String fingerprint) {
+        List<ClassPlan> classes, String fingerprint, Measurement measurement) {
 
     public static final String SMALLEST_SAMPLE = "smallest-sample";
     public static final String FIXED_ACCEPTANCE = "fixed-acceptance-number";
@@ -26,6 +27,7 @@ public record SavedPlan(String name, String description, Instant created, OcMode
     public static final String SMALLEST_ASN = "smallest-asn";
     /** A sequential plan with Wald's lines for the design points. */
     public static final String WALD = "wald";
+
 
     public SavedPlan {
         Objects.requireNonNull(name, "name");
@@ -37,6 +39,12 @@ public record SavedPlan(String name, String description, Instant created, OcMode
         if (classes.isEmpty()) {
             throw new IllegalArgumentException("a plan needs criteria for at least one defect class");
         }
+    }
+
+    /** An attribute plan, which measures nothing. */
+    public SavedPlan(String name, String description, Instant created, OcModel model, int lotSize,
+            List<ClassPlan> classes, String fingerprint) {
+        this(name, description, created, model, lotSize, classes, fingerprint, null);
     }
 
     /** Whether the plan counts every nonconformity alike (one class, "any"). */

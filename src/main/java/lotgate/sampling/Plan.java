@@ -6,7 +6,7 @@ package lotgate.sampling;
  * <p>Each kind is a record that implements the operating characteristics itself, so that a new kind
  * cannot compile until it answers every question below (Java 17 has no pattern switch).
  */
-public sealed interface Plan permits SinglePlan, DoublePlan, MultiplePlan, SequentialPlan {
+public sealed interface Plan permits SinglePlan, DoublePlan, MultiplePlan, SequentialPlan, VariablesPlan {
 
     /** The plan kind's name as written in plan files and in JSON output. */
     String scheme();

@@ -1,0 +1,187 @@
+package lotgate.inspection;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Reads a sheet of measurements, one measured unit per row under a header with a value column (and
+ * optionally unit and note columns): the values in sheet order with their rows. Every bad value is refused
+ * by its cell; a repeated unit identifier is refused with both rows.
+ */
+public final class MeasurementReader implements RowHandler {
+    private final SheetSource source;
+    private final String sheet;
+    private final Columns columns;
+    private final int fromRow;
+    private final int toRow;
+
+    private int headerRow = -1;
+    private int valueColumn = -1;
+    private int unitColumn = -1;
+    private int noteColumn = -1;
+    private double[] values = new double[64];
+    private int[] rows = new int[64];
+    private int count;
+    private final UnitIds unitIds = new UnitIds();
+    private final Map<Integer, String> units = new HashMap<>();
+
+    /** The measurements read, in sheet order, with the first rows' unit identifiers and notes for reports. */
+    public record Measurements(java.nio.file.Path file, String sheet, int headerRow, double[] values, int[] rows,
+            Map<Integer, String> units) {
+        public int count() {
+            return values.length;
+        }
+
+        public int firstRow() {
+            return rows.length == 0 ? -1 : rows[0];
+        }
+
+        public int lastRow() {
+            return rows.length == 0 ? -1 : rows[rows.length - 1];
+        }
+    }
+
+    /** Unit identifiers kept for listing measurements outside the limits. */
+    private static final int KEPT_UNITS = 100_000;
+
+    public MeasurementReader(SheetSource source, String sheet, Columns columns, int fromRow, int toRow) {
+        this.source = source;
+        List<String> names = source.sheetNames();
+        if (names.isEmpty()) {
+            throw new SheetException(source.file(), "the workbook has no sheets");
+        }
+        this.sheet = sheet != null ? sheet : names.stream().filter(n -> !n.equalsIgnoreCase(LotDetails.SHEET))
+                .findFirst().orElse(names.get(0));
+        this.columns = columns;
+        this.fromRow = fromRow;
+        this.toRow = toRow;
+    }
+
+    public Measurements read() {
+        if (!source.sheetNames().contains(sheet)) {
+            throw new SheetException(source.file(), "no sheet named '" + sheet + "'; the sheets are "
+                    + SheetSource.quoted(source.sheetNames()));
+        }
+        source.read(sheet, this);
+        if (headerRow < 0) {
+            throw new SheetException(source.file(), "sheet '" + sheet + "' is empty: there is no header row");
+        }
+        confirmRepeats();
+        return new Measurements(source.file(), sheet, headerRow, Arrays.copyOf(values, count),
+                Arrays.copyOf(rows, count), Map.copyOf(units));
+    }
+
+    @Override
+    public void row(int row, List<Cell> cells) {
+        if (headerRow < 0) {
+            header(row, cells);
+            return;
+        }
+        if ((fromRow > 0 && row < fromRow) || (toRow > 0 && row > toRow)) {
+            return;
+        }
+        Cell value = null;
+        String unit = "";
+        for (Cell cell : cells) {
+            if (cell.column() == valueColumn) {
+                value = cell;
+            } else if (cell.column() == unitColumn) {
+                unit = cell.text().trim();
+            }
+        }
+        if (value == null) {
+            throw new SheetException(source.file(), source.where(sheet, row, valueColumn) + ": no "
+                    + columns.nameOf(Columns.Role.VALUE) + " for this unit");
+        }
+        double number = switch (value.kind()) {
+            case NUMBER -> value.number();
+            case TEXT -> parse(value.text());
+            case FORMULA_WITHOUT_VALUE -> throw bad(row, value, "the formula " + value.text() + " has no saved value;"
+                    + " open the sheet in a spreadsheet program, let it calculate, and save it");
+            default -> Double.NaN;
+        };
+        if (!Double.isFinite(number)) {
+            throw bad(row, value, columns.nameOf(Columns.Role.VALUE) + " '" + value.text().trim()
+                    + "' is not a number");
+        }
+        if (!unit.isEmpty()) {
+            unitIds.add(unit, row);
+            if (units.size() < KEPT_UNITS) {
+                units.put(row, unit);
+            }
+        }
+        if (count == values.length) {
+            values = Arrays.copyOf(values, 2 * count);
+            rows = Arrays.copyOf(rows, 2 * count);
+        }
+        values[count] = number;
+        rows[count] = row;
+        count++;
+    }
+
+    private static double parse(String text) {
+        try {
+            return Double.parseDouble(text.trim().replace(',', '.'));
+        } catch (NumberFormatException e) {
+            return Double.NaN;
+        }
+    }
+
+    private SheetException bad(int row, Cell cell, String problem) {
+        return new SheetException(source.file(), source.where(sheet, row, cell.column()) + ": " + problem);
+    }
+
+    private void header(int row, List<Cell> cells) {
+        headerRow = row;
+        List<String> headers = new ArrayList<>();
+        for (Cell cell : cells) {
+            headers.add(cell.text().trim());
+            Columns.Role role = columns.roleOf(cell.text());
+            if (role == Columns.Role.VALUE) {
+                if (valueColumn >= 0) {
+                    throw new SheetException(source.file(), "two columns are named '" + cell.text().trim() + "': "
+                            + source.where(sheet, row, valueColumn) + " and " + source.where(sheet, row, cell.column()));
+                }
+                valueColumn = cell.column();
+            } else if (role == Columns.Role.UNIT) {
+                unitColumn = cell.column();
+            } else if (role == Columns.Role.NOTE) {
+                noteColumn = cell.column();
+            }
+        }
+        if (valueColumn < 0) {
+            throw new SheetException(source.file(), "no '" + columns.nameOf(Columns.Role.VALUE) + "' column in the"
+                    + " header, " + source.whereRow(sheet, row) + ", so the sheet holds no measurements; the headers"
+                    + " found are " + String.join(", ", headers) + " (name your own with --columns, e.g."
+                    + " value=Diameter)");
+        }
+    }
+
+    private void confirmRepeats() {
+        List<UnitIds.Suspect> suspects = unitIds.suspects();
+        if (suspects.isEmpty()) {
+            return;
+        }
+        Map<Integer, String> wanted = new HashMap<>();
+        suspects.forEach(s -> wanted.put(s.earlierRow(), null));
+        source.read(sheet, (row, cells) -> {
+            if (wanted.containsKey(row)) {
+                for (Cell cell : cells) {
+                    if (cell.column() == unitColumn) {
+                        wanted.put(row, cell.text().trim());
+                    }
+                }
+            }
+        });
+        for (UnitIds.Suspect suspect : suspects) {
+            if (suspect.unit().equals(wanted.get(suspect.earlierRow()))) {
+                throw new SheetException(source.file(), "unit '" + suspect.unit() + "' appears twice, "
+                        + source.whereRow(sheet, suspect.earlierRow()) + " and row " + suspect.row()
+                        + "; each unit of the sample must be recorded once");
+            }
+        }
+    }
+}

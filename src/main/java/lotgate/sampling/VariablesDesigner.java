@@ -1,0 +1,63 @@
+package lotgate.sampling;
+
+/**
+ * Designs a one-limit variables plan (k-method) from the two risks. With sigma known the classical closed
+ * form n = ((z_alpha + z_beta) / (z_p1 - z_p2))^2 and k = (z_alpha z_p2 + z_beta z_p1) / (z_alpha + z_beta)
+ * holds exactly before n is rounded up (common practice). With sigma unknown both risks are held exactly with
+ * the noncentral t: for each n the k that keep the producer's risk within alpha run up to the alpha-quantile
+ * of T'(n - 1, sqrt(n) z_p1) over sqrt(n), and those that keep the consumer's risk within beta start at the
+ * (1 - beta)-quantile of T'(n - 1, sqrt(n) z_p2) over sqrt(n); the smallest n where these meet is the answer.
+ * No plan with an unknown sigma can need fewer units than the known-sigma plan (the known-sigma test is the
+ * most powerful, Neyman-Pearson), so the search starts there. In both cases k is the middle of the range that
+ * meets both risks at the chosen n, and the range is reported.
+ */
+public final class VariablesDesigner {
+    /** The largest sample the search considers. */
+    public static final int MOST_UNITS = 100_000;
+
+    /**
+     * @param exactSize the known-sigma sample size before rounding, n_sigma
+     * @param wallis    Wallis's approximation for an unknown sigma, n_sigma (1 + k^2 / 2) with the closed-form k
+     * @param lowestK   the smallest k that meets the consumer's risk at n
+     * @param highestK  the largest k that meets the producer's risk at n
+     */
+    public record Design(VariablesPlan plan, PlanRisks risks, double lowestK, double highestK, double exactSize,
+            double closedFormK, double wallis) {
+    }
+
+    private VariablesDesigner() {
+    }
+
+    /** The plan with the smallest n that meets both risks, or null if none up to {@link #MOST_UNITS}. */
+    public static Design design(RiskPoints points, boolean sigmaKnown) {
+        if (points.ltpd() >= 1) {
+            throw new IllegalArgumentException("a variables plan's LTPD is a fraction beyond the limit, below 100%");
+        }
+        double z1 = VariablesPlan.standardDistance(points.aql());
+        double z2 = VariablesPlan.standardDistance(points.ltpd());
+        double za = VariablesPlan.standardDistance(points.alpha());
+        double zb = VariablesPlan.standardDistance(points.beta());
+        double exact = Math.pow((za + zb) / (z1 - z2), 2);
+        double closedK = (za * z2 + zb * z1) / (za + zb);
+        double wallis = exact * (1 + closedK * closedK / 2);
+        OcModel model = new OcModel.Binomial();
+        int n = Math.max(sigmaKnown ? 1 : 2, (int) Math.ceil(exact * (1 - 1e-12)));
+        for (; n <= MOST_UNITS; n++) {
+            double root = Math.sqrt(n);
+            double low;
+            double high;
+            if (sigmaKnown) {
+                low = z2 + zb / root;
+                high = z1 - za / root;
+            } else {
+                low = NoncentralT.quantile(1 - points.beta(), n - 1, root * z2) / root;
+                high = NoncentralT.quantile(points.alpha(), n - 1, root * z1) / root;
+            }
+            if (low <= high) {
+                VariablesPlan plan = new VariablesPlan(n, 0.5 * (low + high), sigmaKnown);
+                return new Design(plan, PlanRisks.of(plan, model, points), low, high, exact, closedK, wallis);
+            }
+        }
+        return null;
+    }
+}
