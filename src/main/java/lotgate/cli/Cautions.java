@@ -8,6 +8,12 @@ final class Cautions {
             "hurt someone, the customer's requirements, local codes and licensed practice decide whether",
             "sampling is allowed at all; they often call for 100% inspection or proven process control.");
 
+    static final String VARIABLES = String.join("\n",
+            "Caution: the k-method's risks hold only for normal measurements from a stable process with a capable",
+            "gauge; lotgate tests each lot's sample for normality and resolution and warns when they fail. Where a",
+            "unit beyond the limits could hurt someone, the customer's requirements, local codes and licensed",
+            "practice decide whether sampling by variables is allowed at all.");
+
     private Cautions() {
     }
 }

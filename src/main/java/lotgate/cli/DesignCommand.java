@@ -35,6 +35,9 @@ import picocli.CommandLine.Spec;
                         + " With --acceptance alone: the smallest n for that acceptance number that meets the LTPD"
                         + " point. With --sample-size and --acceptance: the risks of that plan.",
                 "",
+                "--scheme variables designs a k-method plan for a measured characteristic (--lower and/or --upper,"
+                        + " --sigma if known) with both risks held exactly (noncentral t for an unknown sigma).",
+                "",
                 "--scheme double finds the double plan with the smallest average sample number (ASN) at the AQL"
                         + " that meets both risks exactly; --scheme sequential gives Wald's item-by-item plan with"
                         + " its exact risks once truncated; --scheme multiple evaluates stages given with --stage."
@@ -83,7 +86,8 @@ final class DesignCommand implements Runnable {
     @Option(names = "--scheme", paramLabel = "SCHEME", defaultValue = "single",
             description = "The kind of plan: single (the default), double (a second sample when the first does not"
                     + " decide; designed for the smallest average sample number), multiple (up to 7 stages, given"
-                    + " with --stage) or sequential (item by item, Wald's lines for both risks).")
+                    + " with --stage), sequential (item by item, Wald's lines for both risks) or variables (by"
+                    + " measurements against specification limits).")
     String scheme;
 
     @Option(names = "--second-ratio", paramLabel = "K", defaultValue = "1",
@@ -112,6 +116,29 @@ final class DesignCommand implements Runnable {
             description = "Sequential plans: the most units inspected (default: 3 times the single plan's n for the"
                     + " same risks).")
     Integer truncateAt;
+
+    @Option(names = "--sigma", paramLabel = "VALUE",
+            description = "Variables plans: the known process standard deviation, in the measurement's unit (leave it"
+                    + " out when sigma is estimated from each sample).")
+    Double sigma;
+
+    @Option(names = "--lower", paramLabel = "LIMIT", description = "Variables plans: the lower specification limit.")
+    Double lower;
+
+    @Option(names = "--upper", paramLabel = "LIMIT", description = "Variables plans: the upper specification limit.")
+    Double upper;
+
+    @Option(names = "--limits", paramLabel = "HOW",
+            description = "Variables plans with both limits: combined (default; the M-method on the estimated"
+                    + " fraction beyond both, one AQL for both) or separate (the k-method at each limit).")
+    String limits;
+
+    @Option(names = "--unit", paramLabel = "UNIT", description = "Variables plans: the measurement's unit, e.g. mm.")
+    String unit;
+
+    @Option(names = "--characteristic", paramLabel = "NAME",
+            description = "Variables plans: what is measured, e.g. 'bore diameter'.")
+    String characteristic;
 
     @Option(names = "--plain-wald",
             description = "Sequential plans: keep Wald's lines for the risks as asked, even where the truncated plan's"
@@ -160,9 +187,18 @@ final class DesignCommand implements Runnable {
     public void run() {
         OcModel model = models.resolve(spec);
         int lotSize = models.lotSizeOrZero();
-        if (!List.of("single", "double", "multiple", "sequential").contains(scheme)) {
-            throw new ParameterException(spec.commandLine(), "--scheme " + scheme + ": give single, double, multiple"
-                    + " or sequential");
+        if (!List.of("single", "double", "multiple", "sequential", "variables").contains(scheme)) {
+            throw new ParameterException(spec.commandLine(), "--scheme " + scheme + ": give single, double, multiple,"
+                    + " sequential or variables");
+        }
+        if (scheme.equals("variables")) {
+            new VariablesDesign(this, model, lotSize).run();
+            return;
+        }
+        if (sigma != null || lower != null || upper != null || limits != null || unit != null
+                || characteristic != null) {
+            throw new ParameterException(spec.commandLine(), "--sigma, --lower, --upper, --limits, --unit and"
+                    + " --characteristic are for --scheme variables");
         }
         if (!scheme.equals("single")) {
             new SchemeDesign(this, model, lotSize).run();

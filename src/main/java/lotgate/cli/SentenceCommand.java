@@ -36,6 +36,13 @@ import lotgate.sentencing.Outcome;
 import lotgate.sentencing.Pending;
 import lotgate.sentencing.Stopping;
 import lotgate.sampling.Plan;
+import lotgate.sampling.OcModel;
+import lotgate.sampling.RiskPoints;
+import lotgate.sampling.VariablesPlan;
+import lotgate.sampling.SinglePlan;
+import lotgate.inspection.MeasurementReader;
+import lotgate.plan.Measurement;
+import lotgate.sentencing.MeasuredLot;
 import lotgate.sampling.SequentialPlan;
 import lotgate.report.ChartFile;
 import lotgate.report.PlanWording;
@@ -185,7 +192,7 @@ final class SentenceCommand implements Runnable {
         }
         Inspection inspection = noRecord && !family ? null : Inspection.open(storeOption, planFile, family, lot,
                 supersedes);
-        Sentence sentence;
+        Sentence sentence = null;
         try {
             SavedPlan plan = inspection == null ? PlanFormat.read(planFile) : inspection.plan();
             List<String> notices = new ArrayList<>();
@@ -193,6 +200,11 @@ final class SentenceCommand implements Runnable {
                 notices.add(inspection.notice());
             }
             lot = checkLot(lot, plan, notices);
+            if (plan.measurement() != null) {
+                Path appliedPlan = inspection == null ? planFile : inspection.planFile();
+                sentence = finish(measured(plan, appliedPlan, source, lot, range, columns, notices), inspection);
+                return;
+            }
             if (chart != null && !plan.unclassified()) {
                 throw new ParameterException(spec.commandLine(), "--chart draws the sampling chart of a plan without"
                         + " defect classes; plan " + plan.name() + " has criteria per class");
@@ -221,45 +233,103 @@ final class SentenceCommand implements Runnable {
             Path appliedPlan = inspection == null ? planFile : inspection.planFile();
             LotDecision decision = new LotDecision(lot, plan, appliedPlan, sample, Sha256.of(sheetFile), sentence,
                     confidence, Instant.now().truncatedTo(ChronoUnit.SECONDS), Version.number(), notices);
-            Inspection.Recorded recorded = null;
-            if (inspection != null && !noRecord) {
-                recorded = inspection.record(decision, production, reason);
-            }
-            for (Path report : reports) {
-                LotReport.write(decision, report);
-            }
-            if (record != null) {
-                AtomicWrite.writeString(record, Json.text(DecisionJson.of(decision)) + "\n");
-            }
-            if (chart != null) {
-                ChartFile.write(SamplingChart.of(decision), chart, 900, 560);
-            }
-            PrintWriter out = spec.commandLine().getOut();
-            switch (format.kind) {
-                case json -> {
-                    var node = DecisionJson.of(decision);
-                    if (inspection != null) {
-                        node.set("history", inspection.json(recorded));
-                    }
-                    out.println(Json.text(node));
-                }
-                case csv -> out.print(csv(decision));
-                case text -> {
-                    printText(out, decision);
-                    if (inspection != null) {
-                        inspection.printText(out, recorded);
-                    }
-                }
-            }
-            out.flush();
+            finish(decision, inspection);
         } finally {
             if (inspection != null) {
                 inspection.close();
             }
+            if (decided(sentence) && !sentence.accepted()) {
+                throw new Main.Failure(ExitCode.REJECTED, null);
+            }
         }
-        if (!sentence.accepted()) {
-            throw new Main.Failure(ExitCode.REJECTED, null);
+    }
+
+    /** Whether the lot was sentenced, recorded and printed in full (so that its exit code is the verdict's). */
+    private boolean finished;
+
+    private boolean decided(Sentence sentence) {
+        return finished && sentence != null;
+    }
+
+    /** Records the decision, writes its reports and record, and prints it; returns its sentence. */
+    private Sentence finish(LotDecision decision, Inspection inspection) {
+        Inspection.Recorded recorded = null;
+        if (inspection != null && !noRecord) {
+            recorded = inspection.record(decision, production, reason);
         }
+        for (Path report : reports) {
+            LotReport.write(decision, report);
+        }
+        if (record != null) {
+            AtomicWrite.writeString(record, Json.text(DecisionJson.of(decision)) + "\n");
+        }
+        if (chart != null) {
+            ChartFile.write(SamplingChart.of(decision), chart, 900, 560);
+        }
+        PrintWriter out = spec.commandLine().getOut();
+        switch (format.kind) {
+            case json -> {
+                var node = DecisionJson.of(decision);
+                if (inspection != null) {
+                    node.set("history", inspection.json(recorded));
+                }
+                out.println(Json.text(node));
+            }
+            case csv -> out.print(csv(decision));
+            case text -> {
+                printText(out, decision);
+                if (inspection != null) {
+                    inspection.printText(out, recorded);
+                }
+            }
+        }
+        out.flush();
+        finished = true;
+        return decision.sentence();
+    }
+
+    /** A lot judged on measurements by a variables plan. */
+    private LotDecision measured(SavedPlan plan, Path appliedPlan, SheetSource source, LotDetails lot, int[] range,
+            Columns columns, List<String> notices) {
+        if (chart != null) {
+            throw new ParameterException(spec.commandLine(), "--chart draws the sampling chart of an attribute plan;"
+                    + " plan " + plan.name() + " judges measurements (its report shows them)");
+        }
+        VariablesPlan variables = (VariablesPlan) plan.plan();
+        Measurement spec = plan.measurement();
+        MeasurementReader.Measurements measurements = new MeasurementReader(source, sheet, columns, range[0],
+                range[1]).read();
+        int wanted = variables.n();
+        if (measurements.count() != wanted) {
+            String rowsRead = measurements.count() == 0 ? "" : ", rows " + measurements.firstRow() + " to "
+                    + measurements.lastRow();
+            throw new Main.Failure(ExitCode.INCOMPLETE_SAMPLE, measurements.count() < wanted
+                    ? "incomplete sample: " + measurements.count() + " of " + wanted + " measurements in " + sheetFile
+                            + rowsRead + "; measure and record " + (wanted - measurements.count())
+                            + " more before sentencing (nothing was recorded)"
+                    : sheetFile + " holds " + measurements.count() + " measurements" + rowsRead + " but plan "
+                            + plan.name() + " measures " + wanted + "; name the sample's rows with --rows FIRST-LAST"
+                            + " (nothing was recorded)");
+        }
+        MeasuredLot judged = MeasuredLot.judge(variables, spec, measurements.values(), confidence);
+        notices.addAll(judged.warnings());
+        OcModel model = plan.model();
+        RiskPoints points = plan.designedFor();
+        double nearest = Double.isNaN(judged.statisticLower()) ? judged.statisticUpper()
+                : Double.isNaN(judged.statisticUpper()) ? judged.statisticLower()
+                : Math.min(judged.statisticLower(), judged.statisticUpper());
+        double pValue = Double.isFinite(nearest)
+                ? new VariablesPlan(variables.n(), nearest, variables.sigmaKnown()).rejection(model, points.aql())
+                : (nearest > 0 ? 0.0 : 1.0);
+        Evidence evidence = new Evidence(pValue, confidence, 0.0, judged.upperBound(), -1,
+                Math.min(1, Math.max(0, judged.estimate())), judged.acceptanceAtEstimate(),
+                variables.acceptance(model, points.aql()), variables.acceptance(model, points.ltpd()));
+        ClassVerdict verdict = new ClassVerdict(DefectClass.ANY, variables, wanted, judged.outside().size(),
+                judged.accepted(), evidence, -1, -1, "the sample");
+        Sentence sentence = new Sentence(judged.accepted(), List.of(verdict));
+        InspectionSample sample = measurements.asSample(judged.outside(), "outside the limits");
+        return new LotDecision(lot, plan, appliedPlan, sample, Sha256.of(sheetFile), sentence, confidence,
+                Instant.now().truncatedTo(ChronoUnit.SECONDS), Version.number(), notices, judged);
     }
 
     /** The counts the plan is judged on, by its model: units, or nonconformities, over the first m units. */
@@ -555,15 +625,37 @@ final class SentenceCommand implements Runnable {
         }
         out.println((sentence.accepted() ? "ACCEPT " : "REJECT ") + lotLine(decision.lot()));
         out.println("  " + SentenceText.reason(decision));
-        out.println("  plan " + decision.plan().name() + " (fingerprint " + decision.plan().shortFingerprint() + "), "
-                + DesignCommand.modelLine(decision.plan().model(), decision.lot().lotSize()));
-        if (!(decision.plan().classes().get(0).plan() instanceof lotgate.sampling.SinglePlan)) {
+        if (decision.measured() != null) {
+            out.println("  plan " + decision.plan().name() + " (fingerprint " + decision.plan().shortFingerprint()
+                    + "), variables plan " + PlanWording.brief(decision.plan().plan()));
+            out.println("  " + VariablesDesign.describe(decision.plan().measurement()));
+        } else {
+            out.println("  plan " + decision.plan().name() + " (fingerprint " + decision.plan().shortFingerprint()
+                    + "), " + DesignCommand.modelLine(decision.plan().model(), decision.lot().lotSize()));
+        }
+        if (decision.measured() == null && !(decision.plan().classes().get(0).plan() instanceof SinglePlan)) {
             out.println("  " + decision.plan().plan().scheme() + " plan: " + PlanWording.brief(decision.plan().plan()));
         }
         out.println("  sample of " + sample.units() + " units from " + sample.file() + ", " + rowsOf(sample));
         out.println();
+        if (decision.measured() != null) {
+            out.println("  Evidence (exact)");
+            for (String line : SentenceText.measuredLines(decision)) {
+                out.println("    " + line);
+            }
+            for (String notice : decision.notices()) {
+                out.println();
+                out.println((decision.measured().warnings().contains(notice) ? "  WARNING: " : "  Note: ") + notice
+                        + ".");
+            }
+            out.println();
+            out.println("  decided " + decision.decidedAt() + " by lotgate " + decision.toolVersion() + "; sheet sha256 "
+                    + decision.sheetSha256());
+            printWritten(out);
+            return;
+        }
         String what = decision.countsUnits() ? "nonconforming units" : "nonconformities";
-        boolean staged = sentence.classes().stream().anyMatch(v -> !(v.plan() instanceof lotgate.sampling.SinglePlan));
+        boolean staged = sentence.classes().stream().anyMatch(v -> !(v.plan() instanceof SinglePlan));
         String row = staged ? "  %-9s %10s %7s %13s %10s  %-8s %s%n" : "  %-9s %10s %7s %13s %10s  %s%n";
         out.printf(row, "class", "inspected", "found", "accept up to", "reject at", "verdict", "decided at");
         for (ClassVerdict verdict : sentence.classes()) {
@@ -584,6 +676,10 @@ final class SentenceCommand implements Runnable {
         out.println();
         out.println("  decided " + decision.decidedAt() + " by lotgate " + decision.toolVersion() + "; sheet sha256 "
                 + decision.sheetSha256());
+        printWritten(out);
+    }
+
+    private void printWritten(PrintWriter out) {
         if (record != null) {
             out.println("  record saved to " + record);
         }
@@ -600,7 +696,7 @@ final class SentenceCommand implements Runnable {
         for (ClassVerdict verdict : decision.sentence().classes()) {
             Evidence evidence = verdict.evidence();
             rows.add(List.of(decision.lot().lot(), verdict.defectClass().label(), verdict.inspected(), verdict.found(),
-                    PlanWording.acceptance(verdict.acceptanceNumber()), verdict.rejectionNumber(),
+                    SentenceText.acceptanceCell(verdict), SentenceText.rejectionCell(verdict),
                     verdict.accepted() ? "accept" : "reject",
                     evidence.pValue(), evidence.lower(), evidence.upper(),
                     evidence.lotUpperBound() >= 0 ? evidence.lotUpperBound() : "", decision.sentence().verdict(),

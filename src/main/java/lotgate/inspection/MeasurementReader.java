@@ -21,7 +21,7 @@ public final class MeasurementReader implements RowHandler {
     private int headerRow = -1;
     private int valueColumn = -1;
     private int unitColumn = -1;
-    private int noteColumn = -1;
+    private final List<String> headers = new ArrayList<>();
     private double[] values = new double[64];
     private int[] rows = new int[64];
     private int count;
@@ -30,7 +30,7 @@ public final class MeasurementReader implements RowHandler {
 
     /** The measurements read, in sheet order, with the first rows' unit identifiers and notes for reports. */
     public record Measurements(java.nio.file.Path file, String sheet, int headerRow, double[] values, int[] rows,
-            Map<Integer, String> units) {
+            Map<Integer, String> units, List<String> headers) {
         public int count() {
             return values.length;
         }
@@ -41,6 +41,33 @@ public final class MeasurementReader implements RowHandler {
 
         public int lastRow() {
             return rows.length == 0 ? -1 : rows[rows.length - 1];
+        }
+
+        /**
+         * The sample as a sheet of pass/fail units, for the history and the reports: a unit outside the
+         * specification limits counts as nonconforming.
+         *
+         * @param outside the indexes of the measurements outside the limits, in sample order
+         */
+        public InspectionSample asSample(List<Integer> outside, String label) {
+            int[] unitCounts = new int[lotgate.plan.DefectClass.values().length];
+            long[] nonconformities = new long[unitCounts.length];
+            unitCounts[lotgate.plan.DefectClass.ANY.ordinal()] = outside.size();
+            nonconformities[lotgate.plan.DefectClass.ANY.ordinal()] = outside.size();
+            Tally all = new Tally(values.length, unitCounts, nonconformities);
+            List<InspectedUnit> kept = new ArrayList<>();
+            java.util.BitSet marked = new java.util.BitSet();
+            for (int index : outside) {
+                marked.set(rows[index]);
+                if (kept.size() < SampleReader.KEPT_UNITS) {
+                    kept.add(new InspectedUnit(rows[index], units.getOrDefault(rows[index], ""), true, 0, 0, 0, label,
+                            Cell.shortest(values[index])));
+                }
+            }
+            Map<String, Integer> types = outside.isEmpty() ? Map.of() : Map.of(label, outside.size());
+            return new InspectionSample(file, sheet, headerRow, List.copyOf(headers), true, java.util.Set.of(),
+                    values.length, firstRow(), lastRow(), Map.of(values.length, all), all, kept, outside.size(), types,
+                    -1, marked, null);
         }
     }
 
@@ -71,7 +98,7 @@ public final class MeasurementReader implements RowHandler {
         }
         confirmRepeats();
         return new Measurements(source.file(), sheet, headerRow, Arrays.copyOf(values, count),
-                Arrays.copyOf(rows, count), Map.copyOf(units));
+                Arrays.copyOf(rows, count), Map.copyOf(units), List.copyOf(headers));
     }
 
     @Override
@@ -136,7 +163,6 @@ public final class MeasurementReader implements RowHandler {
 
     private void header(int row, List<Cell> cells) {
         headerRow = row;
-        List<String> headers = new ArrayList<>();
         for (Cell cell : cells) {
             headers.add(cell.text().trim());
             Columns.Role role = columns.roleOf(cell.text());
@@ -148,8 +174,6 @@ public final class MeasurementReader implements RowHandler {
                 valueColumn = cell.column();
             } else if (role == Columns.Role.UNIT) {
                 unitColumn = cell.column();
-            } else if (role == Columns.Role.NOTE) {
-                noteColumn = cell.column();
             }
         }
         if (valueColumn < 0) {

@@ -11,6 +11,7 @@ import lotgate.plan.PlanFormat;
 import lotgate.sentencing.ClassVerdict;
 import lotgate.sentencing.Evidence;
 import lotgate.sentencing.LotDecision;
+import lotgate.sentencing.MeasuredLot;
 
 /**
  * The decision record, "lotgate-decision" version 1: one JSON object with the verdict, the lot, the
@@ -22,6 +23,43 @@ public final class DecisionJson {
     public static final int VERSION = 1;
 
     private DecisionJson() {
+    }
+
+    /** A measured lot's statistics, the basis of the supplier report's mean and standard deviation charts. */
+    private static ObjectNode measured(LotDecision decision) {
+        MeasuredLot measured = decision.measured();
+        ObjectNode node = JsonNodeFactory.instance.objectNode();
+        node.put("n", measured.n());
+        node.put("mean", measured.mean());
+        node.put("standardDeviation", measured.deviation());
+        node.put("sigmaKnown", measured.sigmaKnown());
+        putNumber(node, "statisticLower", measured.statisticLower());
+        putNumber(node, "statisticUpper", measured.statisticUpper());
+        node.put("k", measured.k());
+        node.put("estimate", measured.estimate());
+        putNumber(node, "maxEstimate", measured.maxEstimate());
+        node.put("upperBound", measured.upperBound());
+        node.put("acceptanceAtEstimate", measured.acceptanceAtEstimate());
+        if (measured.normality() != null) {
+            ObjectNode normality = node.putObject("normality");
+            normality.put("test", "Anderson-Darling");
+            normality.put("statistic", measured.normality().statistic());
+            normality.put("modified", measured.normality().modified());
+            normality.put("pValue", measured.normality().pValue());
+        }
+        node.put("distinctValues", measured.distinct());
+        node.put("outsideLimits", measured.outside().size());
+        var warnings = node.putArray("warnings");
+        measured.warnings().forEach(warnings::add);
+        return node;
+    }
+
+    private static void putNumber(ObjectNode node, String field, double value) {
+        if (Double.isFinite(value)) {
+            node.put(field, value);
+        } else {
+            node.putNull(field);
+        }
     }
 
     public static ObjectNode of(LotDecision decision) {
@@ -58,9 +96,11 @@ public final class DecisionJson {
         sheet.put("headerRow", sample.headerRow());
         sheet.put("firstRow", sample.firstRow());
         sheet.put("lastRow", sample.lastRow());
-        sheet.put("recording", sample.passFail() ? "pass-fail" : "class-counts");
+        sheet.put("recording", decision.measured() != null ? "measurements" : sample.passFail() ? "pass-fail"
+                : "class-counts");
         root.put("sampleSize", sample.units());
-        root.put("counting", decision.countsUnits() ? "nonconforming units" : "nonconformities");
+        root.put("counting", decision.measured() != null ? "units measured outside the limits"
+                : decision.countsUnits() ? "nonconforming units" : "nonconformities");
         root.put("confidence", decision.confidence());
         var classes = root.putArray("classes");
         for (ClassVerdict verdict : decision.sentence().classes()) {
@@ -75,7 +115,11 @@ public final class DecisionJson {
             } else {
                 entry.putNull("acceptanceNumber");
             }
-            entry.put("rejectionNumber", verdict.rejectionNumber());
+            if (verdict.rejectionNumber() >= 0) {
+                entry.put("rejectionNumber", verdict.rejectionNumber());
+            } else {
+                entry.putNull("rejectionNumber");
+            }
             entry.put("verdict", verdict.accepted() ? "accept" : "reject");
             Evidence evidence = verdict.evidence();
             ObjectNode proof = entry.putObject("evidence");
@@ -104,6 +148,9 @@ public final class DecisionJson {
         ObjectNode types = root.putObject("defectTypes");
         Map<String, Integer> sorted = new TreeMap<>(sample.defectTypes());
         sorted.forEach(types::put);
+        if (decision.measured() != null) {
+            root.set("measurement", measured(decision));
+        }
         root.put("criticalFound", decision.criticalFound());
         if (decision.criticalFound()) {
             root.put("criticalNotice", decision.criticalNotice());

@@ -92,8 +92,9 @@ final class LotReportHtml {
             Evidence evidence = verdict.evidence();
             html.append("<tr><td>").append(escape(verdict.defectClass().label())).append("</td><td class=\"n\">")
                     .append(verdict.inspected()).append("</td><td class=\"n\">").append(verdict.found())
-                    .append("</td><td class=\"n\">").append(verdict.acceptanceNumber()).append("</td><td class=\"n\">")
-                    .append(verdict.rejectionNumber()).append("</td><td>").append(verdict.accepted() ? "accept"
+                    .append("</td><td class=\"n\">").append(escape(SentenceText.acceptanceCell(verdict)))
+                    .append("</td><td class=\"n\">").append(escape(SentenceText.rejectionCell(verdict)))
+                    .append("</td><td>").append(verdict.accepted() ? "accept"
                             : "<b>reject</b>").append("</td><td class=\"n\">")
                     .append(SentenceText.percent(evidence.pValue())).append("</td><td>")
                     .append(SentenceText.percent(evidence.lower())).append(" to ")

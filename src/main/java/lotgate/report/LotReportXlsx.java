@@ -161,8 +161,13 @@ final class LotReportXlsx {
             put(r, 0, verdict.defectClass().label(), null);
             put(r, 1, verdict.inspected(), null);
             put(r, 2, verdict.found(), null);
-            put(r, 3, verdict.acceptanceNumber(), null);
-            put(r, 4, verdict.rejectionNumber(), null);
+            if (verdict.acceptanceNumber() >= 0) {
+                put(r, 3, verdict.acceptanceNumber(), null);
+                put(r, 4, verdict.rejectionNumber(), null);
+            } else {
+                put(r, 3, SentenceText.acceptanceCell(verdict), null);
+                put(r, 4, SentenceText.rejectionCell(verdict), null);
+            }
             put(r, 5, verdict.accepted() ? "accept" : "reject", verdict.accepted() ? null : bold);
             put(r, 6, evidence.pValue(), percent);
             put(r, 7, evidence.lower(), percent);

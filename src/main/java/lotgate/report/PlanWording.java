@@ -9,6 +9,7 @@ import lotgate.sampling.Plan;
 import lotgate.sampling.SequentialPlan;
 import lotgate.sampling.SinglePlan;
 import lotgate.sampling.Stage;
+import lotgate.sampling.VariablesPlan;
 
 /** A plan's numbers in a few words, the same in every output: "n = 132, c = 3", "n1 = 50, c1 = 1, ...". */
 public final class PlanWording {
@@ -31,6 +32,10 @@ public final class PlanWording {
             }
             return multiple.stages().size() + " stages n/c/r " + String.join(", ", stages);
         }
+        if (plan instanceof VariablesPlan variables) {
+            return String.format(Locale.ROOT, "n = %d, k = %.4f, sigma %s", variables.n(), variables.k(),
+                    variables.sigmaKnown() ? "known" : "unknown");
+        }
         SequentialPlan sequential = (SequentialPlan) plan;
         return String.format(Locale.ROOT, "item by item, h1 = %.4g, h2 = %.4g, s = %.4g, truncated at %d",
                 sequential.h1(), sequential.h2(), sequential.slope(), sequential.truncation());
@@ -47,6 +52,7 @@ public final class PlanWording {
             case "double" -> "Double sampling plan";
             case "multiple" -> "Multiple sampling plan";
             case "sequential" -> "Sequential plan (item by item)";
+            case "variables" -> "Variables plan (k-method)";
             default -> "Single sampling plan";
         };
     }

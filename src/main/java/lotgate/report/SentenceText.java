@@ -7,6 +7,8 @@ import lotgate.plan.ClassPlan;
 import lotgate.sentencing.ClassVerdict;
 import lotgate.sentencing.Evidence;
 import lotgate.sentencing.LotDecision;
+import lotgate.sentencing.MeasuredLot;
+import lotgate.plan.Measurement;
 
 /** The plain-language lines of a decision, the same on the terminal, in the workbook and on the page. */
 public final class SentenceText {
@@ -20,8 +22,109 @@ public final class SentenceText {
         return count + " " + word;
     }
 
+    /** The "accept up to" cell of a verdict: the acceptance number, "none", or k for a variables plan. */
+    public static String acceptanceCell(ClassVerdict verdict) {
+        if (verdict.plan() instanceof lotgate.sampling.VariablesPlan variables) {
+            return "k = " + number(variables.k());
+        }
+        return PlanWording.acceptance(verdict.acceptanceNumber());
+    }
+
+    /** The "reject at" cell of a verdict: the rejection number, or "below k" for a variables plan. */
+    public static String rejectionCell(ClassVerdict verdict) {
+        return verdict.rejectionNumber() >= 0 ? String.valueOf(verdict.rejectionNumber()) : "below k";
+    }
+
+    /** A measured value in at most six significant digits, as people write them. */
+    public static String number(double value) {
+        if (!Double.isFinite(value)) {
+            return value > 0 ? "infinite" : value < 0 ? "minus infinite" : "none";
+        }
+        return new java.math.BigDecimal(value).round(new java.math.MathContext(6)).stripTrailingZeros()
+                .toPlainString();
+    }
+
+    /** Why a lot judged on measurements got its verdict. */
+    private static String measuredReason(LotDecision decision) {
+        MeasuredLot measured = decision.measured();
+        Measurement spec = decision.plan().measurement();
+        String deviation = measured.sigmaKnown() ? "sigma" : "s";
+        if (spec.limits().equals(Measurement.COMBINED)) {
+            return "estimated fraction beyond the limits " + percent(measured.estimate()) + ", "
+                    + (measured.accepted() ? "within" : "above") + " M = " + percent(measured.maxEstimate());
+        }
+        List<String> parts = new ArrayList<>();
+        if (!Double.isNaN(measured.statisticLower())) {
+            parts.add("(mean - L)/" + deviation + " = " + number(measured.statisticLower()));
+        }
+        if (!Double.isNaN(measured.statisticUpper())) {
+            parts.add("(U - mean)/" + deviation + " = " + number(measured.statisticUpper()));
+        }
+        return String.join(", ", parts) + (measured.accepted() ? ", at least" : ", not all at least") + " k = "
+                + number(measured.k());
+    }
+
+    /** What the measurements say, line by line, the same on the terminal and in the reports. */
+    public static List<String> measuredLines(LotDecision decision) {
+        MeasuredLot measured = decision.measured();
+        Measurement spec = decision.plan().measurement();
+        String unit = spec.unit().isEmpty() ? "" : " " + spec.unit();
+        String level = percent(decision.confidence());
+        List<String> lines = new ArrayList<>();
+        lines.add("mean " + number(measured.mean()) + unit + ", " + (measured.sigmaKnown() ? "sigma " + number(
+                measured.deviation()) + unit + " (known)" : "s " + number(measured.deviation()) + unit) + ", n = "
+                + measured.n() + ", " + measured.distinct() + " distinct values");
+        List<String> statistics = new ArrayList<>();
+        String deviation = measured.sigmaKnown() ? "sigma" : "s";
+        if (spec.lower() != null) {
+            statistics.add("(mean - L)/" + deviation + " = " + number(measured.statisticLower()) + " with L = "
+                    + number(spec.lower()) + unit);
+        }
+        if (spec.upper() != null) {
+            statistics.add("(U - mean)/" + deviation + " = " + number(measured.statisticUpper()) + " with U = "
+                    + number(spec.upper()) + unit);
+        }
+        lines.add(String.join("; ", statistics) + "; k = " + number(measured.k())
+                + (spec.limits().equals(Measurement.COMBINED) ? ", M = " + percent(measured.maxEstimate()) : ""));
+        lines.add("estimated fraction beyond the limit" + (spec.twoLimits() ? "s" : "") + ": " + percent(measured
+                .estimate()) + " (minimum variance unbiased estimate under normality); at most " + percent(measured
+                .upperBound()) + " (" + level + " one-sided upper bound, exact" + (spec.twoLimits()
+                ? ", summed over both limits" : "") + ")");
+        ClassVerdict verdict = decision.sentence().classes().get(0);
+        lines.add("on the OC curve: a lot at the estimate is accepted " + percent(verdict.evidence()
+                .acceptanceAtObserved()) + " of the time; at the AQL " + percent(verdict.evidence().acceptanceAtAql())
+                + ", at the LTPD " + percent(verdict.evidence().acceptanceAtLtpd()));
+        lines.add("p-value against the AQL " + percent(decision.plan().designedFor().aql()) + ": " + percent(verdict
+                .evidence().pValue()) + " (the chance that a lot at the AQL gives a statistic this low or lower, at the"
+                + " nearer limit)");
+        if (measured.normality() != null) {
+            lines.add(String.format(Locale.ROOT, "normality (Anderson-Darling, mean and sigma estimated): A* = %.3f,"
+                    + " p = %.3g%s", measured.normality().modified(), measured.normality().pValue(),
+                    measured.normality().pValue() < MeasuredLot.NORMALITY_LEVEL ? ": NOT NORMAL" : ": no evidence"
+                            + " against normality"));
+        }
+        if (measured.outside().isEmpty()) {
+            lines.add("measurements outside the limits: none");
+        } else {
+            List<String> listed = new ArrayList<>();
+            for (var unit1 : decision.sample().nonconforming()) {
+                if (listed.size() == 10) {
+                    break;
+                }
+                listed.add("row " + unit1.row() + (unit1.unit().isEmpty() ? "" : " (" + unit1.unit() + ")") + ": "
+                        + unit1.note() + unit);
+            }
+            lines.add("measurements outside the limits: " + measured.outside().size() + " (" + String.join(", ", listed)
+                    + (measured.outside().size() > listed.size() ? ", ..." : "") + ")");
+        }
+        return lines;
+    }
+
     /** Why the lot got its verdict, in one sentence. */
     public static String reason(LotDecision decision) {
+        if (decision.measured() != null) {
+            return measuredReason(decision);
+        }
         List<String> rejected = new ArrayList<>();
         for (ClassVerdict verdict : decision.sentence().classes()) {
             if (!verdict.accepted()) {
@@ -61,6 +164,9 @@ public final class SentenceText {
 
     /** The evidence per class: count, p-value, interval, lot bound, position on the OC curve. */
     public static List<String> evidenceLines(LotDecision decision) {
+        if (decision.measured() != null) {
+            return measuredLines(decision);
+        }
         List<String> lines = new ArrayList<>();
         String perUnit = decision.countsUnits() ? "" : " per unit";
         String level = percent(decision.confidence());

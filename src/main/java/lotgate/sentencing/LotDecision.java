@@ -13,11 +13,19 @@ import lotgate.plan.SavedPlan;
  *
  * @param notices remarks printed with the decision, such as a lot size other than the plan's (the
  *                caution for a critical nonconformity is {@link #criticalNotice()})
+ * @param measured for a lot judged by a variables plan, its measurements' statistics; else null
  */
 public record LotDecision(LotDetails lot, SavedPlan plan, Path planFile, InspectionSample sample, String sheetSha256,
-        Sentence sentence, double confidence, Instant decidedAt, String toolVersion, List<String> notices) {
+        Sentence sentence, double confidence, Instant decidedAt, String toolVersion, List<String> notices,
+        MeasuredLot measured) {
     public LotDecision {
         notices = List.copyOf(notices);
+    }
+
+    /** A lot judged by counts, with no measurements. */
+    public LotDecision(LotDetails lot, SavedPlan plan, Path planFile, InspectionSample sample, String sheetSha256,
+            Sentence sentence, double confidence, Instant decidedAt, String toolVersion, List<String> notices) {
+        this(lot, plan, planFile, sample, sheetSha256, sentence, confidence, decidedAt, toolVersion, notices, null);
     }
 
     /** The caution shown with any critical nonconformity, whatever the plan says. */

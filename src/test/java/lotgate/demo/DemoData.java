@@ -32,6 +32,30 @@ public final class DemoData {
         mirelleMalformed(folder.resolve("mirelle-ms1204-malformed.xlsx"));
         pastYear(folder.resolve("lots-2025.csv"));
         quorrinClips(folder.resolve("quorrin-qp2611.csv"));
+        kestruneBores(folder.resolve("kestrune-kc0911-bore.csv"), "KC-0911", false, 911);
+        kestruneBores(folder.resolve("kestrune-kc0915-bore.csv"), "KC-0915", true, 915);
+    }
+
+    /**
+     * Kestrune housings' bore diameters, 42 measured in mm against 41.950 to 42.050 (invented): lot KC-0911 from a
+     * centred normal process; lot KC-0915 skewed (a worn reamer leaves a long tail towards the upper limit), which
+     * the normality test flags.
+     */
+    static void kestruneBores(Path file, String lot, boolean skewed, long seed) throws IOException {
+        java.util.Random random = new java.util.Random(seed);
+        List<List<Object>> rows = new ArrayList<>();
+        rows.add(row("unit", "value", "note"));
+        for (int i = 1; i <= 42; i++) {
+            double value = skewed ? 41.985 + 0.004 * Math.exp(1.1 * random.nextGaussian()) : 42.000 + 0.011
+                    * random.nextGaussian();
+            rows.add(row(String.format("%s-%02d", lot.replace("-", ""), i), String.format(java.util.Locale.ROOT,
+                    "%.4f", value), null));
+        }
+        csv(file, ',', false, rows);
+        String stem = file.getFileName().toString().replace(".csv", ".lot.csv");
+        csv(file.resolveSibling(stem), ',', false, List.of(row("lot", lot), row("supplier", "Kestrune Castings (invented)"),
+                row("part", "KC-114"), row("lot size", 400), row("received", skewed ? "2026-11-26" : "2026-11-12"),
+                row("inspector", "M. Lindqvist (invented)")));
     }
 
     /**

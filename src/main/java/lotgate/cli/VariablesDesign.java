@@ -1,0 +1,292 @@
+package lotgate.cli;
+
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.PrintWriter;
+import java.time.Instant;
+import java.time.temporal.ChronoUnit;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import lotgate.plan.Measurement;
+import lotgate.plan.PlanFormat;
+import lotgate.plan.SavedPlan;
+import lotgate.report.CsvTable;
+import lotgate.sampling.OcModel;
+import lotgate.sampling.PlanRisks;
+import lotgate.sampling.RiskPoints;
+import lotgate.sampling.SingleDesign;
+import lotgate.sampling.SinglePlan;
+import lotgate.sampling.SinglePlanDesigner;
+import lotgate.sampling.VariablesDesigner;
+import lotgate.sampling.VariablesPlan;
+import picocli.CommandLine.ParameterException;
+
+/**
+ * {@code design --scheme variables}: a k-method plan for a measured characteristic, with known or unknown
+ * sigma, set beside the attribute plan for the same risks.
+ */
+final class VariablesDesign {
+    private final DesignCommand command;
+    private final OcModel model;
+    private final int lotSize;
+
+    VariablesDesign(DesignCommand command, OcModel model, int lotSize) {
+        this.command = command;
+        this.model = model;
+        this.lotSize = lotSize;
+    }
+
+    private ParameterException usage(String message) {
+        return new ParameterException(command.spec.commandLine(), message);
+    }
+
+    void run() {
+        Measurement measurement = measurement();
+        RiskPoints points = points();
+        if (command.save != null) {
+            command.checkSaveTarget();
+        }
+        VariablesDesigner.Design design = VariablesDesigner.design(points, measurement.sigmaKnown());
+        PrintWriter out = command.spec.commandLine().getOut();
+        if (design == null) {
+            String reason = "no variables plan with at most " + VariablesDesigner.MOST_UNITS + " units meets both risks";
+            command.printNoPlan(out, reason, model, lotSize);
+            throw new Main.Failure(ExitCode.NO_PLAN, command.format.kind == OutputFormat.Kind.text ? null
+                    : "no sampling plan meets the request: " + reason);
+        }
+        VariablesPlan plan = design.plan();
+        if (measurement.limits().equals(Measurement.COMBINED) && plan.n() < (plan.sigmaKnown() ? 2 : 3)) {
+            throw usage("the M-method needs at least " + (plan.sigmaKnown() ? 2 : 3) + " units; these risks give n = "
+                    + plan.n() + ": use --limits separate");
+        }
+        if (lotSize > 0 && plan.n() > lotSize) {
+            throw usage("the plan measures " + plan.n() + " units, more than --lot-size " + lotSize);
+        }
+        SingleDesign attribute = new SinglePlanDesigner(model, lotSize).design(points);
+        SinglePlan single = attribute instanceof SingleDesign.Found found ? found.plan() : null;
+        VariablesDesigner.Design known = measurement.sigmaKnown() ? design : VariablesDesigner.design(points, true);
+        SavedPlan saved = null;
+        if (command.save != null) {
+            saved = PlanFormat.seal(DesignCommand.stem(command.save.file), command.save.description,
+                    Instant.now().truncatedTo(ChronoUnit.SECONDS), plan, model, lotSize, points,
+                    SavedPlan.SMALLEST_SAMPLE, measurement);
+            PlanFormat.write(command.save.file, saved);
+        }
+        switch (command.format.kind) {
+            case json -> out.println(Json.text(json(design, known, single, measurement, points, saved)));
+            case csv -> out.print(csv(design, measurement, points, saved));
+            case text -> printText(out, design, known, single, measurement, points, saved);
+        }
+        out.flush();
+    }
+
+    private Measurement measurement() {
+        if (!command.classSpecs.isEmpty() || command.acceptance != null || command.sampleSize != null
+                || !command.stageSpecs.isEmpty() || command.truncateAt != null || command.firstRejection != null
+                || command.asnAt != null || command.curtailed || command.plainWald || !command.secondRatio.equals("1")) {
+            throw usage("--scheme variables takes the risks, --lower and/or --upper, --sigma, --limits, --unit and"
+                    + " --characteristic; --class, --acceptance, --sample-size, --stage and the double and sequential"
+                    + " options are for attribute plans");
+        }
+        if (!model.countsUnits() || model instanceof OcModel.Hypergeometric) {
+            throw usage("--model " + model.name() + ": a variables plan judges the fraction of a steady process beyond"
+                    + " its limits (type B); leave out --model");
+        }
+        if (command.lower == null && command.upper == null) {
+            throw usage("--scheme variables needs a specification limit: give --lower, --upper or both");
+        }
+        for (Double limit : new Double[] {command.lower, command.upper, command.sigma}) {
+            if (limit != null && !Double.isFinite(limit)) {
+                throw usage("the limits and --sigma must be numbers");
+            }
+        }
+        if (command.lower != null && command.upper != null && !(command.lower < command.upper)) {
+            throw usage("--lower " + command.lower + " must be below --upper " + command.upper);
+        }
+        if (command.sigma != null && !(command.sigma > 0)) {
+            throw usage("--sigma " + command.sigma + ": the known process standard deviation must be above 0");
+        }
+        boolean two = command.lower != null && command.upper != null;
+        String limits;
+        if (!two) {
+            if (command.limits != null) {
+                throw usage("--limits is for plans with both --lower and --upper");
+            }
+            limits = Measurement.ONE;
+        } else if (command.limits == null || command.limits.equals(Measurement.COMBINED)) {
+            limits = Measurement.COMBINED;
+        } else if (command.limits.equals(Measurement.SEPARATE)) {
+            limits = Measurement.SEPARATE;
+        } else {
+            throw usage("--limits " + command.limits + ": give combined or separate");
+        }
+        return new Measurement(command.characteristic == null ? "" : command.characteristic.trim(), command.lower,
+                command.upper, command.unit == null ? "" : command.unit.trim(), command.sigma, limits);
+    }
+
+    private RiskPoints points() {
+        if (command.aql == null || command.ltpd == null) {
+            throw usage("give --aql and --ltpd: the fractions beyond the limit(s) that should pass and fail");
+        }
+        ModelOptions.checkLevel(command.spec, model, "--aql", command.aql);
+        ModelOptions.checkLevel(command.spec, model, "--ltpd", command.ltpd);
+        if (command.aql >= command.ltpd) {
+            throw usage("--aql " + Percent.level(command.aql) + " must be below --ltpd " + Percent.level(command.ltpd));
+        }
+        if (command.alpha + command.beta >= 1) {
+            throw usage("--alpha plus --beta must be below 100%");
+        }
+        return new RiskPoints(command.aql, command.alpha, command.ltpd, command.beta);
+    }
+
+    private static String number(double value) {
+        return String.format(Locale.ROOT, "%.6g", value).replaceAll("(\\.\\d*?)0+$", "$1").replaceAll("\\.$", "");
+    }
+
+    /** What is measured, in one line: "bore diameter in mm, limits 9.95 to 10.05, sigma 0.012 known". */
+    static String describe(Measurement measurement) {
+        String what = measurement.characteristic().isEmpty() ? "measurements" : measurement.characteristic();
+        String unit = measurement.unit().isEmpty() ? "" : " " + measurement.unit();
+        String limits = measurement.twoLimits() ? "limits " + number(measurement.lower()) + " to "
+                + number(measurement.upper()) + unit + " (" + measurement.limits() + ")"
+                : measurement.lower() != null ? "lower limit " + number(measurement.lower()) + unit
+                        : "upper limit " + number(measurement.upper()) + unit;
+        return what + ", " + limits + ", " + (measurement.sigmaKnown() ? "sigma " + number(measurement.sigma()) + unit
+                + " known" : "sigma unknown (estimated by each sample's s)");
+    }
+
+    /** The acceptance rule in words. */
+    static List<String> rule(VariablesPlan plan, Measurement measurement) {
+        String deviation = plan.sigmaKnown() ? "sigma" : "s";
+        List<String> lines = new ArrayList<>();
+        lines.add(String.format(Locale.ROOT, "Measure n = %d units; compute their mean%s.", plan.n(),
+                plan.sigmaKnown() ? "" : " and standard deviation s"));
+        String k = String.format(Locale.ROOT, "k = %.4f", plan.k());
+        switch (measurement.limits()) {
+            case Measurement.COMBINED -> lines.add(String.format(Locale.ROOT, "Accept the lot when the estimated fraction"
+                    + " beyond both limits (M-method, from (U - mean)/%s and (mean - L)/%s) is at most M = %s.",
+                    deviation, deviation, Percent.probability(plan.maxEstimate())));
+            case Measurement.SEPARATE -> lines.add("Accept the lot when both (U - mean)/" + deviation + " and (mean - L)/"
+                    + deviation + " are at least " + k + ".");
+            default -> lines.add("Accept the lot when " + (measurement.upper() != null ? "(U - mean)/" : "(mean - L)/")
+                    + deviation + " is at least " + k + "; reject it otherwise.");
+        }
+        return lines;
+    }
+
+    private void printText(PrintWriter out, VariablesDesigner.Design design, VariablesDesigner.Design known,
+            SinglePlan single, Measurement measurement, RiskPoints points, SavedPlan saved) {
+        VariablesPlan plan = design.plan();
+        out.println("Variables plan (k-method), sigma " + (plan.sigmaKnown() ? "known" : "unknown")
+                + ": the smallest sample that meets both risks");
+        out.println("  " + describe(measurement));
+        out.println("  quality: the fraction of product beyond the limit" + (measurement.twoLimits() ? "s" : "")
+                + ", measurements assumed normal");
+        out.println();
+        for (String line : rule(plan, measurement)) {
+            out.println("  " + line);
+        }
+        out.printf(Locale.ROOT, "  (k = %.4f is the middle of the range %.4f to %.4f, every k of which meets both risks"
+                + " at n = %d.)%n", plan.k(), design.lowestK(), design.highestK(), plan.n());
+        out.println();
+        PlanRisks risks = design.risks();
+        String row = "  %-6s %-22s %-11s %-24s %-16s%n";
+        out.printf(row, "point", "fraction beyond", "P(accept)", "risk", "allowed");
+        out.printf(row, "AQL", Percent.level(points.aql()), Percent.probability(1 - risks.producerRisk()),
+                "producer's " + Percent.probability(risks.producerRisk()), String.format("%-8s%s",
+                        Percent.level(points.alpha()), DesignCommand.verdict(risks.producerRisk() <= points.alpha())));
+        out.printf(row, "LTPD", Percent.level(points.ltpd()), Percent.probability(risks.consumerRisk()),
+                "consumer's " + Percent.probability(risks.consumerRisk()), String.format("%-8s%s",
+                        Percent.level(points.beta()), DesignCommand.verdict(risks.consumerRisk() <= points.beta())));
+        if (measurement.twoLimits()) {
+            out.println("  (risks with all nonconforming product beyond one limit; where both limits contribute the"
+                    + " M-method accepts less often)");
+        }
+        out.println();
+        if (single != null) {
+            out.printf(Locale.ROOT, "  Against the attribute plan for the same risks (%s): %d units measured instead of"
+                    + " %d inspected, %+.1f%%.%n", "n = " + single.n() + ", c = " + single.c(), plan.n(), single.n(),
+                    100.0 * (plan.n() - single.n()) / single.n());
+        }
+        if (plan.sigmaKnown()) {
+            out.printf(Locale.ROOT, "  Closed form: n = %.2f, rounded up to %d; k = %.4f (common practice).%n",
+                    design.exactSize(), plan.n(), design.closedFormK());
+        } else {
+            out.printf(Locale.ROOT, "  With sigma known the plan would need n = %d (k = %.4f). Wallis's approximation for"
+                    + " an unknown sigma, n_sigma (1 + k^2/2) = %.1f, gives %d units; the exact answer is %d.%n",
+                    known.plan().n(), known.plan().k(), design.wallis(), (int) Math.ceil(design.wallis() - 1e-9),
+                    plan.n());
+        }
+        out.println();
+        out.println(Cautions.VARIABLES.indent(2).stripTrailing());
+        if (saved != null) {
+            out.println();
+            out.println("  Saved " + command.save.file + " (fingerprint " + saved.shortFingerprint() + ")");
+        }
+    }
+
+    private ObjectNode json(VariablesDesigner.Design design, VariablesDesigner.Design known, SinglePlan single,
+            Measurement measurement, RiskPoints points, SavedPlan saved) {
+        VariablesPlan plan = design.plan();
+        ObjectNode node = Json.object();
+        node.put("planFound", true);
+        node.put("scheme", "variables");
+        node.put("method", SavedPlan.SMALLEST_SAMPLE);
+        node.put("n", plan.n());
+        node.put("k", plan.k());
+        node.put("kLowest", design.lowestK());
+        node.put("kHighest", design.highestK());
+        node.put("sigmaKnown", plan.sigmaKnown());
+        node.put("limits", measurement.limits());
+        if (measurement.limits().equals(Measurement.COMBINED)) {
+            node.put("maxEstimate", plan.maxEstimate());
+        }
+        node.put("aql", points.aql());
+        node.put("alpha", points.alpha());
+        node.put("ltpd", points.ltpd());
+        node.put("beta", points.beta());
+        node.put("producerRisk", design.risks().producerRisk());
+        node.put("consumerRisk", design.risks().consumerRisk());
+        node.put("risksMet", design.risks().meets(points));
+        ObjectNode closed = node.putObject("knownSigma");
+        closed.put("exactN", design.exactSize());
+        closed.put("n", known.plan().n());
+        closed.put("closedFormK", design.closedFormK());
+        closed.put("k", known.plan().k());
+        ObjectNode wallis = node.putObject("wallis");
+        wallis.put("n", design.wallis());
+        wallis.put("nRounded", (int) Math.ceil(design.wallis() - 1e-9));
+        if (single != null) {
+            ObjectNode attribute = node.putObject("attribute");
+            attribute.put("n", single.n());
+            attribute.put("c", single.c());
+            attribute.put("unitsSaved", single.n() - plan.n());
+        }
+        ObjectNode measured = node.putObject("measurement");
+        measured.put("characteristic", measurement.characteristic());
+        if (measurement.lower() != null) {
+            measured.put("lower", measurement.lower());
+        }
+        if (measurement.upper() != null) {
+            measured.put("upper", measurement.upper());
+        }
+        measured.put("unit", measurement.unit());
+        if (measurement.sigma() != null) {
+            measured.put("sigma", measurement.sigma());
+        }
+        if (saved != null) {
+            node.put("fingerprint", saved.fingerprint());
+        }
+        return node;
+    }
+
+    private String csv(VariablesDesigner.Design design, Measurement measurement, RiskPoints points, SavedPlan saved) {
+        VariablesPlan plan = design.plan();
+        return CsvTable.table(List.of("scheme", "n", "k", "sigmaKnown", "limits", "maxEstimate", "aql", "alpha", "ltpd",
+                "beta", "producerRisk", "consumerRisk", "risksMet", "fingerprint"), List.of(List.of("variables", plan.n(),
+                plan.k(), plan.sigmaKnown(), measurement.limits(), measurement.limits().equals(Measurement.COMBINED)
+                        ? plan.maxEstimate() : "", points.aql(), points.alpha(), points.ltpd(), points.beta(),
+                design.risks().producerRisk(), design.risks().consumerRisk(), design.risks().meets(points),
+                saved == null ? "" : saved.fingerprint())));
+    }
+}
