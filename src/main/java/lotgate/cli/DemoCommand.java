@@ -147,20 +147,33 @@ final class DemoCommand implements Runnable {
         step(out, "    And under the single plan, on its 132 clips (a trial, not recorded):",
                 "sentence", plans + "/quorrin-qp-7.json", sheets + "/quorrin-qp2611.csv", "--rows", "2-133",
                 "--no-record", "--format", "csv");
-        step(out, "16. The supplier audit: Arnwick's year, with its switches of severity, in a workbook and a page:",
+        step(out, "16. Kestrune's housings also have a measured characteristic: the bore diameter, 41.950 to 42.050"
+                        + " mm. A variables plan (sigma unknown, both limits combined by the M-method) needs far fewer"
+                        + " housings than counting bores out of tolerance would:",
+                "design", "--scheme", "variables", "--aql", "1%", "--ltpd", "6%", "--lower", "41.95", "--upper", "42.05",
+                "--unit", "mm", "--characteristic", "bore diameter", "--save", plans + "/kestrune-kc-114-bore.json",
+                "--replace", "--description", "Invented demo: Kestrune Castings impeller housing KC-114, bore diameter");
+        step(out, "    Lot KC-0911's 42 bores, measured in order:",
+                "sentence", plans + "/kestrune-kc-114-bore.json", sheets + "/kestrune-kc0911-bore.csv", "--store", store,
+                "--report", reports + "/KC-0911.html");
+        step(out, "    Lot KC-0915 comes from a worn reamer: its bores are skewed, and lotgate says the k-method's"
+                        + " normality does not hold:",
+                "sentence", plans + "/kestrune-kc-114-bore.json", sheets + "/kestrune-kc0915-bore.csv", "--store", store,
+                "--report", reports + "/KC-0915.html");
+        step(out, "17. The supplier audit: Arnwick's year, with its switches of severity, in a workbook and a page:",
                 "supplier", "Arnwick Fasteners (invented)", "--store", store,
                 "--report", reports + "/arnwick-audit.xlsx", "--report", reports + "/arnwick-audit.html");
-        step(out, "17. Mirelle's year: ten accepted lots in a row earned reduced inspection:",
+        step(out, "18. Mirelle's year: ten accepted lots in a row earned reduced inspection:",
                 "supplier", "Mirelle Seals (invented)", "--store", store,
                 "--report", reports + "/mirelle-audit.xlsx", "--report", reports + "/mirelle-audit.html");
         for (String other : new String[] {"Kestrune Castings (invented)", "Quorrin Plastics (invented)"}) {
             quietly("supplier", other, "--store", store, "--report", reports + "/"
                     + other.substring(0, other.indexOf(' ')).toLowerCase(java.util.Locale.ROOT) + "-audit.html");
         }
-        step(out, "18. All suppliers ranked; Quorrin's four lots leave it a wide interval (the audits of Kestrune"
-                        + " and Quorrin are in the reports folder too):",
+        step(out, "19. All suppliers ranked; Quorrin's four lots leave it a wide interval (the audits of Kestrune,"
+                        + " with its mean and s charts of the bores, and of Quorrin are in the reports folder too):",
                 "suppliers", "--store", store, "--report", reports + "/ranking.html");
-        step(out, "19. Nothing in the history was altered or removed:", "verify", "--store", store);
+        step(out, "20. Nothing in the history was altered or removed:", "verify", "--store", store);
         out.println("Demo done. Plans are in " + plans + ", charts in " + charts + ", lot and audit reports in "
                 + reports + ", the history in " + folder.resolve("history.sqlite") + ".");
         out.println("Open " + charts + "/arnwick-af-m8-40.png for the OC, AOQ and ATI curves together, "
@@ -171,7 +184,8 @@ final class DemoCommand implements Runnable {
 
     private static final String[] SHEETS = {"arnwick-af2611.xlsx", "arnwick-af2618.csv", "arnwick-af2618.lot.csv",
             "kestrune-kc0907.xlsx", "mirelle-ms1130.csv", "mirelle-ms1130.lot.csv", "mirelle-ms1204-malformed.xlsx",
-            "lots-2025.csv", "quorrin-qp2611.csv", "quorrin-qp2611.lot.csv"};
+            "lots-2025.csv", "quorrin-qp2611.csv", "quorrin-qp2611.lot.csv", "kestrune-kc0911-bore.csv",
+            "kestrune-kc0911-bore.lot.csv", "kestrune-kc0915-bore.csv", "kestrune-kc0915-bore.lot.csv"};
 
     /** Copies the invented inspection sheets that travel in the jar into the demo's folder. */
     private String copySheets(PrintWriter out) {
@@ -187,7 +201,7 @@ final class DemoCommand implements Runnable {
                 throw new Main.Failure(ExitCode.INTERNAL, "cannot read the demo sheet " + name + ": " + e.getMessage());
             }
         }
-        out.println("The invented inspection sheets of six lots and last year's lot list are copied to " + target
+        out.println("The invented inspection sheets of eight lots and last year's lot list are copied to " + target
                 + " (the same as demo-data/ in the repository).");
         out.println();
         return target.toString();

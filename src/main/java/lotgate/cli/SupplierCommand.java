@@ -98,7 +98,8 @@ final class SupplierCommand implements Runnable {
                 throw new Main.Failure(ExitCode.USAGE, "the history store " + store.location() + " has no lots of '"
                         + supplier + "'" + (part == null ? "" : ", part '" + part + "'") + " (see 'lotgate history')");
             }
-            audit = SupplierAudit.of(supplier, part, from, to, rows, store.defectTypes(supplier, part), rules, confidence);
+            audit = SupplierAudit.of(supplier, part, from, to, rows, store.defectTypes(supplier, part), rules, confidence,
+                    store.measuredLots(supplier, part));
             for (LotRow lot : audit.rejectedLots()) {
                 evidence.add(evidenceOf(store.record(lot.seq()).json()));
             }

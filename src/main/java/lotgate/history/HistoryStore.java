@@ -285,6 +285,42 @@ public final class HistoryStore implements AutoCloseable {
                 result.getInt(11), result.getString(12), result.getString(13), result.getLong(14));
     }
 
+    /**
+     * The lots of a supplier (and part) that were judged on measurements, with their sample sizes, means and
+     * standard deviations as their decision records hold them, in record order.
+     */
+    public List<MeasurementCharts.Row> measuredLots(String supplier, String part) {
+        String sql = "SELECT seq, content FROM lot_record WHERE supplier = ? AND kind = 'lot'"
+                + (part == null ? "" : " AND part = ?") + " AND content LIKE ? ORDER BY seq";
+        return read("read the measured lots", () -> {
+            List<MeasurementCharts.Row> rows = new ArrayList<>();
+            try (PreparedStatement query = connection.prepareStatement(sql)) {
+                int index = 1;
+                query.setString(index++, supplier);
+                if (part != null) {
+                    query.setString(index++, part);
+                }
+                query.setString(index, "%\"recording\":\"measurements\"%");
+                try (ResultSet result = query.executeQuery()) {
+                    while (result.next()) {
+                        com.fasterxml.jackson.databind.JsonNode content = new StoredRecord(result.getLong(1), null,
+                                result.getString(2), null, null).json();
+                        com.fasterxml.jackson.databind.JsonNode measured = content.path("decision").path("measurement");
+                        if (measured.isMissingNode()) {
+                            continue;
+                        }
+                        String received = content.path("received").isTextual() ? content.path("received").asText() : null;
+                        rows.add(new MeasurementCharts.Row(result.getLong(1), content.path("lot").asText(),
+                                received == null ? null : LocalDate.parse(received), measured.path("n").asInt(),
+                                measured.path("mean").asDouble(), measured.path("sampleStandardDeviation").asDouble(),
+                                measured.path("characteristic").asText(""), measured.path("unit").asText("")));
+                    }
+                }
+            }
+            return rows;
+        });
+    }
+
     /** The full content of one record. */
     public StoredRecord record(long seq) {
         return read("read record " + seq, () -> {

@@ -11,11 +11,13 @@ import java.util.Map;
  * with every switch, and the rejected lots. Built from the store's rows; computes, stores nothing.
  *
  * @param lotsInOrder the period's lots in the order received, the same order as {@code pChart}
+ * @param measurements the mean and s charts of the period's lots judged on measurements, or null for none
  */
 public record SupplierAudit(String supplier, String part, LocalDate from, LocalDate to, double confidence,
         List<Part> parts, long lots, long accepted, long rejected, QualityStatistics.ProcessAverage acceptanceRate,
         QualityStatistics.ProcessAverage processAverage, List<QualityStatistics.PChartPoint> pChart,
-        List<QualityStatistics.ParetoBar> pareto, List<LotRow> rejectedLots, List<LotRow> lotsInOrder) {
+        List<QualityStatistics.ParetoBar> pareto, List<LotRow> rejectedLots, List<LotRow> lotsInOrder,
+        MeasurementCharts measurements) {
 
     /** One part's severity now and its switches (over all its lots, not only the period). */
     public record Part(String part, Severity current, List<SeverityTracker.Switch> switches, int lots) {
@@ -23,6 +25,13 @@ public record SupplierAudit(String supplier, String part, LocalDate from, LocalD
 
     public static SupplierAudit of(String supplier, String part, LocalDate from, LocalDate to, List<LotRow> rows,
             Map<String, Long> defectTypes, SwitchingRules rules, double confidence) {
+        return of(supplier, part, from, to, rows, defectTypes, rules, confidence, List.of());
+    }
+
+    /** The audit with the lots judged on measurements (as the store reads them, any order). */
+    public static SupplierAudit of(String supplier, String part, LocalDate from, LocalDate to, List<LotRow> rows,
+            Map<String, Long> defectTypes, SwitchingRules rules, double confidence,
+            List<MeasurementCharts.Row> measured) {
         List<Part> parts = new ArrayList<>();
         List<LotRow> inPeriod = new ArrayList<>();
         for (Map.Entry<String, List<LotRow>> entry : SupplierHistory.byPart(rows).entrySet()) {
@@ -47,6 +56,21 @@ public record SupplierAudit(String supplier, String part, LocalDate from, LocalD
                 inPeriod.size() - accepted, QualityStatistics.acceptanceRate(inPeriod.size(), accepted, confidence),
                 QualityStatistics.processAverage(inspected, nonconforming, confidence),
                 QualityStatistics.pChart(names, n, d), QualityStatistics.pareto(defectTypes),
-                inPeriod.stream().filter(r -> !r.accepted()).toList(), List.copyOf(inPeriod));
+                inPeriod.stream().filter(r -> !r.accepted()).toList(), List.copyOf(inPeriod),
+                MeasurementCharts.of(inOrder(measured, inPeriod)));
+    }
+
+    /** The measured lots that are among the period's effective lots, in the same order. */
+    private static List<MeasurementCharts.Row> inOrder(List<MeasurementCharts.Row> measured, List<LotRow> inPeriod) {
+        Map<Long, MeasurementCharts.Row> bySeq = new java.util.HashMap<>();
+        measured.forEach(row -> bySeq.put(row.seq(), row));
+        List<MeasurementCharts.Row> ordered = new ArrayList<>();
+        for (LotRow lot : inPeriod) {
+            MeasurementCharts.Row row = bySeq.get(lot.seq());
+            if (row != null) {
+                ordered.add(row);
+            }
+        }
+        return ordered;
     }
 }

@@ -178,6 +178,40 @@ public final class Charts {
         return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, style(plot), true));
     }
 
+    /**
+     * A Shewhart chart of one value per lot in receiving order, with its centre and 3-sigma limits (per lot).
+     *
+     * @param series the values, the centre, the lower and the upper limits, each one entry per lot
+     */
+    public static JFreeChart control(String title, List<String> lots, double[][] series, String valueLabel) {
+        XYSeriesCollection data = new XYSeriesCollection();
+        String[] names = {"Lot value", "Centre", "Upper control limit", "Lower control limit"};
+        double[][] ordered = {series[0], series[1], series[3], series[2]};
+        for (int s = 0; s < names.length; s++) {
+            XYSeries line = new XYSeries(names[s], false, true);
+            for (int i = 0; i < lots.size(); i++) {
+                line.add(i + 1, ordered[s][i]);
+            }
+            data.addSeries(line);
+        }
+        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
+        renderer.setSeriesShapesVisible(0, true);
+        renderer.setSeriesShape(0, new Rectangle2D.Double(-3, -3, 6, 6));
+        Color[] colours = {PALETTE[0], PALETTE[2], PALETTE[1], PALETTE[1]};
+        for (int s = 0; s < names.length; s++) {
+            renderer.setSeriesPaint(s, colours[s]);
+            renderer.setSeriesStroke(s, s == 0 ? new BasicStroke(1.5f) : new BasicStroke(1.2f, BasicStroke.CAP_BUTT,
+                    BasicStroke.JOIN_MITER, 10f, new float[] {5f, 3f}, 0f));
+        }
+        renderer.setSeriesVisibleInLegend(3, false);
+        NumberAxis order = new NumberAxis("Lot, in order received (1 = " + (lots.isEmpty() ? "" : lots.get(0)) + ")");
+        order.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
+        NumberAxis value = new NumberAxis(valueLabel);
+        value.setAutoRangeIncludesZero(false);
+        XYPlot plot = new XYPlot(data, order, value, renderer);
+        return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, style(plot), true));
+    }
+
     /** The Pareto chart: defect types as bars, most frequent first, with the cumulative share as a line. */
     public static JFreeChart pareto(String title, List<String> types, long[] counts, double[] cumulative) {
         org.jfree.data.category.DefaultCategoryDataset bars = new org.jfree.data.category.DefaultCategoryDataset();

@@ -30,8 +30,11 @@ public final class DecisionJson {
         MeasuredLot measured = decision.measured();
         ObjectNode node = JsonNodeFactory.instance.objectNode();
         node.put("n", measured.n());
+        node.put("characteristic", decision.plan().measurement().characteristic());
+        node.put("unit", decision.plan().measurement().unit());
         node.put("mean", measured.mean());
         node.put("standardDeviation", measured.deviation());
+        node.put("sampleStandardDeviation", measured.sampleDeviation());
         node.put("sigmaKnown", measured.sigmaKnown());
         putNumber(node, "statisticLower", measured.statisticLower());
         putNumber(node, "statisticUpper", measured.statisticUpper());

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import lotgate.files.AtomicWrite;
 import lotgate.history.LotRow;
+import lotgate.history.MeasurementCharts;
 import lotgate.history.QualityStatistics;
 import lotgate.history.SeverityTracker;
 import lotgate.history.SupplierAudit;
@@ -94,6 +95,15 @@ public final class SupplierReport {
             lines.add("part " + part.part() + ": " + part.current().label() + " inspection now, " + part.switches().size()
                     + " switch(es) over " + part.lots() + " lots");
         }
+        MeasurementCharts charts = audit.measurements();
+        if (charts != null) {
+            String unit = charts.unit().isEmpty() ? "" : " " + charts.unit();
+            long outside = charts.points().stream().filter(MeasurementCharts.Point::outOfControl).count();
+            lines.add(charts.points().size() + " lot(s) judged on measurements of " + what(charts) + ": grand mean "
+                    + SentenceText.number(charts.grandMean()) + unit + ", process sigma estimated "
+                    + SentenceText.number(charts.sigma()) + unit + "; " + outside + " outside the 3-sigma limits of the"
+                    + " mean or s chart");
+        }
         return lines;
     }
 
@@ -162,42 +172,40 @@ public final class SupplierReport {
             int n = audit.pChart().size();
             if (n > 0) {
                 XSSFSheet chartSheet = workbook.createSheet("p-chart");
-                XSSFDrawing drawing = chartSheet.createDrawingPatriarch();
-                XSSFChart chart = drawing.createChart(drawing.createAnchor(0, 0, 0, 0, 0, 0, 18, 30));
-                chart.setTitleText("p-chart of lot fractions nonconforming");
-                chart.getOrAddLegend().setPosition(LegendPosition.BOTTOM);
-                XDDFCategoryAxis bottom = chart.createCategoryAxis(AxisPosition.BOTTOM);
-                bottom.setTitle("Lot, in order received");
-                XDDFValueAxis left = chart.createValueAxis(AxisPosition.LEFT);
-                left.setTitle("Fraction nonconforming");
-                left.setNumberFormat("0.0%");
-                XDDFDataSource<String> names = XDDFDataSourcesFactory.fromStringCellRange(lots,
-                        new CellRangeAddress(1, n, 1, 1));
-                XDDFLineChartData data = (XDDFLineChartData) chart.createData(ChartTypes.LINE, bottom, left);
-                String[] series = {"Lot fraction", "Centre", "Lower limit", "Upper limit"};
-                org.apache.poi.xddf.usermodel.PresetColor[] colours = {org.apache.poi.xddf.usermodel.PresetColor.NAVY,
-                        org.apache.poi.xddf.usermodel.PresetColor.SEA_GREEN,
-                        org.apache.poi.xddf.usermodel.PresetColor.DARK_RED,
-                        org.apache.poi.xddf.usermodel.PresetColor.DARK_RED};
-                for (int s = 0; s < series.length; s++) {
-                    XDDFNumericalDataSource<Double> values = XDDFDataSourcesFactory.fromNumericCellRange(lots,
-                            new CellRangeAddress(1, n, 6 + s, 6 + s));
-                    XDDFLineChartData.Series line = (XDDFLineChartData.Series) data.addSeries(names, values);
-                    line.setTitle(series[s], null);
-                    line.setMarkerStyle(s == 0 ? MarkerStyle.CIRCLE : MarkerStyle.NONE);
-                    line.setSmooth(false);
-                    // Spreadsheet programs differ in their default line; name it so that every one draws it.
-                    org.apache.poi.xddf.usermodel.XDDFLineProperties stroke = new org.apache.poi.xddf.usermodel.XDDFLineProperties(
-                            new org.apache.poi.xddf.usermodel.XDDFSolidFillProperties(
-                                    org.apache.poi.xddf.usermodel.XDDFColor.from(colours[s])));
-                    stroke.setWidth(s == 0 ? 1.75 : 1.25);
-                    if (s > 0) {
-                        stroke.setPresetDash(new org.apache.poi.xddf.usermodel.XDDFPresetLineDash(
-                                org.apache.poi.xddf.usermodel.PresetLineDash.DASH));
-                    }
-                    line.setLineProperties(stroke);
+                lineChart(chartSheet, lots, 1, "p-chart of lot fractions nonconforming", "Fraction nonconforming", "0.0%",
+                        n, 6, new String[] {"Lot fraction", "Centre", "Lower limit", "Upper limit"}, 0);
+            }
+            MeasurementCharts charts = audit.measurements();
+            if (charts != null) {
+                XSSFSheet measured = workbook.createSheet("Measurements");
+                String[] columns = {"Lot", "Received", "n", "Mean", "Centre", "Lower limit", "Upper limit", "s",
+                        "s centre", "s lower limit", "s upper limit"};
+                XSSFRow top = measured.createRow(0);
+                for (int c = 0; c < columns.length; c++) {
+                    cells.put(top, c, columns[c], bold);
                 }
-                chart.plot(data);
+                int row = 1;
+                for (MeasurementCharts.Point point : charts.points()) {
+                    XSSFRow line = measured.createRow(row++);
+                    cells.put(line, 0, point.lot(), null);
+                    cells.put(line, 1, point.received() == null ? null : point.received().toString(), null);
+                    cells.put(line, 2, point.n(), null);
+                    cells.put(line, 3, point.mean(), null);
+                    cells.put(line, 4, charts.grandMean(), null);
+                    cells.put(line, 5, point.meanLower(), null);
+                    cells.put(line, 6, point.meanUpper(), null);
+                    cells.put(line, 7, point.deviation(), null);
+                    cells.put(line, 8, point.deviationCentre(), null);
+                    cells.put(line, 9, point.deviationLower(), null);
+                    cells.put(line, 10, point.deviationUpper(), null);
+                }
+                int m = charts.points().size();
+                String unit = charts.unit().isEmpty() ? "" : " (" + charts.unit() + ")";
+                XSSFSheet chartSheet = workbook.createSheet("Mean and s charts");
+                lineChart(chartSheet, measured, 0, "Means of " + what(charts), "Mean" + unit, "General", m, 3,
+                        new String[] {"Lot mean", "Centre", "Lower limit", "Upper limit"}, 0);
+                lineChart(chartSheet, measured, 0, "Standard deviations of " + what(charts), "s" + unit, "General", m, 7,
+                        new String[] {"Lot s", "Centre", "Lower limit", "Upper limit"}, 31);
             }
 
             XSSFSheet types = workbook.createSheet("Defect types");
@@ -232,6 +240,54 @@ public final class SupplierReport {
         } catch (IOException e) {
             throw new lotgate.files.OutputFileException(file, e);
         }
+    }
+
+    private static String what(MeasurementCharts charts) {
+        return charts.characteristic().isEmpty() ? "the measurements" : charts.characteristic();
+    }
+
+    /**
+     * A native line chart of a value and its centre and limits, read from four adjacent columns of a data sheet
+     * whose column {@code nameColumn} names the lots.
+     */
+    private static void lineChart(XSSFSheet sheet, XSSFSheet dataSheet, int nameColumn, String title, String valueTitle,
+            String format, int n, int firstColumn, String[] series, int topRow) {
+        XSSFDrawing drawing = sheet.getDrawingPatriarch() != null ? sheet.getDrawingPatriarch()
+                : sheet.createDrawingPatriarch();
+        XSSFChart chart = drawing.createChart(drawing.createAnchor(0, 0, 0, 0, 0, topRow, 18, topRow + 30));
+        chart.setTitleText(title);
+        chart.getOrAddLegend().setPosition(LegendPosition.BOTTOM);
+        XDDFCategoryAxis bottom = chart.createCategoryAxis(AxisPosition.BOTTOM);
+        bottom.setTitle("Lot, in order received");
+        XDDFValueAxis left = chart.createValueAxis(AxisPosition.LEFT);
+        left.setTitle(valueTitle);
+        left.setNumberFormat(format);
+        XDDFDataSource<String> names = XDDFDataSourcesFactory.fromStringCellRange(dataSheet,
+                new CellRangeAddress(1, n, nameColumn, nameColumn));
+        XDDFLineChartData data = (XDDFLineChartData) chart.createData(ChartTypes.LINE, bottom, left);
+        org.apache.poi.xddf.usermodel.PresetColor[] colours = {org.apache.poi.xddf.usermodel.PresetColor.NAVY,
+                org.apache.poi.xddf.usermodel.PresetColor.SEA_GREEN,
+                org.apache.poi.xddf.usermodel.PresetColor.DARK_RED,
+                org.apache.poi.xddf.usermodel.PresetColor.DARK_RED};
+        for (int s = 0; s < series.length; s++) {
+            XDDFNumericalDataSource<Double> values = XDDFDataSourcesFactory.fromNumericCellRange(dataSheet,
+                    new CellRangeAddress(1, n, firstColumn + s, firstColumn + s));
+            XDDFLineChartData.Series line = (XDDFLineChartData.Series) data.addSeries(names, values);
+            line.setTitle(series[s], null);
+            line.setMarkerStyle(s == 0 ? MarkerStyle.CIRCLE : MarkerStyle.NONE);
+            line.setSmooth(false);
+            // Spreadsheet programs differ in their default line; name it so that every one draws it.
+            org.apache.poi.xddf.usermodel.XDDFLineProperties stroke = new org.apache.poi.xddf.usermodel.XDDFLineProperties(
+                    new org.apache.poi.xddf.usermodel.XDDFSolidFillProperties(
+                            org.apache.poi.xddf.usermodel.XDDFColor.from(colours[s])));
+            stroke.setWidth(s == 0 ? 1.75 : 1.25);
+            if (s > 0) {
+                stroke.setPresetDash(new org.apache.poi.xddf.usermodel.XDDFPresetLineDash(
+                        org.apache.poi.xddf.usermodel.PresetLineDash.DASH));
+            }
+            line.setLineProperties(stroke);
+        }
+        chart.plot(data);
     }
 
     /** Writes cells, with formula-like text quote-prefixed so that a spreadsheet never runs it. */
@@ -310,6 +366,30 @@ public final class SupplierReport {
                     bars.stream().mapToLong(QualityStatistics.ParetoBar::count).toArray(),
                     bars.stream().mapToDouble(QualityStatistics.ParetoBar::cumulativeShare).toArray()), 900, 380))
                     .append('\n');
+        }
+        MeasurementCharts charts = audit.measurements();
+        if (charts != null) {
+            int m = charts.points().size();
+            List<String> names = charts.points().stream().map(MeasurementCharts.Point::lot).toList();
+            double[][] means = new double[4][m];
+            double[][] deviations = new double[4][m];
+            for (int i = 0; i < m; i++) {
+                MeasurementCharts.Point point = charts.points().get(i);
+                means[0][i] = point.mean();
+                means[1][i] = charts.grandMean();
+                means[2][i] = point.meanLower();
+                means[3][i] = point.meanUpper();
+                deviations[0][i] = point.deviation();
+                deviations[1][i] = point.deviationCentre();
+                deviations[2][i] = point.deviationLower();
+                deviations[3][i] = point.deviationUpper();
+            }
+            String unit = charts.unit().isEmpty() ? "" : " (" + charts.unit() + ")";
+            html.append("<h2>Measurements: means and standard deviations</h2>\n")
+                    .append(svg(Charts.control("Means of " + what(charts), names, means, "Mean" + unit), 900, 320))
+                    .append('\n')
+                    .append(svg(Charts.control("Standard deviations of " + what(charts), names, deviations, "s" + unit),
+                            900, 320)).append('\n');
         }
         html.append("<h2>Rejected lots</h2>\n<table><tr><th>Record</th><th>Lot</th><th>Part</th><th>Received</th>"
                 + "<th>Found</th><th>Evidence</th></tr>\n");

@@ -15,6 +15,8 @@ import lotgate.sampling.VariablesPlan;
  * the verdict, the measurements outside the limits, and the checks of the method's assumptions (a normality
  * test and the measurements' resolution).
  *
+ * @param deviation      the standard deviation the statistics use: the known sigma, or the sample's s
+ * @param sampleDeviation the sample's s, also where sigma is known (for the supplier's charts)
  * @param statisticLower (mean - L) / s (or sigma), or NaN without a lower limit
  * @param statisticUpper (U - mean) / s (or sigma), or NaN without an upper limit
  * @param estimate       the estimated fraction beyond the limits (the M-method's estimate; for one limit the same
@@ -27,7 +29,8 @@ import lotgate.sampling.VariablesPlan;
  * @param distinct       the number of distinct values measured
  * @param warnings       plain-language warnings about the assumptions
  */
-public record MeasuredLot(boolean accepted, int n, double mean, double deviation, boolean sigmaKnown,
+public record MeasuredLot(boolean accepted, int n, double mean, double deviation, double sampleDeviation,
+        boolean sigmaKnown,
         double statisticLower, double statisticUpper, double k, double estimate, double maxEstimate,
         double upperBound, double confidence, double acceptanceAtEstimate, List<Integer> outside,
         Normality.Result normality, int distinct, List<String> warnings) {
@@ -53,16 +56,12 @@ public record MeasuredLot(boolean accepted, int n, double mean, double deviation
             mean += v;
         }
         mean /= n;
-        double deviation;
-        if (spec.sigmaKnown()) {
-            deviation = spec.sigma();
-        } else {
-            double squares = 0;
-            for (double v : values) {
-                squares += (v - mean) * (v - mean);
-            }
-            deviation = Math.sqrt(squares / (n - 1));
+        double squares = 0;
+        for (double v : values) {
+            squares += (v - mean) * (v - mean);
         }
+        double sampleDeviation = n > 1 ? Math.sqrt(squares / (n - 1)) : 0.0;
+        double deviation = spec.sigmaKnown() ? spec.sigma() : sampleDeviation;
         List<String> warnings = new ArrayList<>();
         double lower = spec.lower() == null ? Double.NaN : (mean - spec.lower()) / deviation;
         double upper = spec.upper() == null ? Double.NaN : (spec.upper() - mean) / deviation;
@@ -119,7 +118,7 @@ public record MeasuredLot(boolean accepted, int n, double mean, double deviation
         }
         double observed = Math.min(1.0, Math.max(0.0, estimate));
         double atEstimate = plan.acceptance(new OcModel.Binomial(), observed);
-        return new MeasuredLot(accepted, n, mean, deviation, spec.sigmaKnown(), lower, upper, plan.k(), estimate, max,
+        return new MeasuredLot(accepted, n, mean, deviation, sampleDeviation, spec.sigmaKnown(), lower, upper, plan.k(), estimate, max,
                 bound, confidence, atEstimate, outside, normality, distinct, warnings);
     }
 

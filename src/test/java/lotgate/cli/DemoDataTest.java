@@ -17,10 +17,23 @@ class DemoDataTest {
             "plans/mirelle-ms-22.json, demo-data/mirelle-ms1204-malformed.xlsx, 3",
             "plans/quorrin-qp-7-double.json, demo-data/quorrin-qp2611.csv, 0",
             "plans/quorrin-qp-7-sequential.json, demo-data/quorrin-qp2611.csv, 0",
+            "plans/kestrune-kc-114-bore.json, demo-data/kestrune-kc0911-bore.csv, 0",
+            "plans/kestrune-kc-114-bore.json, demo-data/kestrune-kc0915-bore.csv, 0",
     })
     void eachDemoLotGetsItsVerdict(String plan, String sheet, int exitCode) {
         Cli.Result result = Cli.run("sentence", "--no-record", plan, sheet);
         assertEquals(exitCode, result.exitCode(), result.out() + result.err());
+    }
+
+    @org.junit.jupiter.api.Test
+    void theSkewedBoresBringTheNormalityWarning() {
+        Cli.Result normal = Cli.run("sentence", "--no-record", "plans/kestrune-kc-114-bore.json",
+                "demo-data/kestrune-kc0911-bore.csv");
+        org.junit.jupiter.api.Assertions.assertFalse(normal.out().contains("WARNING"), normal.out());
+        Cli.Result skewed = Cli.run("sentence", "--no-record", "plans/kestrune-kc-114-bore.json",
+                "demo-data/kestrune-kc0915-bore.csv");
+        org.junit.jupiter.api.Assertions.assertTrue(skewed.out().contains("WARNING: the measurements do not look"
+                + " normal"), skewed.out());
     }
 
     @ParameterizedTest(name = "{1} rows {2}")
