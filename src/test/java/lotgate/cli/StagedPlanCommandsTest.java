@@ -142,7 +142,7 @@ class StagedPlanCommandsTest {
 
     @ParameterizedTest(name = "{0}")
     @CsvSource(delimiter = '|', value = {
-            "--scheme triple | --scheme triple: give single, double, multiple or sequential",
+            "--scheme triple | --scheme triple: give single, double, multiple, sequential or variables",
             "--scheme double --class major:aql=1%,ltpd=5% | --class: criteria per defect class are for single plans",
             "--scheme double --truncate-at 300 | --truncate-at does not apply to --scheme double",
             "--stage 50:1:4 | --stage, --truncate-at, --first-rejection, --asn-at, --second-ratio, --curtailed and"
