@@ -131,8 +131,9 @@ final class CompareCommand implements Runnable {
         out.println();
         for (int i = 0; i < rows.size(); i++) {
             PlanChoice choice = rows.get(i).choice();
-            out.printf("  %d  %s, %s model%s%n", i + 1, CurveCommand.planLabel(choice), choice.model().name(),
-                    choice.lotSize() > 0 ? ", lot size " + choice.lotSize() : "");
+            out.printf("  %d  %s, %s%s%n", i + 1, CurveCommand.planLabel(choice),
+                    choice.plan() instanceof lotgate.sampling.VariablesPlan ? "normal measurements"
+                            : choice.model().name() + " model", choice.lotSize() > 0 ? ", lot size " + choice.lotSize() : "");
         }
         out.println();
         out.printf("  %-3s %23s %43s %27s%n", "", "----- P(accept) -----", "----- quality where P(accept) is -----",

@@ -18,6 +18,7 @@ import lotgate.sampling.DoublePlan;
 import lotgate.sampling.Plan;
 import lotgate.sampling.SequentialPlan;
 import lotgate.sampling.SinglePlan;
+import lotgate.sampling.VariablesPlan;
 import lotgate.sampling.WaldSequential;
 import lotgate.sentencing.Stopping;
 import lotgate.report.CsvTable;
@@ -194,7 +195,7 @@ final class CurveCommand implements Runnable {
         List<Charts.RiskMark> marks = marks(choice, markAql, markLtpd);
         int fewest = fewestInspected(choice.plan());
         String subject = planLabel(choice);
-        String about = DesignCommand.modelLine(choice.model(), choice.lotSize());
+        String about = modelLine(choice);
         if (chart != null) {
             ChartFile.write(Charts.withSubtitle(Charts.all("OC, AOQ and ATI of " + subject, perUnit, curve, marks,
                     keys.aoql().limit(), keys.aoql().quality(), fewest, choice.lotSize()), about), chart, 900,
@@ -223,8 +224,20 @@ final class CurveCommand implements Runnable {
         return choice.saved() == null ? numbers : choice.label() + " (" + numbers + ")";
     }
 
+    /** The model in words; for a variables plan, what its quality means. */
+    static String modelLine(PlanChoice choice) {
+        if (choice.plan() instanceof VariablesPlan) {
+            return "variables plan: quality is the fraction beyond the limit(s) of normal measurements (type B)"
+                    + (choice.lotSize() > 0 ? ", lot size " + choice.lotSize() : "");
+        }
+        return DesignCommand.modelLine(choice.model(), choice.lotSize());
+    }
+
     /** The fewest units the plan can inspect: its first stage, or the first unit that can accept. */
     static int fewestInspected(Plan plan) {
+        if (plan instanceof VariablesPlan variables) {
+            return variables.n();
+        }
         if (plan instanceof SequentialPlan sequential) {
             int first = SchemeDesign.firstUnitAccepting(sequential, 0);
             return Math.min(first > 0 ? first : sequential.truncation(), sequential.rejectionNumber(1));
@@ -255,10 +268,10 @@ final class CurveCommand implements Runnable {
 
     private void printText(PrintWriter out, PlanChoice choice, List<CurvePoint> table, KeyLevels keys,
             Double markAql, Double markLtpd, OperatingCharacteristic oc) {
-        boolean staged = !(choice.plan() instanceof SinglePlan);
+        boolean staged = !(choice.plan() instanceof SinglePlan) && !(choice.plan() instanceof VariablesPlan);
         WaldSequential wald = wald(choice);
         out.println("Operating characteristics of " + planLabel(choice));
-        out.println("  " + DesignCommand.modelLine(choice.model(), choice.lotSize()));
+        out.println("  " + modelLine(choice));
         if (choice.saved() != null) {
             out.println("  plan file fingerprint " + choice.saved().shortFingerprint());
         }

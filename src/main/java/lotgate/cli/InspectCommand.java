@@ -74,6 +74,10 @@ final class InspectCommand implements Runnable {
                     + " record its units in a sheet with critical, major and minor columns and use 'lotgate sentence'");
         }
         Plan plan = saved.plan();
+        if (saved.measurement() != null) {
+            throw new ParameterException(spec.commandLine(), "plan " + saved.name() + " judges measurements; record them"
+                    + " in a sheet with a value column and use 'lotgate sentence'");
+        }
         boolean units = saved.model().countsUnits();
         boolean terminal = System.console() != null && input.get() == System.in;
         PrintWriter out = spec.commandLine().getOut();

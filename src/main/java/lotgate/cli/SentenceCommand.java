@@ -66,6 +66,10 @@ import picocli.CommandLine.Spec;
                         + " known lot size an upper bound on its nonconforming units, and where the count sits on"
                         + " the plan's OC curve.",
                 "",
+                "A variables plan reads measurements from a 'value' column instead, and gives the sample's mean"
+                        + " and s, the quality statistic against k, the estimated fraction beyond the limits with an"
+                        + " exact upper bound, and a normality test.",
+                "",
                 "The lot is recorded in the supplier's history (see --store), unless --no-record.",
                 "",
                 "A double or multiple plan stops at the first sample (stage) whose count decides; a sequential"
@@ -93,7 +97,7 @@ final class SentenceCommand implements Runnable {
 
     @Option(names = "--columns", paramLabel = "MAPPING",
             description = "Your own header names, as role=header pairs: unit, result, critical, major, minor,"
-                    + " defect, note; e.g. --columns unit=Serial,result=Outcome.")
+                    + " defect, note, value (measurements); e.g. --columns unit=Serial,result=Outcome.")
     String columnMapping;
 
     @Option(names = "--rows", paramLabel = "FIRST-LAST",

@@ -104,7 +104,11 @@ final class ShowCommand implements Runnable {
             out.println("  description  " + saved.description());
         }
         out.println("  created      " + saved.created());
-        out.println("  model        " + DesignCommand.modelLine(saved.model(), saved.lotSize()));
+        if (saved.measurement() != null) {
+            out.println("  measures     " + VariablesDesign.describe(saved.measurement()));
+        } else {
+            out.println("  model        " + DesignCommand.modelLine(saved.model(), saved.lotSize()));
+        }
         for (ClassPlan criteria : saved.classes()) {
             Plan plan = criteria.plan();
             String heading = saved.unclassified() ? "plan" : criteria.defectClass().label();
