@@ -361,6 +361,23 @@ final class DesignCommand implements Runnable {
         return new ClassOutcome(request, designer.design(points), SavedPlan.SMALLEST_SAMPLE);
     }
 
+    /** The risk points of a double, multiple, sequential or variables plan, checked option by option. */
+    RiskPoints schemePoints(OcModel model, String missing) {
+        if (aql == null || ltpd == null) {
+            throw new ParameterException(spec.commandLine(), missing);
+        }
+        ModelOptions.checkLevel(spec, model, "--aql", aql);
+        ModelOptions.checkLevel(spec, model, "--ltpd", ltpd);
+        if (aql >= ltpd) {
+            throw new ParameterException(spec.commandLine(), "--aql " + Percent.level(aql) + " must be below --ltpd "
+                    + Percent.level(ltpd));
+        }
+        if (alpha + beta >= 1) {
+            throw new ParameterException(spec.commandLine(), "--alpha plus --beta must be below 100%");
+        }
+        return new RiskPoints(aql, alpha, ltpd, beta);
+    }
+
     void checkSaveTarget() {
         Path file = save.file;
         if (!file.getFileName().toString().endsWith(".json")) {

@@ -173,18 +173,7 @@ final class SchemeDesign {
     }
 
     private RiskPoints points() {
-        if (command.aql == null || command.ltpd == null) {
-            throw usage("give --aql and --ltpd: the " + command.scheme + " plan is designed for them, or evaluated at them");
-        }
-        ModelOptions.checkLevel(command.spec, model, "--aql", command.aql);
-        ModelOptions.checkLevel(command.spec, model, "--ltpd", command.ltpd);
-        if (command.aql >= command.ltpd) {
-            throw usage("--aql " + Percent.level(command.aql) + " must be below --ltpd " + Percent.level(command.ltpd));
-        }
-        if (command.alpha + command.beta >= 1) {
-            throw usage("--alpha plus --beta must be below 100%");
-        }
-        return new RiskPoints(command.aql, command.alpha, command.ltpd, command.beta);
+        return command.schemePoints(model, "give --aql and --ltpd: the " + command.scheme + " plan is designed for them, or evaluated at them");
     }
 
     private DoublePlanDesigner.Space space() {

@@ -125,18 +125,7 @@ final class VariablesDesign {
     }
 
     private RiskPoints points() {
-        if (command.aql == null || command.ltpd == null) {
-            throw usage("give --aql and --ltpd: the fractions beyond the limit(s) that should pass and fail");
-        }
-        ModelOptions.checkLevel(command.spec, model, "--aql", command.aql);
-        ModelOptions.checkLevel(command.spec, model, "--ltpd", command.ltpd);
-        if (command.aql >= command.ltpd) {
-            throw usage("--aql " + Percent.level(command.aql) + " must be below --ltpd " + Percent.level(command.ltpd));
-        }
-        if (command.alpha + command.beta >= 1) {
-            throw usage("--alpha plus --beta must be below 100%");
-        }
-        return new RiskPoints(command.aql, command.alpha, command.ltpd, command.beta);
+        return command.schemePoints(model, "give --aql and --ltpd: the fractions beyond the limit(s) that should pass and fail");
     }
 
     private static String number(double value) {
@@ -262,18 +251,7 @@ final class VariablesDesign {
             attribute.put("c", single.c());
             attribute.put("unitsSaved", single.n() - plan.n());
         }
-        ObjectNode measured = node.putObject("measurement");
-        measured.put("characteristic", measurement.characteristic());
-        if (measurement.lower() != null) {
-            measured.put("lower", measurement.lower());
-        }
-        if (measurement.upper() != null) {
-            measured.put("upper", measurement.upper());
-        }
-        measured.put("unit", measurement.unit());
-        if (measurement.sigma() != null) {
-            measured.put("sigma", measurement.sigma());
-        }
+        node.set("measurement", PlanFormat.measurementJson(measurement));
         if (saved != null) {
             node.put("fingerprint", saved.fingerprint());
         }

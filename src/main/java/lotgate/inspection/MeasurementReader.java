@@ -185,27 +185,8 @@ public final class MeasurementReader implements RowHandler {
     }
 
     private void confirmRepeats() {
-        List<UnitIds.Suspect> suspects = unitIds.suspects();
-        if (suspects.isEmpty()) {
-            return;
-        }
-        Map<Integer, String> wanted = new HashMap<>();
-        suspects.forEach(s -> wanted.put(s.earlierRow(), null));
-        source.read(sheet, (row, cells) -> {
-            if (wanted.containsKey(row)) {
-                for (Cell cell : cells) {
-                    if (cell.column() == unitColumn) {
-                        wanted.put(row, cell.text().trim());
-                    }
-                }
-            }
-        });
-        for (UnitIds.Suspect suspect : suspects) {
-            if (suspect.unit().equals(wanted.get(suspect.earlierRow()))) {
-                throw new SheetException(source.file(), "unit '" + suspect.unit() + "' appears twice, "
-                        + source.whereRow(sheet, suspect.earlierRow()) + " and row " + suspect.row()
-                        + "; each unit of the sample must be recorded once");
-            }
+        if (!unitIds.suspects().isEmpty()) {
+            unitIds.confirm(source, sheet, unitColumn);
         }
     }
 }

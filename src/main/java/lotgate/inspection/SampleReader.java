@@ -288,28 +288,8 @@ public final class SampleReader implements RowHandler {
 
     /** Reads the suspected rows' identifiers again and refuses the first true repeat. */
     private void confirmRepeats() {
-        List<UnitIds.Suspect> suspects = unitIds.suspects();
-        if (suspects.isEmpty()) {
-            return;
-        }
-        Map<Integer, String> wanted = new HashMap<>();
-        suspects.forEach(s -> wanted.put(s.earlierRow(), null));
-        int unitColumn = columnByRole.get(Columns.Role.UNIT);
-        source.read(sheet, (row, cells) -> {
-            if (wanted.containsKey(row)) {
-                for (Cell cell : cells) {
-                    if (cell.column() == unitColumn) {
-                        wanted.put(row, cell.text().trim());
-                    }
-                }
-            }
-        });
-        for (UnitIds.Suspect suspect : suspects) {
-            if (suspect.unit().equals(wanted.get(suspect.earlierRow()))) {
-                throw new SheetException(source.file(), "unit '" + suspect.unit() + "' appears twice, "
-                        + source.whereRow(sheet, suspect.earlierRow()) + " and row " + suspect.row()
-                        + "; each unit of the sample must be recorded once");
-            }
+        if (!unitIds.suspects().isEmpty()) {
+            unitIds.confirm(source, sheet, columnByRole.get(Columns.Role.UNIT));
         }
     }
 }

@@ -47,6 +47,31 @@ final class UnitIds {
         return suspects;
     }
 
+    /** Reads the suspected rows' identifiers again and refuses the first true repeat. */
+    void confirm(SheetSource source, String sheet, int unitColumn) {
+        if (suspects.isEmpty()) {
+            return;
+        }
+        java.util.Map<Integer, String> wanted = new java.util.HashMap<>();
+        suspects.forEach(s -> wanted.put(s.earlierRow(), null));
+        source.read(sheet, (row, cells) -> {
+            if (wanted.containsKey(row)) {
+                for (Cell cell : cells) {
+                    if (cell.column() == unitColumn) {
+                        wanted.put(row, cell.text().trim());
+                    }
+                }
+            }
+        });
+        for (Suspect suspect : suspects) {
+            if (suspect.unit().equals(wanted.get(suspect.earlierRow()))) {
+                throw new SheetException(source.file(), "unit '" + suspect.unit() + "' appears twice, "
+                        + source.whereRow(sheet, suspect.earlierRow()) + " and row " + suspect.row()
+                        + "; each unit of the sample must be recorded once");
+            }
+        }
+    }
+
     private void grow() {
         long[] oldHashes = hashes;
         int[] oldRows = rows;

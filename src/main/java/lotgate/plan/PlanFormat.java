@@ -143,26 +143,31 @@ public final class PlanFormat {
             achieved.put("producerRisk", criteria.achieved().producerRisk());
             achieved.put("consumerRisk", criteria.achieved().consumerRisk());
         }
-        Measurement measurement = saved.measurement();
-        if (measurement != null) {
-            ObjectNode node = root.putObject("measurement");
-            node.put("characteristic", measurement.characteristic());
-            if (measurement.lower() != null) {
-                node.put("lower", measurement.lower());
-            }
-            if (measurement.upper() != null) {
-                node.put("upper", measurement.upper());
-            }
-            node.put("unit", measurement.unit());
-            if (measurement.sigma() != null) {
-                node.put("sigma", measurement.sigma());
-            }
-            node.put("limits", measurement.limits());
+        if (saved.measurement() != null) {
+            root.set("measurement", measurementJson(saved.measurement()));
         }
         if (!saved.fingerprint().isEmpty()) {
             root.put("fingerprint", saved.fingerprint());
         }
         return root;
+    }
+
+    /** What a variables plan measures, as plan files and outputs hold it. */
+    public static ObjectNode measurementJson(Measurement measurement) {
+        ObjectNode node = JsonNodeFactory.instance.objectNode();
+        node.put("characteristic", measurement.characteristic());
+        if (measurement.lower() != null) {
+            node.put("lower", measurement.lower());
+        }
+        if (measurement.upper() != null) {
+            node.put("upper", measurement.upper());
+        }
+        node.put("unit", measurement.unit());
+        if (measurement.sigma() != null) {
+            node.put("sigma", measurement.sigma());
+        }
+        node.put("limits", measurement.limits());
+        return node;
     }
 
     /** A plan's stage structure as JSON, as plan files, records and outputs hold it. */

@@ -151,31 +151,9 @@ public final class Charts {
      */
     public static JFreeChart pChart(String title, List<String> lots, double[] fraction, double[] centre,
             double[] lower, double[] upper) {
-        XYSeriesCollection data = new XYSeriesCollection();
-        String[] names = {"Lot fraction nonconforming", "Centre (process average)", "Upper control limit",
-                "Lower control limit"};
-        double[][] values = {fraction, centre, upper, lower};
-        for (int s = 0; s < names.length; s++) {
-            XYSeries series = new XYSeries(names[s], false, true);
-            for (int i = 0; i < lots.size(); i++) {
-                series.add(i + 1, values[s][i]);
-            }
-            data.addSeries(series);
-        }
-        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
-        renderer.setSeriesShapesVisible(0, true);
-        renderer.setSeriesShape(0, new Rectangle2D.Double(-3, -3, 6, 6));
-        Color[] colours = {PALETTE[0], PALETTE[2], PALETTE[1], PALETTE[1]};
-        for (int s = 0; s < names.length; s++) {
-            renderer.setSeriesPaint(s, colours[s]);
-            renderer.setSeriesStroke(s, s == 0 ? new BasicStroke(1.5f) : new BasicStroke(1.2f, BasicStroke.CAP_BUTT,
-                    BasicStroke.JOIN_MITER, 10f, new float[] {5f, 3f}, 0f));
-        }
-        renderer.setSeriesVisibleInLegend(3, false);
-        NumberAxis order = new NumberAxis("Lot, in order received (1 = " + (lots.isEmpty() ? "" : lots.get(0)) + ")");
-        order.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
-        XYPlot plot = new XYPlot(data, order, percentAxis("Fraction nonconforming"), renderer);
-        return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, style(plot), true));
+        return shewhart(title, lots, new double[][] {fraction, centre, lower, upper}, new String[] {
+                "Lot fraction nonconforming", "Centre (process average)", "Upper control limit", "Lower control limit"},
+                percentAxis("Fraction nonconforming"));
     }
 
     /**
@@ -184,8 +162,16 @@ public final class Charts {
      * @param series the values, the centre, the lower and the upper limits, each one entry per lot
      */
     public static JFreeChart control(String title, List<String> lots, double[][] series, String valueLabel) {
+        NumberAxis value = new NumberAxis(valueLabel);
+        value.setAutoRangeIncludesZero(false);
+        return shewhart(title, lots, series, new String[] {"Lot value", "Centre", "Upper control limit",
+                "Lower control limit"}, value);
+    }
+
+    /** The values with their centre line and limits (the lower one unlabelled in the legend). */
+    private static JFreeChart shewhart(String title, List<String> lots, double[][] series, String[] names,
+            NumberAxis valueAxis) {
         XYSeriesCollection data = new XYSeriesCollection();
-        String[] names = {"Lot value", "Centre", "Upper control limit", "Lower control limit"};
         double[][] ordered = {series[0], series[1], series[3], series[2]};
         for (int s = 0; s < names.length; s++) {
             XYSeries line = new XYSeries(names[s], false, true);
@@ -206,9 +192,7 @@ public final class Charts {
         renderer.setSeriesVisibleInLegend(3, false);
         NumberAxis order = new NumberAxis("Lot, in order received (1 = " + (lots.isEmpty() ? "" : lots.get(0)) + ")");
         order.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
-        NumberAxis value = new NumberAxis(valueLabel);
-        value.setAutoRangeIncludesZero(false);
-        XYPlot plot = new XYPlot(data, order, value, renderer);
+        XYPlot plot = new XYPlot(data, order, valueAxis, renderer);
         return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, style(plot), true));
     }
 
