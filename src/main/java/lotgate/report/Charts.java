@@ -140,7 +140,9 @@ public final class Charts {
         inspected.setAutoRangeIncludesZero(true);
         NumberAxis count = new NumberAxis(units ? "Nonconforming units found" : "Nonconformities found");
         count.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
-        count.setAutoRangeIncludesZero(true);
+        // The path starts at 0 anyway; a margin below keeps markers at 0 clear of the axis.
+        count.setAutoRangeIncludesZero(false);
+        count.setLowerMargin(0.06);
         XYPlot plot = new XYPlot(data, inspected, count, renderer);
         return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, style(plot), true));
     }
