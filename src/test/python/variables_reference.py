@@ -22,7 +22,7 @@ def design(p1,a,p2,b):
         hi=nct.ppf(a,n-1,r*z1)/r
         if lo<=hi: return n,lo,hi,exact
         n+=1
-for pts in [(0.01,0.05,0.06,0.10),(0.001,0.05,0.005,0.10),(0.025,0.05,0.10,0.10)]:
+for pts in [(0.01,0.05,0.06,0.10),(0.001,0.05,0.005,0.10),(0.025,0.05,0.10,0.10),(0.0025,0.05,0.02,0.10)]:
     n,lo,hi,exact=design(*pts)
     k=(lo+hi)/2
     r=math.sqrt(n)

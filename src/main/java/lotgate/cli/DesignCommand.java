@@ -130,8 +130,18 @@ final class DesignCommand implements Runnable {
 
     @Option(names = "--limits", paramLabel = "HOW",
             description = "Variables plans with both limits: combined (default; the M-method on the estimated"
-                    + " fraction beyond both, one AQL for both) or separate (the k-method at each limit).")
+                    + " fraction beyond both, one AQL for both) or separate (the k-method at each limit, with the"
+                    + " same AQL, or the lower limit's own with --lower-aql and --lower-ltpd).")
     String limits;
+
+    @Option(names = "--lower-aql", paramLabel = "LEVEL", converter = Values.Quality.class,
+            description = "Variables plans with --limits separate: the lower limit's own AQL (default --aql, which"
+                    + " then holds for the upper limit).")
+    Double lowerAql;
+
+    @Option(names = "--lower-ltpd", paramLabel = "LEVEL", converter = Values.Quality.class,
+            description = "Variables plans with --limits separate: the lower limit's own LTPD (default --ltpd).")
+    Double lowerLtpd;
 
     @Option(names = "--unit", paramLabel = "UNIT", description = "Variables plans: the measurement's unit, e.g. mm.")
     String unit;
@@ -196,9 +206,9 @@ final class DesignCommand implements Runnable {
             return;
         }
         if (sigma != null || lower != null || upper != null || limits != null || unit != null
-                || characteristic != null) {
-            throw new ParameterException(spec.commandLine(), "--sigma, --lower, --upper, --limits, --unit and"
-                    + " --characteristic are for --scheme variables");
+                || characteristic != null || lowerAql != null || lowerLtpd != null) {
+            throw new ParameterException(spec.commandLine(), "--sigma, --lower, --upper, --limits, --unit,"
+                    + " --characteristic, --lower-aql and --lower-ltpd are for --scheme variables");
         }
         if (!scheme.equals("single")) {
             new SchemeDesign(this, model, lotSize).run();

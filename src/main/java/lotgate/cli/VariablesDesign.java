@@ -46,7 +46,26 @@ final class VariablesDesign {
         if (command.save != null) {
             command.checkSaveTarget();
         }
+        RiskPoints lowerPoints = lowerPoints(points, measurement);
         VariablesDesigner.Design design = VariablesDesigner.design(points, measurement.sigmaKnown());
+        VariablesDesigner.Design lowerDesign = null;
+        if (lowerPoints != null && design != null) {
+            // Both limits share one sample: the larger n, with each limit's k in its own range there.
+            lowerDesign = VariablesDesigner.design(lowerPoints, measurement.sigmaKnown());
+            for (int round = 0; round < 100 && lowerDesign != null && design != null
+                    && lowerDesign.plan().n() != design.plan().n(); round++) {
+                int n = Math.max(lowerDesign.plan().n(), design.plan().n());
+                design = VariablesDesigner.design(points, measurement.sigmaKnown(), n);
+                lowerDesign = VariablesDesigner.design(lowerPoints, measurement.sigmaKnown(), n);
+            }
+            if (lowerDesign == null) {
+                design = null;
+            } else {
+                measurement = new Measurement(measurement.characteristic(), measurement.lower(), measurement.upper(),
+                        measurement.unit(), measurement.sigma(), measurement.limits(),
+                        new Measurement.LimitDesign(lowerPoints, lowerDesign.plan().k()));
+            }
+        }
         PrintWriter out = command.spec.commandLine().getOut();
         if (design == null) {
             String reason = "no variables plan with at most " + VariablesDesigner.MOST_UNITS + " units meets both risks";
@@ -73,9 +92,9 @@ final class VariablesDesign {
             PlanFormat.write(command.save.file, saved);
         }
         switch (command.format.kind) {
-            case json -> out.println(Json.text(json(design, known, single, measurement, points, saved)));
+            case json -> out.println(Json.text(json(design, known, single, measurement, points, saved, lowerDesign)));
             case csv -> out.print(csv(design, measurement, points, saved));
-            case text -> printText(out, design, known, single, measurement, points, saved);
+            case text -> printText(out, design, known, single, measurement, points, saved, lowerDesign);
         }
         out.flush();
     }
@@ -124,6 +143,25 @@ final class VariablesDesign {
                 command.upper, command.unit == null ? "" : command.unit.trim(), command.sigma, limits);
     }
 
+    /** The lower limit's own design points, or null when it shares the plan's. */
+    private RiskPoints lowerPoints(RiskPoints points, Measurement measurement) {
+        if (command.lowerAql == null && command.lowerLtpd == null) {
+            return null;
+        }
+        if (!measurement.limits().equals(Measurement.SEPARATE)) {
+            throw usage("--lower-aql and --lower-ltpd give the lower limit a design of its own: add --limits separate"
+                    + " (with both --lower and --upper)");
+        }
+        double aql = command.lowerAql != null ? command.lowerAql : points.aql();
+        double ltpd = command.lowerLtpd != null ? command.lowerLtpd : points.ltpd();
+        ModelOptions.checkLevel(command.spec, model, "--lower-aql", aql);
+        ModelOptions.checkLevel(command.spec, model, "--lower-ltpd", ltpd);
+        if (aql >= ltpd) {
+            throw usage("the lower limit's AQL " + Percent.level(aql) + " must be below its LTPD " + Percent.level(ltpd));
+        }
+        return new RiskPoints(aql, points.alpha(), ltpd, points.beta());
+    }
+
     private RiskPoints points() {
         return command.schemePoints(model, "give --aql and --ltpd: the fractions beyond the limit(s) that should pass and fail");
     }
@@ -140,8 +178,11 @@ final class VariablesDesign {
                 + number(measurement.upper()) + unit + " (" + measurement.limits() + ")"
                 : measurement.lower() != null ? "lower limit " + number(measurement.lower()) + unit
                         : "upper limit " + number(measurement.upper()) + unit;
-        return what + ", " + limits + ", " + (measurement.sigmaKnown() ? "sigma " + number(measurement.sigma()) + unit
-                + " known" : "sigma unknown (estimated by each sample's s)");
+        String own = measurement.lowerDesign() == null ? "" : String.format(Locale.ROOT, ", the lower limit held to its"
+                + " own AQL %s and LTPD %s (k = %.4f)", Percent.level(measurement.lowerDesign().designedFor().aql()),
+                Percent.level(measurement.lowerDesign().designedFor().ltpd()), measurement.lowerDesign().k());
+        return what + ", " + limits + own + ", " + (measurement.sigmaKnown() ? "sigma " + number(measurement.sigma())
+                + unit + " known" : "sigma unknown (estimated by each sample's s)");
     }
 
     /** The acceptance rule in words. */
@@ -155,8 +196,11 @@ final class VariablesDesign {
             case Measurement.COMBINED -> lines.add(String.format(Locale.ROOT, "Accept the lot when the estimated fraction"
                     + " beyond both limits (M-method, from (U - mean)/%s and (mean - L)/%s) is at most M = %s.",
                     deviation, deviation, Percent.probability(plan.maxEstimate())));
-            case Measurement.SEPARATE -> lines.add("Accept the lot when both (U - mean)/" + deviation + " and (mean - L)/"
-                    + deviation + " are at least " + k + ".");
+            case Measurement.SEPARATE -> lines.add(measurement.lowerDesign() == null
+                    ? "Accept the lot when both (U - mean)/" + deviation + " and (mean - L)/" + deviation
+                            + " are at least " + k + "."
+                    : String.format(Locale.ROOT, "Accept the lot when (U - mean)/%s is at least k = %.4f and (mean - L)/%s"
+                            + " at least k = %.4f.", deviation, plan.k(), deviation, measurement.lowerDesign().k()));
             default -> lines.add("Accept the lot when " + (measurement.upper() != null ? "(U - mean)/" : "(mean - L)/")
                     + deviation + " is at least " + k + "; reject it otherwise.");
         }
@@ -164,7 +208,8 @@ final class VariablesDesign {
     }
 
     private void printText(PrintWriter out, VariablesDesigner.Design design, VariablesDesigner.Design known,
-            SinglePlan single, Measurement measurement, RiskPoints points, SavedPlan saved) {
+            SinglePlan single, Measurement measurement, RiskPoints points, SavedPlan saved,
+            VariablesDesigner.Design lowerDesign) {
         VariablesPlan plan = design.plan();
         out.println("Variables plan (k-method), sigma " + (plan.sigmaKnown() ? "known" : "unknown")
                 + ": the smallest sample that meets both risks");
@@ -176,7 +221,12 @@ final class VariablesDesign {
             out.println("  " + line);
         }
         out.printf(Locale.ROOT, "  (k = %.4f is the middle of the range %.4f to %.4f, every k of which meets both risks"
-                + " at n = %d.)%n", plan.k(), design.lowestK(), design.highestK(), plan.n());
+                + " at n = %d%s.)%n", plan.k(), design.lowestK(), design.highestK(), plan.n(),
+                lowerDesign == null ? "" : " at the upper limit");
+        if (lowerDesign != null) {
+            out.printf(Locale.ROOT, "  (the lower limit's k = %.4f is the middle of its range %.4f to %.4f.)%n",
+                    lowerDesign.plan().k(), lowerDesign.lowestK(), lowerDesign.highestK());
+        }
         out.println();
         PlanRisks risks = design.risks();
         String row = "  %-6s %-22s %-11s %-24s %-16s%n";
@@ -187,17 +237,36 @@ final class VariablesDesign {
         out.printf(row, "LTPD", Percent.level(points.ltpd()), Percent.probability(risks.consumerRisk()),
                 "consumer's " + Percent.probability(risks.consumerRisk()), String.format("%-8s%s",
                         Percent.level(points.beta()), DesignCommand.verdict(risks.consumerRisk() <= points.beta())));
-        if (measurement.twoLimits()) {
+        if (lowerDesign != null) {
+            RiskPoints lower = measurement.lowerDesign().designedFor();
+            PlanRisks lowerRisks = lowerDesign.risks();
+            out.printf(row, "AQL L", Percent.level(lower.aql()), Percent.probability(1 - lowerRisks.producerRisk()),
+                    "producer's " + Percent.probability(lowerRisks.producerRisk()), String.format("%-8s%s",
+                            Percent.level(lower.alpha()), DesignCommand.verdict(lowerRisks.producerRisk()
+                                    <= lower.alpha())));
+            out.printf(row, "LTPD L", Percent.level(lower.ltpd()), Percent.probability(lowerRisks.consumerRisk()),
+                    "consumer's " + Percent.probability(lowerRisks.consumerRisk()), String.format("%-8s%s",
+                            Percent.level(lower.beta()), DesignCommand.verdict(lowerRisks.consumerRisk()
+                                    <= lower.beta())));
+            out.println("  (AQL and LTPD: the upper limit's; AQL L and LTPD L: the lower limit's own, each with all"
+                    + " nonconforming product beyond that limit)");
+        } else if (measurement.twoLimits()) {
             out.println("  (risks with all nonconforming product beyond one limit; where both limits contribute the"
                     + " M-method accepts less often)");
         }
         out.println();
         if (single != null) {
-            out.printf(Locale.ROOT, "  Against the attribute plan for the same risks (%s): %d units measured instead of"
-                    + " %d inspected, %+.1f%%.%n", "n = " + single.n() + ", c = " + single.c(), plan.n(), single.n(),
+            out.printf(Locale.ROOT, "  Against the attribute plan for the same risks (%s" + (lowerDesign == null ? ""
+                    : ", the upper limit's") + "): %d units measured instead of %d inspected, %+.1f%%.%n", "n = " + single.n() + ", c = " + single.c(), plan.n(), single.n(),
                     100.0 * (plan.n() - single.n()) / single.n());
         }
-        if (plan.sigmaKnown()) {
+        if (lowerDesign != null) {
+            VariablesDesigner.Design upperAlone = VariablesDesigner.design(points, plan.sigmaKnown());
+            VariablesDesigner.Design lowerAlone = VariablesDesigner.design(measurement.lowerDesign().designedFor(),
+                    plan.sigmaKnown());
+            out.printf(Locale.ROOT, "  Each limit alone would need n = %d (upper) and n = %d (lower); the plan measures"
+                    + " the larger sample for both.%n", upperAlone.plan().n(), lowerAlone.plan().n());
+        } else if (plan.sigmaKnown()) {
             out.printf(Locale.ROOT, "  Closed form: n = %.2f, rounded up to %d; k = %.4f (common practice).%n",
                     design.exactSize(), plan.n(), design.closedFormK());
         } else {
@@ -215,7 +284,7 @@ final class VariablesDesign {
     }
 
     private ObjectNode json(VariablesDesigner.Design design, VariablesDesigner.Design known, SinglePlan single,
-            Measurement measurement, RiskPoints points, SavedPlan saved) {
+            Measurement measurement, RiskPoints points, SavedPlan saved, VariablesDesigner.Design lowerDesign) {
         VariablesPlan plan = design.plan();
         ObjectNode node = Json.object();
         node.put("planFound", true);
@@ -252,6 +321,17 @@ final class VariablesDesign {
             attribute.put("unitsSaved", single.n() - plan.n());
         }
         node.set("measurement", PlanFormat.measurementJson(measurement));
+        if (lowerDesign != null) {
+            ObjectNode lower = node.putObject("lowerLimit");
+            lower.put("k", lowerDesign.plan().k());
+            lower.put("kLowest", lowerDesign.lowestK());
+            lower.put("kHighest", lowerDesign.highestK());
+            lower.put("aql", measurement.lowerDesign().designedFor().aql());
+            lower.put("ltpd", measurement.lowerDesign().designedFor().ltpd());
+            lower.put("producerRisk", lowerDesign.risks().producerRisk());
+            lower.put("consumerRisk", lowerDesign.risks().consumerRisk());
+            lower.put("risksMet", lowerDesign.risks().meets(measurement.lowerDesign().designedFor()));
+        }
         if (saved != null) {
             node.put("fingerprint", saved.fingerprint());
         }

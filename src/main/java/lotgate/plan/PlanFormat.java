@@ -65,7 +65,7 @@ public final class PlanFormat {
     private static final Set<String> TOP_FIELDS_V3 = Set.of("format", "formatVersion", "name", "description",
             "created", "model", "lotSize", "classes", "fingerprint", "measurement");
     private static final Set<String> MEASUREMENT_FIELDS = Set.of("characteristic", "lower", "upper", "unit", "sigma",
-            "limits");
+            "limits", "lowerDesign");
     private static final Set<String> CLASS_FIELDS = Set.of("class", "plan", "designedFor", "achieved");
 
     /** What a new plan file holds for one defect class before its risks are computed. */
@@ -167,6 +167,15 @@ public final class PlanFormat {
             node.put("sigma", measurement.sigma());
         }
         node.put("limits", measurement.limits());
+        if (measurement.lowerDesign() != null) {
+            ObjectNode lower = node.putObject("lowerDesign");
+            RiskPoints points = measurement.lowerDesign().designedFor();
+            lower.put("aql", points.aql());
+            lower.put("alpha", points.alpha());
+            lower.put("ltpd", points.ltpd());
+            lower.put("beta", points.beta());
+            lower.put("k", measurement.lowerDesign().k());
+        }
         return node;
     }
 
@@ -369,10 +378,18 @@ public final class PlanFormat {
                 }
             }
             try {
+                Measurement.LimitDesign lowerDesign = null;
+                if (node.has("lowerDesign")) {
+                    JsonNode lower = object(node, "measurement.lowerDesign");
+                    lowerDesign = new Measurement.LimitDesign(new RiskPoints(number(lower, "measurement.lowerDesign.aql"),
+                            number(lower, "measurement.lowerDesign.alpha"), number(lower, "measurement.lowerDesign.ltpd"),
+                            number(lower, "measurement.lowerDesign.beta")), number(lower, "measurement.lowerDesign.k"));
+                }
                 return new Measurement(text(node, "measurement.characteristic"),
                         node.has("lower") ? number(node, "measurement.lower") : null,
                         node.has("upper") ? number(node, "measurement.upper") : null, text(node, "measurement.unit"),
-                        node.has("sigma") ? number(node, "measurement.sigma") : null, text(node, "measurement.limits"));
+                        node.has("sigma") ? number(node, "measurement.sigma") : null, text(node, "measurement.limits"),
+                        lowerDesign);
             } catch (IllegalArgumentException e) {
                 throw invalid("field 'measurement': " + e.getMessage());
             }

@@ -54,14 +54,25 @@ public final class SentenceText {
                     + (measured.accepted() ? "within" : "above") + " M = " + percent(measured.maxEstimate());
         }
         List<String> parts = new ArrayList<>();
+        double lowerK = spec.lowerK(measured.k());
+        boolean ownKs = lowerK != measured.k();
         if (!Double.isNaN(measured.statisticLower())) {
-            parts.add("(mean - L)/" + deviation + " = " + number(measured.statisticLower()));
+            parts.add("(mean - L)/" + deviation + " = " + number(measured.statisticLower())
+                    + (ownKs ? " against k = " + number(lowerK) : ""));
         }
         if (!Double.isNaN(measured.statisticUpper())) {
-            parts.add("(U - mean)/" + deviation + " = " + number(measured.statisticUpper()));
+            parts.add("(U - mean)/" + deviation + " = " + number(measured.statisticUpper())
+                    + (ownKs ? " against k = " + number(measured.k()) : ""));
         }
-        return String.join(", ", parts) + (measured.accepted() ? ", at least" : ", not all at least") + " k = "
-                + number(measured.k());
+        String verdict;
+        if (ownKs) {
+            verdict = measured.accepted() ? ": each at least its k" : ": below its k at a limit";
+        } else if (parts.size() == 2) {
+            verdict = (measured.accepted() ? ", both at least k = " : ", not both at least k = ") + number(measured.k());
+        } else {
+            verdict = (measured.accepted() ? ", at least k = " : ", below k = ") + number(measured.k());
+        }
+        return String.join(", ", parts) + verdict;
     }
 
     /** What the measurements say, line by line, the same on the terminal and in the reports. */
@@ -85,6 +96,7 @@ public final class SentenceText {
                     + number(spec.upper()) + unit);
         }
         lines.add(String.join("; ", statistics) + "; k = " + number(measured.k())
+                + (spec.lowerDesign() != null ? " (upper), " + number(spec.lowerDesign().k()) + " (lower)" : "")
                 + (spec.limits().equals(Measurement.COMBINED) ? ", M = " + percent(measured.maxEstimate()) : ""));
         lines.add("estimated fraction beyond the limit" + (spec.twoLimits() ? "s" : "") + ": " + percent(measured
                 .estimate()) + " (minimum variance unbiased estimate under normality); at most " + percent(measured

@@ -28,8 +28,32 @@ public final class VariablesDesigner {
     private VariablesDesigner() {
     }
 
+    /**
+     * The range of k that meets both risks with n units: its lowest k meets the consumer's risk exactly, its
+     * highest the producer's; empty (lowest above highest) where n is too small.
+     */
+    public static double[] kRange(RiskPoints points, int n, boolean sigmaKnown) {
+        double z1 = VariablesPlan.standardDistance(points.aql());
+        double z2 = VariablesPlan.standardDistance(points.ltpd());
+        double root = Math.sqrt(n);
+        if (sigmaKnown) {
+            return new double[] {z2 + VariablesPlan.standardDistance(points.beta()) / root,
+                    z1 - VariablesPlan.standardDistance(points.alpha()) / root};
+        }
+        return new double[] {NoncentralT.quantile(1 - points.beta(), n - 1, root * z2) / root,
+                NoncentralT.quantile(points.alpha(), n - 1, root * z1) / root};
+    }
+
     /** The plan with the smallest n that meets both risks, or null if none up to {@link #MOST_UNITS}. */
     public static Design design(RiskPoints points, boolean sigmaKnown) {
+        return design(points, sigmaKnown, 0);
+    }
+
+    /**
+     * The plan with the smallest n, at least {@code fewest}, that meets both risks (a common n for limits of
+     * separate designs), or null if none up to {@link #MOST_UNITS}.
+     */
+    public static Design design(RiskPoints points, boolean sigmaKnown, int fewest) {
         if (points.ltpd() >= 1) {
             throw new IllegalArgumentException("a variables plan's LTPD is a fraction beyond the limit, below 100%");
         }
@@ -41,21 +65,12 @@ public final class VariablesDesigner {
         double closedK = (za * z2 + zb * z1) / (za + zb);
         double wallis = exact * (1 + closedK * closedK / 2);
         OcModel model = new OcModel.Binomial();
-        int n = Math.max(sigmaKnown ? 1 : 2, (int) Math.ceil(exact * (1 - 1e-12)));
+        int n = Math.max(fewest, Math.max(sigmaKnown ? 1 : 2, (int) Math.ceil(exact * (1 - 1e-12))));
         for (; n <= MOST_UNITS; n++) {
-            double root = Math.sqrt(n);
-            double low;
-            double high;
-            if (sigmaKnown) {
-                low = z2 + zb / root;
-                high = z1 - za / root;
-            } else {
-                low = NoncentralT.quantile(1 - points.beta(), n - 1, root * z2) / root;
-                high = NoncentralT.quantile(points.alpha(), n - 1, root * z1) / root;
-            }
-            if (low <= high) {
-                VariablesPlan plan = new VariablesPlan(n, 0.5 * (low + high), sigmaKnown);
-                return new Design(plan, PlanRisks.of(plan, model, points), low, high, exact, closedK, wallis);
+            double[] range = kRange(points, n, sigmaKnown);
+            if (range[0] <= range[1]) {
+                VariablesPlan plan = new VariablesPlan(n, 0.5 * (range[0] + range[1]), sigmaKnown);
+                return new Design(plan, PlanRisks.of(plan, model, points), range[0], range[1], exact, closedK, wallis);
             }
         }
         return null;

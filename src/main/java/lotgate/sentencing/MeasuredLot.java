@@ -82,7 +82,8 @@ public record MeasuredLot(boolean accepted, int n, double mean, double deviation
                 max = plan.maxEstimate();
                 accepted = estimate <= max;
             }
-            default -> accepted = (Double.isNaN(lower) || lower >= plan.k()) && (Double.isNaN(upper) || upper >= plan.k());
+            default -> accepted = (Double.isNaN(lower) || lower >= spec.lowerK(plan.k()))
+                    && (Double.isNaN(upper) || upper >= plan.k());
         }
         double bound = Math.min(1.0, plan.upperBoundBeyond(lower, confidence) + plan.upperBoundBeyond(upper, confidence));
         List<Integer> outside = new ArrayList<>();

@@ -93,6 +93,29 @@ class VariablesCommandsTest {
         assertTrue(design.get("sigmaKnown").asBoolean());
     }
 
+    @Test
+    void separateLimitsMayHaveTheirOwnAqlsAndShareTheLargerSample() throws Exception {
+        JsonNode design = json(Cli.run("design", "--scheme", "variables", "--aql", "1%", "--ltpd", "6%", "--lower",
+                "9.9", "--upper", "10.1", "--limits", "separate", "--lower-aql", "0.25%", "--lower-ltpd", "2%",
+                "--format", "json"));
+        // SciPy 1.10.1: the lower limit alone (0.25%/5% against 2%/10%) needs n = 60 with k from 2.38852 to 2.39346;
+        // the upper limit alone needs 42, so both share 60.
+        assertEquals(60, design.get("n").asInt());
+        JsonNode lower = design.get("lowerLimit");
+        assertEquals(2.3885230939880588, lower.get("kLowest").asDouble(), 1e-9);
+        assertEquals(2.3934601510985858, lower.get("kHighest").asDouble(), 1e-9);
+        assertTrue(lower.get("risksMet").asBoolean());
+        assertTrue(design.get("risksMet").asBoolean());
+        assertEquals(0.0025, design.get("measurement").get("lowerDesign").get("aql").asDouble());
+        // A lot whose mean sits nearer the lower limit passes the upper k but not the stricter lower one.
+        Path file = plan("--lower", "9.9", "--upper", "10.1", "--limits", "separate", "--lower-aql", "0.25%",
+                "--lower-ltpd", "2%");
+        Cli.Result result = Cli.run("sentence", "--no-record", file.toString(),
+                sheet("low.csv", normalSample(60, 9.97, 0.03)).toString(), "--lot", "L1");
+        assertEquals(ExitCode.REJECTED, result.exitCode(), result.out() + result.err());
+        assertTrue(result.out().contains(": below its k at a limit"), result.out());
+    }
+
     @ParameterizedTest(name = "{0}")
     @CsvSource(delimiter = '|', value = {
             "--scheme variables --aql 1% --ltpd 6% | --scheme variables needs a specification limit: give --lower,"
@@ -106,8 +129,10 @@ class VariablesCommandsTest {
                     + " or separate",
             "--scheme variables --aql 1% --ltpd 6% --upper 1 --model poisson | --model poisson: a variables plan"
                     + " judges the fraction of a steady process beyond its limits (type B); leave out --model",
-            "--aql 1% --ltpd 6% --upper 1 | --sigma, --lower, --upper, --limits, --unit and --characteristic are for"
-                    + " --scheme variables",
+            "--aql 1% --ltpd 6% --upper 1 | --sigma, --lower, --upper, --limits, --unit, --characteristic, --lower-aql"
+                    + " and --lower-ltpd are for --scheme variables",
+            "--scheme variables --aql 1% --ltpd 6% --lower 0 --upper 1 --lower-aql 0.5% | --lower-aql and --lower-ltpd"
+                    + " give the lower limit a design of its own: add --limits separate (with both --lower and --upper)",
     })
     void badVariablesOptionsAreNamed(String options, String message) {
         List<String> args = new ArrayList<>(List.of("design"));
