@@ -134,6 +134,10 @@ final class DesignCommand implements Runnable {
                     + " same AQL, or the lower limit's own with --lower-aql and --lower-ltpd).")
     String limits;
 
+    @Option(names = "--k", paramLabel = "K",
+            description = "Variables plans: with --sample-size, evaluate the plan (n, k) you already have.")
+    Double kValue;
+
     @Option(names = "--lower-aql", paramLabel = "LEVEL", converter = Values.Quality.class,
             description = "Variables plans with --limits separate: the lower limit's own AQL (default --aql, which"
                     + " then holds for the upper limit).")
@@ -206,9 +210,9 @@ final class DesignCommand implements Runnable {
             return;
         }
         if (sigma != null || lower != null || upper != null || limits != null || unit != null
-                || characteristic != null || lowerAql != null || lowerLtpd != null) {
+                || characteristic != null || lowerAql != null || lowerLtpd != null || kValue != null) {
             throw new ParameterException(spec.commandLine(), "--sigma, --lower, --upper, --limits, --unit,"
-                    + " --characteristic, --lower-aql and --lower-ltpd are for --scheme variables");
+                    + " --characteristic, --lower-aql, --lower-ltpd and --k are for --scheme variables");
         }
         if (!scheme.equals("single")) {
             new SchemeDesign(this, model, lotSize).run();

@@ -47,7 +47,21 @@ final class VariablesDesign {
             command.checkSaveTarget();
         }
         RiskPoints lowerPoints = lowerPoints(points, measurement);
-        VariablesDesigner.Design design = VariablesDesigner.design(points, measurement.sigmaKnown());
+        boolean given = command.sampleSize != null || command.kValue != null;
+        if (given && (command.sampleSize == null || command.kValue == null || !Double.isFinite(command.kValue))) {
+            throw usage("give both --sample-size N and --k K to evaluate a variables plan you already have");
+        }
+        if (given && lowerPoints != null) {
+            throw usage("--lower-aql and --lower-ltpd shape a design; a given plan (--sample-size, --k) has one k");
+        }
+        if (given && command.sampleSize < (measurement.sigmaKnown() ? 1 : 2)) {
+            throw usage("--sample-size " + command.sampleSize + ": a variables plan with sigma unknown needs at least 2"
+                    + " units");
+        }
+        VariablesDesigner.Design design = given
+                ? VariablesDesigner.evaluate(points, new VariablesPlan(command.sampleSize, command.kValue,
+                        measurement.sigmaKnown()))
+                : VariablesDesigner.design(points, measurement.sigmaKnown());
         VariablesDesigner.Design lowerDesign = null;
         if (lowerPoints != null && design != null) {
             // Both limits share one sample: the larger n, with each limit's k in its own range there.
@@ -83,12 +97,13 @@ final class VariablesDesign {
         }
         SingleDesign attribute = new SinglePlanDesigner(model, lotSize).design(points);
         SinglePlan single = attribute instanceof SingleDesign.Found found ? found.plan() : null;
-        VariablesDesigner.Design known = measurement.sigmaKnown() ? design : VariablesDesigner.design(points, true);
+        VariablesDesigner.Design known = measurement.sigmaKnown() && !given ? design
+                : VariablesDesigner.design(points, true);
         SavedPlan saved = null;
         if (command.save != null) {
             saved = PlanFormat.seal(DesignCommand.stem(command.save.file), command.save.description,
                     Instant.now().truncatedTo(ChronoUnit.SECONDS), plan, model, lotSize, points,
-                    SavedPlan.SMALLEST_SAMPLE, measurement);
+                    given ? SavedPlan.GIVEN : SavedPlan.SMALLEST_SAMPLE, measurement);
             PlanFormat.write(command.save.file, saved);
         }
         switch (command.format.kind) {
@@ -100,12 +115,12 @@ final class VariablesDesign {
     }
 
     private Measurement measurement() {
-        if (!command.classSpecs.isEmpty() || command.acceptance != null || command.sampleSize != null
+        if (!command.classSpecs.isEmpty() || command.acceptance != null
                 || !command.stageSpecs.isEmpty() || command.truncateAt != null || command.firstRejection != null
                 || command.asnAt != null || command.curtailed || command.plainWald || !command.secondRatio.equals("1")) {
-            throw usage("--scheme variables takes the risks, --lower and/or --upper, --sigma, --limits, --unit and"
-                    + " --characteristic; --class, --acceptance, --sample-size, --stage and the double and sequential"
-                    + " options are for attribute plans");
+            throw usage("--scheme variables takes the risks, --lower and/or --upper, --sigma, --limits, --unit,"
+                    + " --characteristic, and --sample-size with --k for a given plan; --class, --acceptance, --stage and"
+                    + " the double and sequential options are for attribute plans");
         }
         if (!model.countsUnits() || model instanceof OcModel.Hypergeometric) {
             throw usage("--model " + model.name() + ": a variables plan judges the fraction of a steady process beyond"
@@ -211,8 +226,9 @@ final class VariablesDesign {
             SinglePlan single, Measurement measurement, RiskPoints points, SavedPlan saved,
             VariablesDesigner.Design lowerDesign) {
         VariablesPlan plan = design.plan();
+        boolean given = Double.isNaN(design.lowestK());
         out.println("Variables plan (k-method), sigma " + (plan.sigmaKnown() ? "known" : "unknown")
-                + ": the smallest sample that meets both risks");
+                + (given ? ", as given" : ": the smallest sample that meets both risks"));
         out.println("  " + describe(measurement));
         out.println("  quality: the fraction of product beyond the limit" + (measurement.twoLimits() ? "s" : "")
                 + ", measurements assumed normal");
@@ -220,9 +236,11 @@ final class VariablesDesign {
         for (String line : rule(plan, measurement)) {
             out.println("  " + line);
         }
-        out.printf(Locale.ROOT, "  (k = %.4f is the middle of the range %.4f to %.4f, every k of which meets both risks"
-                + " at n = %d%s.)%n", plan.k(), design.lowestK(), design.highestK(), plan.n(),
-                lowerDesign == null ? "" : " at the upper limit");
+        if (!given) {
+            out.printf(Locale.ROOT, "  (k = %.4f is the middle of the range %.4f to %.4f, every k of which meets both"
+                    + " risks at n = %d%s.)%n", plan.k(), design.lowestK(), design.highestK(), plan.n(),
+                    lowerDesign == null ? "" : " at the upper limit");
+        }
         if (lowerDesign != null) {
             out.printf(Locale.ROOT, "  (the lower limit's k = %.4f is the middle of its range %.4f to %.4f.)%n",
                     lowerDesign.plan().k(), lowerDesign.lowestK(), lowerDesign.highestK());
@@ -266,9 +284,12 @@ final class VariablesDesign {
                     plan.sigmaKnown());
             out.printf(Locale.ROOT, "  Each limit alone would need n = %d (upper) and n = %d (lower); the plan measures"
                     + " the larger sample for both.%n", upperAlone.plan().n(), lowerAlone.plan().n());
-        } else if (plan.sigmaKnown()) {
+        } else if (plan.sigmaKnown() && !given) {
             out.printf(Locale.ROOT, "  Closed form: n = %.2f, rounded up to %d; k = %.4f (common practice).%n",
                     design.exactSize(), plan.n(), design.closedFormK());
+        } else if (given) {
+            out.printf(Locale.ROOT, "  The smallest plan for these risks: n = %d with sigma known, n = %d with sigma"
+                    + " unknown.%n", known.plan().n(), VariablesDesigner.design(points, false).plan().n());
         } else {
             out.printf(Locale.ROOT, "  With sigma known the plan would need n = %d (k = %.4f). Wallis's approximation for"
                     + " an unknown sigma, n_sigma (1 + k^2/2) = %.1f, gives %d units; the exact answer is %d.%n",
@@ -289,11 +310,14 @@ final class VariablesDesign {
         ObjectNode node = Json.object();
         node.put("planFound", true);
         node.put("scheme", "variables");
-        node.put("method", SavedPlan.SMALLEST_SAMPLE);
+        boolean given = Double.isNaN(design.lowestK());
+        node.put("method", given ? SavedPlan.GIVEN : SavedPlan.SMALLEST_SAMPLE);
         node.put("n", plan.n());
         node.put("k", plan.k());
-        node.put("kLowest", design.lowestK());
-        node.put("kHighest", design.highestK());
+        if (!given) {
+            node.put("kLowest", design.lowestK());
+            node.put("kHighest", design.highestK());
+        }
         node.put("sigmaKnown", plan.sigmaKnown());
         node.put("limits", measurement.limits());
         if (measurement.limits().equals(Measurement.COMBINED)) {

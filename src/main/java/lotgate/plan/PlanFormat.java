@@ -412,7 +412,7 @@ public final class PlanFormat {
                 case "single" -> Set.of(SavedPlan.SMALLEST_SAMPLE, SavedPlan.FIXED_ACCEPTANCE, SavedPlan.GIVEN);
                 case "double" -> Set.of(SavedPlan.SMALLEST_ASN, SavedPlan.GIVEN);
                 case "sequential" -> Set.of(SavedPlan.WALD);
-                case "variables" -> Set.of(SavedPlan.SMALLEST_SAMPLE);
+                case "variables" -> Set.of(SavedPlan.SMALLEST_SAMPLE, SavedPlan.GIVEN);
                 default -> Set.of(SavedPlan.GIVEN);
             };
             if (!methods.contains(method)) {

@@ -28,6 +28,18 @@ public final class VariablesDesigner {
     private VariablesDesigner() {
     }
 
+    /** A plan already in use, with its risks and the designs it can be set beside (its k range is NaN). */
+    public static Design evaluate(RiskPoints points, VariablesPlan plan) {
+        double z1 = VariablesPlan.standardDistance(points.aql());
+        double z2 = VariablesPlan.standardDistance(points.ltpd());
+        double za = VariablesPlan.standardDistance(points.alpha());
+        double zb = VariablesPlan.standardDistance(points.beta());
+        double exact = Math.pow((za + zb) / (z1 - z2), 2);
+        double closedK = (za * z2 + zb * z1) / (za + zb);
+        return new Design(plan, PlanRisks.of(plan, new OcModel.Binomial(), points), Double.NaN, Double.NaN, exact,
+                closedK, exact * (1 + closedK * closedK / 2));
+    }
+
     /**
      * The range of k that meets both risks with n units: its lowest k meets the consumer's risk exactly, its
      * highest the producer's; empty (lowest above highest) where n is too small.

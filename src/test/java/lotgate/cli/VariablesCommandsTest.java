@@ -116,6 +116,18 @@ class VariablesCommandsTest {
         assertTrue(result.out().contains(": below its k at a limit"), result.out());
     }
 
+    @Test
+    void aGivenVariablesPlanIsEvaluated() throws Exception {
+        JsonNode given = json(Cli.run("design", "--scheme", "variables", "--aql", "1%", "--ltpd", "6%", "--upper",
+                "10.05", "--sample-size", "42", "--k", "1.9014236613278582", "--format", "json"));
+        assertEquals("given", given.get("method").asText());
+        // The designed plan's own risks (SciPy 1.10.1, above), reached from n and k alone.
+        assertEquals(0.048324570812693805, given.get("producerRisk").asDouble(), 1e-9);
+        assertEquals(0.097661975454225031, given.get("consumerRisk").asDouble(), 1e-9);
+        assertFalse(given.has("kLowest"));
+        assertEquals(15, given.get("knownSigma").get("n").asInt());
+    }
+
     @ParameterizedTest(name = "{0}")
     @CsvSource(delimiter = '|', value = {
             "--scheme variables --aql 1% --ltpd 6% | --scheme variables needs a specification limit: give --lower,"
