@@ -141,8 +141,8 @@ class VariablesCommandsTest {
                     + " or separate",
             "--scheme variables --aql 1% --ltpd 6% --upper 1 --model poisson | --model poisson: a variables plan"
                     + " judges the fraction of a steady process beyond its limits (type B); leave out --model",
-            "--aql 1% --ltpd 6% --upper 1 | --sigma, --lower, --upper, --limits, --unit, --characteristic, --lower-aql"
-                    + " and --lower-ltpd are for --scheme variables",
+            "--aql 1% --ltpd 6% --upper 1 | --sigma, --lower, --upper, --limits, --unit, --characteristic, --lower-aql,"
+                    + " --lower-ltpd and --k are for --scheme variables",
             "--scheme variables --aql 1% --ltpd 6% --lower 0 --upper 1 --lower-aql 0.5% | --lower-aql and --lower-ltpd"
                     + " give the lower limit a design of its own: add --limits separate (with both --lower and --upper)",
     })
