@@ -420,6 +420,10 @@ public final class PlanFormat {
                         methods.stream().sorted().toList()) + " for a " + plan.scheme() + " plan, got \"" + method
                         + "\"");
             }
+            if (plan instanceof VariablesPlan && !(model instanceof OcModel.Binomial)) {
+                throw invalid("field 'model' must be binomial for a variables plan (a steady process), got \""
+                        + model.name() + "\"");
+            }
             if (plan instanceof SequentialPlan sequential) {
                 try {
                     checkLines(prefix, sequential, WaldSequential.of(points, model));

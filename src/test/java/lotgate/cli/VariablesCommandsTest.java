@@ -170,6 +170,22 @@ class VariablesCommandsTest {
     }
 
     @Test
+    void aVariablesPlanFileWithAnAttributeModelIsRefused() throws Exception {
+        Path file = plan("--upper", "10.05");
+        com.fasterxml.jackson.databind.node.ObjectNode root = (com.fasterxml.jackson.databind.node.ObjectNode)
+                JSON.readTree(Files.readString(file));
+        root.put("model", "poisson");
+        root.remove("fingerprint");
+        root.put("fingerprint", "sha256:" + lotgate.files.CanonicalJson.sha256(lotgate.files.CanonicalJson.text(root
+                .deepCopy().without("fingerprint"))));
+        Files.writeString(file, JSON.writeValueAsString(root));
+        Cli.Result result = Cli.run("show", file.toString());
+        assertEquals(ExitCode.BAD_INPUT, result.exitCode(), result.err());
+        assertEquals("lotgate: " + file + ": field 'model' must be binomial for a variables plan (a steady process),"
+                + " got \"poisson\"", result.err().strip());
+    }
+
+    @Test
     void aCentredLotIsAcceptedWithItsStatisticsAndAShiftedOneRejected() throws Exception {
         Path file = plan("--upper", "10.05");
         JsonNode accepted = json(Cli.run("sentence", "--no-record", file.toString(),
