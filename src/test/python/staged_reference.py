@@ -99,3 +99,46 @@ for p in ["1/100","3/100","6/100"]:
 for (n1,c1,r1,n2,c2) in [(69,0,4,69,3),(60,0,4,82,3)]:
     for p in [0.01,0.05]:
         print("designed", n1, n2, p, "%.17g %.17g %.17g" % dbl(n1,c1,r1,n2,c2,p))
+# Wald's approximate OC and ASN away from the design points, from the OC curve's parametric form
+# p(h) = (1 - b^h)/(a^h - b^h), Pa(h) = (A^h - 1)/(A^h - B^h), solved for h with scipy.optimize.brentq.
+from scipy.optimize import brentq
+p1,al,p2,be = 0.01,0.05,0.06,0.10
+a_,b_ = p2/p1,(1-p2)/(1-p1)
+A,B = (1-be)/al, be/(1-al)
+for p in [0.003,0.03,0.1]:
+    h = brentq(lambda h: (1-b_**h)/(a_**h-b_**h) - p, -50, 50) if abs(p-s)>1e-12 else 0
+    pa = (A**h-1)/(A**h-B**h)
+    drift = p*math.log(a_) + (1-p)*math.log(b_)
+    asn = (pa*math.log(B) + (1-pa)*math.log(A))/drift
+    print("waldcurve", p, "%.17g %.17g" % (pa, asn))
+# Exact AOQ and ATI of the truncated sequential plan for a lot of 2000 (type B), exact rationals.
+def seqaoq(h1,h2,s,nt,p,N):
+    p=F(p)
+    act = math.floor(s*nt)
+    def Ac(m): return act if m==nt else max(-1, math.floor(s*m-h1))
+    def Re(m): return act+1 if m==nt else min(act+1, math.ceil(h2+s*m))
+    going={0:F(1)}; out=F(0); ati=F(0)
+    for m in range(1,nt+1):
+        nxt={}
+        for d,w in going.items():
+            for x,pr in ((0,1-p),(1,p)):
+                t=d+x
+                if t<=Ac(m): out+=w*pr*p*(N-m)/N; ati+=w*pr*m
+                elif t>=Re(m): ati+=w*pr*N
+                else: nxt[t]=nxt.get(t,0)+w*pr
+        going=nxt
+        if not going: break
+    return out,ati
+o,t = seqaoq(h1,h2,s,180,F(3,100),2000)
+print("seqaoq 0.03 N2000 %.17g %.17g" % (float(o), float(t)))
+# Curtailed ASN of the Poisson double plan (40, 0, 3; 80, 2) at 0.03 per unit: the second sample's units
+# inspected until the count reaches the rejection number, summed over every stopping unit.
+def curtp(n1,c1,n2,c2,l):
+    e=n1
+    for d1 in range(c1+1,c2+1):
+        k=c2+1-d1
+        # E[min(n2, T)] = sum over j < n2 of P(Poisson(j l) < k)
+        ex=sum(poisson.cdf(k-1,j*l) for j in range(0,n2))
+        e+=poisson.pmf(d1,n1*l)*ex
+    return e
+print("curtpoisson 0.03 %.17g" % curtp(40,0,80,2,0.03))

@@ -34,3 +34,14 @@ samples={"a":[9.98,10.02,10.01,9.97,10.00,10.03,9.99,10.04,9.96,10.01,10.00,9.98
 for name,x in samples.items():
     r=anderson(np.array(x,dtype=float),'norm')
     print("anderson", name, "%.17g" % r.statistic)
+# The M-method's estimate for an unknown sigma: I_x((n-2)/2, (n-2)/2) with x = 1/2 - Q sqrt(n)/(2(n-1)),
+# from scipy.stats.beta.cdf; and the exact 95% upper bound on the fraction beyond the limit: the d with
+# P(T' >= sqrt(n) Q | d) = 5%, by scipy.optimize.brentq, as Phi(-d/sqrt(n)).
+from scipy.stats import beta
+from scipy.optimize import brentq
+for n,q in [(42,1.9),(42,2.5),(10,1.2)]:
+    x=max(0.0,min(1.0,0.5-q*math.sqrt(n)/(2*(n-1))))
+    est=beta.cdf(x,(n-2)/2,(n-2)/2)
+    t=math.sqrt(n)*q
+    d=brentq(lambda d: nct.sf(t,n-1,d)-0.05, t-40, t+40, xtol=1e-14)
+    print("mvue %d %r %.17g bound %.17g" % (n,q,est,norm.cdf(-d/math.sqrt(n))))

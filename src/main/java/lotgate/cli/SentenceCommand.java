@@ -194,7 +194,7 @@ final class SentenceCommand implements Runnable {
         }
         Inspection inspection = noRecord && !family ? null : Inspection.open(storeOption, planFile, family, lot,
                 supersedes);
-        Sentence sentence = null;
+        Sentence sentence;
         try {
             SavedPlan plan = inspection == null ? PlanFormat.read(planFile) : inspection.plan();
             List<String> notices = new ArrayList<>();
@@ -202,55 +202,51 @@ final class SentenceCommand implements Runnable {
                 notices.add(inspection.notice());
             }
             lot = checkLot(lot, plan, notices);
-            if (plan.measurement() != null) {
-                Path appliedPlan = inspection == null ? planFile : inspection.planFile();
-                sentence = finish(measured(plan, appliedPlan, source, lot, range, columns, notices), inspection);
-                return;
-            }
-            if (chart != null && !plan.unclassified()) {
-                throw new ParameterException(spec.commandLine(), "--chart draws the sampling chart of a plan without"
-                        + " defect classes; plan " + plan.name() + " has criteria per class");
-            }
-            int[] cutoffs = plan.classes().stream().flatMap(c -> Stopping.boundaries(c.plan()).stream())
-                    .mapToInt(Integer::intValue).distinct().toArray();
-            SampleReader reader = new SampleReader(source, sheet, columns, cutoffs, range[0], range[1]);
-            if (plan.classes().stream().anyMatch(c -> c.plan() instanceof SequentialPlan)) {
-                reader.keepSequence();
-            }
-            InspectionSample sample = reader.read();
-            Sentencer.Counts counts = counts(plan, sample);
-            checkSampleSize(plan, sample, range, counts);
-            Outcome outcome = Sentencer.sentence(plan, counts, lot.lotSize(), confidence);
-            if (outcome instanceof Pending pending) {
-                printPending(spec.commandLine().getOut(), plan, sample, pending, lot);
-                throw new Main.Failure(ExitCode.NOT_DECIDED, null);
-            }
-            sentence = (Sentence) outcome;
-            int used = sentence.classes().stream().mapToInt(ClassVerdict::inspected).max().orElse(sample.units());
-            if (used < sample.units()) {
-                ClassVerdict first = sentence.classes().get(0);
-                notices.add("the plan decided at " + first.step() + ", after " + used + " units; the other "
-                        + (sample.units() - used) + " units on the sheet do not count toward the verdict");
-            }
             Path appliedPlan = inspection == null ? planFile : inspection.planFile();
-            LotDecision decision = new LotDecision(lot, plan, appliedPlan, sample, Sha256.of(sheetFile), sentence,
-                    confidence, Instant.now().truncatedTo(ChronoUnit.SECONDS), Version.number(), notices);
-            finish(decision, inspection);
+            LotDecision decision = plan.measurement() != null
+                    ? measured(plan, appliedPlan, source, lot, range, columns, notices)
+                    : counted(plan, appliedPlan, source, lot, range, columns, notices);
+            sentence = finish(decision, inspection);
         } finally {
             if (inspection != null) {
                 inspection.close();
             }
-            if (decided(sentence) && !sentence.accepted()) {
-                throw new Main.Failure(ExitCode.REJECTED, null);
-            }
+        }
+        if (!sentence.accepted()) {
+            throw new Main.Failure(ExitCode.REJECTED, null);
         }
     }
 
-    /** Whether the lot was sentenced, recorded and printed in full (so that its exit code is the verdict's). */
-    private boolean finished;
-
-    private boolean decided(Sentence sentence) {
-        return finished && sentence != null;
+    /** A lot judged by counts: a single plan, a plan in stages or a sequential plan. */
+    private LotDecision counted(SavedPlan plan, Path appliedPlan, SheetSource source, LotDetails lot, int[] range,
+            Columns columns, List<String> notices) {
+        if (chart != null && !plan.unclassified()) {
+            throw new ParameterException(spec.commandLine(), "--chart draws the sampling chart of a plan without"
+                    + " defect classes; plan " + plan.name() + " has criteria per class");
+        }
+        int[] cutoffs = plan.classes().stream().flatMap(c -> Stopping.boundaries(c.plan()).stream())
+                .mapToInt(Integer::intValue).distinct().toArray();
+        SampleReader reader = new SampleReader(source, sheet, columns, cutoffs, range[0], range[1]);
+        if (plan.classes().stream().anyMatch(c -> c.plan() instanceof SequentialPlan)) {
+            reader.keepSequence();
+        }
+        InspectionSample sample = reader.read();
+        Sentencer.Counts counts = counts(plan, sample);
+        checkSampleSize(plan, sample, range, counts);
+        Outcome outcome = Sentencer.sentence(plan, counts, lot.lotSize(), confidence);
+        if (outcome instanceof Pending pending) {
+            printPending(spec.commandLine().getOut(), plan, sample, pending, lot);
+            throw new Main.Failure(ExitCode.NOT_DECIDED, null);
+        }
+        Sentence sentence = (Sentence) outcome;
+        int used = sentence.classes().stream().mapToInt(ClassVerdict::inspected).max().orElse(sample.units());
+        if (used < sample.units()) {
+            ClassVerdict first = sentence.classes().get(0);
+            notices.add("the plan decided at " + first.step() + ", after " + used + " units; the other "
+                    + (sample.units() - used) + " units on the sheet do not count toward the verdict");
+        }
+        return new LotDecision(lot, plan, appliedPlan, sample, Sha256.of(sheetFile), sentence, confidence,
+                Instant.now().truncatedTo(ChronoUnit.SECONDS), Version.number(), notices);
     }
 
     /** Records the decision, writes its reports and record, and prints it; returns its sentence. */
@@ -286,7 +282,6 @@ final class SentenceCommand implements Runnable {
             }
         }
         out.flush();
-        finished = true;
         return decision.sentence();
     }
 

@@ -53,8 +53,10 @@ public record DoublePlan(int n1, int c1, int r1, int n2, int c2) implements Plan
     public double acceptance(OcModel model, double quality) {
         // P(d1 <= c1) + sum over c1 < d1 < r1 of P(d1) P(d2 <= c2 - d1)
         double accept = model.atMost(n1, c1, quality);
+        double[] second = model instanceof OcModel.Hypergeometric ? null : secondTails(model, quality, true);
         for (int d1 = c1 + 1; d1 < r1; d1++) {
-            accept += model.exactly(n1, d1, quality) * model.atMostAfter(n1, d1, n2, c2 - d1, quality);
+            accept += model.exactly(n1, d1, quality) * (second != null ? second[c2 - d1 - (c2 - r1 + 1)]
+                    : model.atMostAfter(n1, d1, n2, c2 - d1, quality));
         }
         return accept;
     }
@@ -63,10 +65,40 @@ public record DoublePlan(int n1, int c1, int r1, int n2, int c2) implements Plan
     public double rejection(OcModel model, double quality) {
         // P(d1 >= r1) + sum over c1 < d1 < r1 of P(d1) P(d2 > c2 - d1)
         double reject = model.moreThan(n1, r1 - 1, quality);
+        double[] second = model instanceof OcModel.Hypergeometric ? null : secondTails(model, quality, false);
         for (int d1 = c1 + 1; d1 < r1; d1++) {
-            reject += model.exactly(n1, d1, quality) * model.moreThanAfter(n1, d1, n2, c2 - d1, quality);
+            reject += model.exactly(n1, d1, quality) * (second != null ? second[c2 - d1 - (c2 - r1 + 1)]
+                    : model.moreThanAfter(n1, d1, n2, c2 - d1, quality));
         }
         return reject;
+    }
+
+    /**
+     * For a second sample independent of the first (a process, not a finite lot), its tails P(d2 <= j), or
+     * P(d2 > j), for every j a continuing first count can need (c2 - r1 + 1 to c2 - c1 - 1): one tail computed
+     * directly at the far end, the others by adding point probabilities, so that each stays a sum of positive
+     * terms and the design search need not call the incomplete beta function once per count.
+     */
+    private double[] secondTails(OcModel model, double quality, boolean lower) {
+        int low = c2 - r1 + 1;
+        int high = c2 - c1 - 1;
+        double[] tails = new double[high - low + 1];
+        if (lower) {
+            double sum = model.atMost(n2, low, quality);
+            tails[0] = sum;
+            for (int j = low + 1; j <= high; j++) {
+                sum += model.exactly(n2, j, quality);
+                tails[j - low] = sum;
+            }
+        } else {
+            double sum = model.moreThan(n2, high, quality);
+            tails[high - low] = sum;
+            for (int j = high; j > low; j--) {
+                sum += model.exactly(n2, j, quality);
+                tails[j - 1 - low] = sum;
+            }
+        }
+        return tails;
     }
 
     /** P(c1 < d1 < r1): the chance that the second sample is needed. */

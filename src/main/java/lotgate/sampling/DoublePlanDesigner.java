@@ -16,14 +16,28 @@ package lotgate.sampling;
  * samples), which bounds the ASN from below and ends the loops over n1, c2 and c1.
  */
 public final class DoublePlanDesigner {
+    /**
+     * The most work the search does before it gives up, in point probabilities and tails computed (about half a
+     * minute on 2 cores): only AQL and LTPD so close that acceptance numbers run high need more.
+     */
+    public static final long BUDGET = 250_000_000;
+
     private final OcModel model;
     private final int largest;
+    private final long budget;
     private long candidates;
+    private long work;
 
     /**
      * @param lotSize the lot size N that bounds n1 + n2, or 0 for none
      */
     public DoublePlanDesigner(OcModel model, int lotSize) {
+        this(model, lotSize, BUDGET);
+    }
+
+    /** A search with its own budget of work (for tests of the stop). */
+    DoublePlanDesigner(OcModel model, int lotSize, long budget) {
+        this.budget = budget;
         this.model = model;
         int bound = model instanceof OcModel.Hypergeometric h ? h.lotSize() : lotSize;
         this.largest = bound > 0 ? bound : SinglePlanDesigner.MAX_SAMPLE_SIZE;
@@ -55,6 +69,7 @@ public final class DoublePlanDesigner {
      */
     public DoubleDesign design(RiskPoints points, Space space, double asnLevel) {
         candidates = 0;
+        work = 0;
         double aqlPoint = model.producerPoint(points.aql());
         double ltpdPoint = model.consumerPoint(points.ltpd());
         if (aqlPoint >= ltpdPoint) {
@@ -62,12 +77,21 @@ public final class DoublePlanDesigner {
                     + Math.round(aqlPoint * largest) + " nonconforming units");
         }
         Best best = new Best();
-        if (space.ratio() != null) {
-            searchWithRatio(points, space, aqlPoint, ltpdPoint, asnLevel, best);
-        } else {
-            // The plans with n2 = n1 are in the free space too: their best is a first bound to prune with.
-            searchWithRatio(points, new Space(1.0, space.firstRejection()), aqlPoint, ltpdPoint, asnLevel, best);
-            searchFree(points, space, aqlPoint, ltpdPoint, asnLevel, best);
+        try {
+            if (space.ratio() != null) {
+                searchWithRatio(points, space, aqlPoint, ltpdPoint, asnLevel, best);
+            } else {
+                // The plans with n2 = n1 are in the free space too: their best is a first bound to prune with.
+                searchWithRatio(points, new Space(1.0, space.firstRejection()), aqlPoint, ltpdPoint, asnLevel, best);
+                if (best.plan != null) {
+                    searchFree(points, space, aqlPoint, ltpdPoint, asnLevel, best);
+                }
+            }
+        } catch (OverBudget e) {
+            return new DoubleDesign.NotFound("the search stopped after " + candidates + " plans without proving one"
+                    + " the smallest: AQL and LTPD this close need very large acceptance numbers; widen the gap between"
+                    + " them" + (space.ratio() == null ? ", search with a fixed second-sample ratio," : "")
+                    + " or use the single plan");
         }
         if (best.plan == null) {
             return new DoubleDesign.NotFound(largest < SinglePlanDesigner.MAX_SAMPLE_SIZE
@@ -127,7 +151,7 @@ public final class DoublePlanDesigner {
                 floor = n1;
                 for (; best.open(n1) && n1 + space.secondSample(n1) <= largest; n1++) {
                     DoublePlan plan = new DoublePlan(n1, c1, r1, space.secondSample(n1), c2);
-                    candidates++;
+                    count(c1, r1);
                     if (plan.rejection(model, aqlPoint) > points.alpha()) {
                         break;
                     }
@@ -190,8 +214,24 @@ public final class DoublePlanDesigner {
         return good;
     }
 
-    private boolean meetsConsumer(int n1, int c1, int r1, int n2, int c2, double ltpdPoint, double beta) {
+    /** Counts one plan evaluated with its first-sample counts c1 < d1 < r1, and stops once the budget is spent. */
+    private void count(int c1, int r1) {
         candidates++;
+        work += r1 - c1 + 2L;
+        if (work > budget) {
+            throw new OverBudget();
+        }
+    }
+
+    /** The search ran out of its budget before it could prove a plan the best. */
+    private static final class OverBudget extends RuntimeException {
+        OverBudget() {
+            super(null, null, false, false);
+        }
+    }
+
+    private boolean meetsConsumer(int n1, int c1, int r1, int n2, int c2, double ltpdPoint, double beta) {
+        count(c1, r1);
         return new DoublePlan(n1, c1, r1, n2, c2).acceptance(model, ltpdPoint) <= beta;
     }
 
@@ -219,6 +259,7 @@ public final class DoublePlanDesigner {
                 int secondUpper = -1;
                 for (int n1 = firstLeast; best.open(n1) && n1 < largest; n1++) {
                     DoublePlan probe = new DoublePlan(n1, c1, r1, 1, c2);
+                    work += r1 - c1;
                     double second = probe.secondSampleChance(model, asnLevel);
                     if (!best.open(n1 + Math.max(0, totalLeast - n1) * second)) {
                         continue;
@@ -230,7 +271,7 @@ public final class DoublePlanDesigner {
                     }
                     secondUpper = n2;
                     DoublePlan plan = new DoublePlan(n1, c1, r1, n2, c2);
-                    candidates++;
+                    count(c1, r1);
                     if (plan.rejection(model, aqlPoint) > points.alpha()) {
                         continue;
                     }

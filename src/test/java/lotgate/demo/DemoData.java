@@ -52,10 +52,16 @@ public final class DemoData {
                     "%.4f", value), null));
         }
         csv(file, ',', false, rows);
-        String stem = file.getFileName().toString().replace(".csv", ".lot.csv");
-        csv(file.resolveSibling(stem), ',', false, List.of(row("lot", lot), row("supplier", "Kestrune Castings (invented)"),
-                row("part", "KC-114"), row("lot size", 400), row("received", skewed ? "2026-11-26" : "2026-11-12"),
-                row("inspector", "M. Lindqvist (invented)")));
+        lotFile(file, lot, "Kestrune Castings (invented)", "KC-114", 400, skewed ? "2026-11-26" : "2026-11-12",
+                "M. Lindqvist (invented)");
+    }
+
+    /** The lot details beside a CSV sheet, as NAME.lot.csv. */
+    private static void lotFile(Path sheet, String lot, String supplier, String part, int size, String received,
+            String inspector) throws IOException {
+        String stem = sheet.getFileName().toString().replace(".csv", ".lot.csv");
+        csv(sheet.resolveSibling(stem), ',', false, List.of(row("lot", lot), row("supplier", supplier), row("part", part),
+                row("lot size", size), row("received", received), row("inspector", inspector)));
     }
 
     /**
@@ -77,10 +83,7 @@ public final class DemoData {
             }
         }
         csv(file, ',', false, rows);
-        String stem = file.getFileName().toString().replace(".csv", ".lot.csv");
-        csv(file.resolveSibling(stem), ',', false, List.of(row("lot", "QP-2611"),
-                row("supplier", "Quorrin Plastics (invented)"), row("part", "QP-7"), row("lot size", 2000),
-                row("received", "2026-11-24"), row("inspector", "R. Okafor (invented)")));
+        lotFile(file, "QP-2611", "Quorrin Plastics (invented)", "QP-7", 2000, "2026-11-24", "R. Okafor (invented)");
     }
 
     /**

@@ -58,6 +58,27 @@ class SequentialPlanTest {
         assertEquals(asn, plan.averageSampleNumber(BINOMIAL, p), 1e-11 * asn);
     }
 
+    @ParameterizedTest(name = "Wald at p={0}")
+    @CsvSource({
+            // p, P(accept), ASN: Wald's parametric OC curve solved for h with SciPy 1.10.1's brentq
+            // (staged_reference.py, waldcurve)
+            "0.003, 0.99648445364569516, 48.239531744998011",
+            "0.03, 0.5154457895957727, 68.951935542678527",
+            "0.1, 0.011629172191652102, 21.357474941169439",
+    })
+    void waldsCurvesMatchTheParametricForm(double p, double accept, double asn) {
+        assertEquals(accept, TEXTBOOK.acceptance(p), 1e-10);
+        assertEquals(asn, TEXTBOOK.averageSampleNumber(p), 1e-8);
+    }
+
+    @Test
+    void truncatedPlanAoqAndAtiMatchExactRationals() {
+        // Exact rationals over the whole lattice for a lot of 2000 at p = 3% (staged_reference.py, seqaoq).
+        SequentialPlan plan = SequentialPlan.wald(TEXTBOOK, 180);
+        assertEquals(0.016304530269274899, plan.averageOutgoingQuality(BINOMIAL, 0.03, 2000), 1e-13);
+        assertEquals(913.03131538167338, plan.averageTotalInspection(BINOMIAL, 0.03, 2000), 1e-9);
+    }
+
     @Test
     void linesGiveTheAcceptanceAndRejectionNumbers() {
         SequentialPlan plan = SequentialPlan.wald(TEXTBOOK, 180);

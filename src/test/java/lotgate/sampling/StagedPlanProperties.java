@@ -253,6 +253,15 @@ class StagedPlanProperties {
         }
     }
 
+    @org.junit.jupiter.api.Test
+    void aSearchThatRunsOutOfItsBudgetSaysSoInsteadOfGuessing() {
+        DoubleDesign design = new DoublePlanDesigner(new OcModel.Binomial(), 0, 100_000).design(
+                new RiskPoints(0.01, 0.05, 0.015, 0.10), new DoublePlanDesigner.Space(1.0, null), 0.01);
+        DoubleDesign.NotFound stopped = (DoubleDesign.NotFound) design;
+        assertTrue(stopped.reason().startsWith("the search stopped after "), stopped.reason());
+        assertTrue(stopped.reason().contains("without proving one the smallest"), stopped.reason());
+    }
+
     @Property(tries = 100)
     void multiplePlanOcFallsAndItsTailsAddToOne(@ForAll @IntRange(min = 2, max = 7) int count,
             @ForAll @IntRange(min = 1, max = 40) int size, @ForAll @DoubleRange(min = 0.0, max = 0.3) @Scale(5) double p,

@@ -69,6 +69,14 @@ class StagedPlanReferenceTest {
         assertRelative(reject, plan.rejection(new OcModel.Poisson(), perUnit));
     }
 
+    @Test
+    void poissonCurtailedAsnMatchesSciPy() {
+        // SciPy 1.10.1: 40 + sum over d1 of P(d1) sum over j < 80 of P(Poisson(0.03 j) < 3 - d1)
+        // (staged_reference.py, curtpoisson).
+        assertRelative(66.083319315255991, DoublePlan.of(40, 0, 80, 2).curtailedAverageSampleNumber(new OcModel.Poisson(),
+                0.03));
+    }
+
     @ParameterizedTest(name = "finite lot of 500 with D={0}")
     @CsvSource({
             // D, P(accept), P(reject), AOQ: exact rationals, the second sample drawn from what is left of the lot

@@ -132,6 +132,20 @@ class VariablesPlanTest {
         assertEquals(NoncentralT.phi(-2.0), large.estimateBeyond(2.0), 2e-4);
     }
 
+    @ParameterizedTest(name = "n={0} Q={1}")
+    @CsvSource({
+            // n, Q, estimate, 95% upper bound: SciPy 1.10.1 beta.cdf for the M-method's estimate and brentq on
+            // nct.sf for the bound (variables_reference.py, mvue)
+            "42, 1.9, 0.026650364666969684, 0.071425423712458261",
+            "42, 2.5, 0.0047979944587859483, 0.024274366136103235",
+            "10, 1.2, 0.11244458156556902, 0.31462541609725941",
+    })
+    void estimateAndBoundMatchSciPy(int n, double q, double estimate, double bound) {
+        VariablesPlan plan = new VariablesPlan(n, 2.0, false);
+        assertEquals(estimate, plan.estimateBeyond(q), 1e-12);
+        assertEquals(bound, plan.upperBoundBeyond(q, 0.95), 1e-9);
+    }
+
     @Test
     void upperBoundOnTheFractionBeyondTheLimitIsExact() {
         VariablesPlan plan = new VariablesPlan(20, 2.0, false);
