@@ -18,7 +18,6 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Random;
 import java.util.Set;
-import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
@@ -165,8 +164,9 @@ class HistoryStoreTest {
             assertEquals(1, idle.rows(null, null).size());
             Process other = recorder(location, 5, "Invented Other");
             List<Long> done = reported(other);
-            // Liveness, not speed: with a lock held by the idle connection this would wait out the busy timeout.
-            assertTrue(other.waitFor(30, TimeUnit.SECONDS), "the second recorder was blocked");
+            // Liveness, not speed: with a lock held by the idle connection the recorder would wait out the
+            // store's busy timeout and fail, so fewer than 5 writes would be reported done.
+            assertEquals(0, other.waitFor(), "the second recorder was blocked");
             assertEquals(5, done.size());
             assertEquals(6, idle.rows(null, null).size(), "the open store sees the new records");
         }
@@ -181,9 +181,9 @@ class HistoryStoreTest {
         Process second = recorder(location, 500, "Invented B");
         List<Long> doneFirst = reported(first);
         List<Long> doneSecond = reported(second);
-        assertTrue(first.waitFor(5, TimeUnit.MINUTES) && second.waitFor(5, TimeUnit.MINUTES));
-        assertEquals(0, first.exitValue());
-        assertEquals(0, second.exitValue());
+        // Both output streams are read to their end, so the processes have ended: no timer is needed.
+        assertEquals(0, first.waitFor());
+        assertEquals(0, second.waitFor());
         assertEquals(500, doneFirst.size());
         assertEquals(500, doneSecond.size());
         try (HistoryStore store = HistoryStore.open(location)) {
@@ -203,22 +203,35 @@ class HistoryStoreTest {
         Set<Long> reportedDone = new HashSet<>();
         for (int round = 0; round < 12; round++) {
             Process process = recorder(location, 100_000, "Invented K");
-            List<Long> done = new ArrayList<>();
-            Thread reader = new Thread(() -> {
-                try {
-                    done.addAll(reported(process));
-                } catch (Exception ignored) {
-                    // The stream ends when the process is killed.
+            // The kill point is a count of reported writes, not a time, so that a slow machine moves it
+            // nowhere: the recorder is killed while it works on its next write, whatever its speed.
+            int killAfter = 1 + random.nextInt(40);
+            try (BufferedReader out = new BufferedReader(new InputStreamReader(process.getInputStream(),
+                    StandardCharsets.UTF_8))) {
+                int seen = 0;
+                String line = out.readLine();
+                while (line != null && seen < killAfter) {
+                    if (line.startsWith("done ")) {
+                        reportedDone.add(Long.parseLong(line.substring(5)));
+                        seen++;
+                    }
+                    line = seen < killAfter ? out.readLine() : null;
                 }
-            });
-            reader.start();
-            Thread.sleep(400 + random.nextInt(900));
-            process.destroyForcibly(); // SIGKILL on Linux
-            process.waitFor(1, TimeUnit.MINUTES);
-            reader.join(60_000);
-            synchronized (done) {
-                reportedDone.addAll(done);
+                assertEquals(killAfter, seen, "round " + round + ": the recorder ended before it was killed");
+                process.destroyForcibly(); // SIGKILL on Linux
+                // Lines written just before the kill were reported too. The JDK may close the pipe under
+                // this reader once the process has died; what was read up to then is still checked.
+                try {
+                    for (line = out.readLine(); line != null; line = out.readLine()) {
+                        if (line.startsWith("done ")) {
+                            reportedDone.add(Long.parseLong(line.substring(5)));
+                        }
+                    }
+                } catch (java.io.IOException closedByTheJdk) {
+                    // The stream ended with the process.
+                }
             }
+            process.waitFor();
             try (HistoryStore store = HistoryStore.open(location)) {
                 HistoryStore.Verification verification = store.verify();
                 assertTrue(verification.intact(), "round " + round + ": " + verification.problem());
