@@ -1,5 +1,11 @@
 package lotgate.cli;
 
+import lotgate.jobs.Checks;
+import lotgate.jobs.EvaluatePlan;
+import lotgate.jobs.KeyLevels;
+import lotgate.jobs.PlanChoice;
+import lotgate.report.Percent;
+import lotgate.report.Json;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
@@ -62,16 +68,16 @@ final class CompareCommand implements Runnable {
     CommandSpec spec;
 
     record Row(PlanChoice choice, OperatingCharacteristic oc, double atAql, double atLtpd,
-            CurveCommand.KeyLevels keys, double asnAtAql, double asnAtLtpd) {
+            KeyLevels keys, double asnAtAql, double asnAtLtpd) {
     }
 
     @Override
     public void run() {
-        CurveCommand.checkChartName(spec, chart);
-        CurveCommand.checkChartName(spec, asnChart);
+        Checks.chartName("chart", chart);
+        Checks.chartName("asnChart", asnChart);
         List<PlanChoice> choices = new ArrayList<>();
         for (String text : plans) {
-            choices.add(PlanChoice.parse(spec, text, models));
+            choices.add(PlanChoice.parse(text, models.named(), models.lotSize));
         }
         RiskPoints first = choices.stream().map(PlanChoice::designedFor).filter(p -> p != null).findFirst().orElse(null);
         double atAql = aql != null ? aql : first != null ? first.aql() : Double.NaN;
@@ -86,11 +92,11 @@ final class CompareCommand implements Runnable {
         }
         List<Row> rows = new ArrayList<>();
         for (PlanChoice choice : choices) {
-            ModelOptions.checkLevel(spec, choice.model(), "--ltpd", atLtpd);
+            Checks.level(choice.model(), "--ltpd", atLtpd);
             OperatingCharacteristic oc = new OperatingCharacteristic(choice.plan(), choice.model(), choice.lotSize());
             double aqlPoint = choice.model().producerPoint(atAql);
             double ltpdPoint = choice.model().consumerPoint(atLtpd);
-            rows.add(new Row(choice, oc, oc.acceptance(aqlPoint), oc.acceptance(ltpdPoint), CurveCommand.KeyLevels.of(oc),
+            rows.add(new Row(choice, oc, oc.acceptance(aqlPoint), oc.acceptance(ltpdPoint), KeyLevels.of(oc),
                     oc.asn(aqlPoint), oc.asn(ltpdPoint)));
         }
         if (chart != null || asnChart != null) {
@@ -112,14 +118,14 @@ final class CompareCommand implements Runnable {
             range = Math.max(range, row.oc().suggestedRange(atLtpd));
         }
         for (Row row : rows) {
-            curves.add(new ChartCurve(CurveCommand.planLabel(row.choice()) + ", " + row.choice().model().name(),
+            curves.add(new ChartCurve(row.choice().title() + ", " + row.choice().model().name(),
                     row.oc().curve(range, 400)));
         }
         boolean perUnit = rows.stream().allMatch(r -> !r.choice().model().countsUnits());
         PlanChoice firstChoice = rows.get(0).choice();
         if (chart != null) {
             ChartFile.write(Charts.oc("OC curves compared", perUnit, curves,
-                    CurveCommand.marks(firstChoice, atAql, atLtpd)), chart, 900, 600);
+                    EvaluatePlan.marks(firstChoice, atAql, atLtpd)), chart, 900, 600);
         }
         if (asnChart != null) {
             ChartFile.write(Charts.asn("Average sample number compared", perUnit, curves), asnChart, 900, 600);
@@ -131,7 +137,7 @@ final class CompareCommand implements Runnable {
         out.println();
         for (int i = 0; i < rows.size(); i++) {
             PlanChoice choice = rows.get(i).choice();
-            out.printf("  %d  %s, %s%s%n", i + 1, CurveCommand.planLabel(choice),
+            out.printf("  %d  %s, %s%s%n", i + 1, choice.title(),
                     choice.plan() instanceof lotgate.sampling.VariablesPlan ? "normal measurements"
                             : choice.model().name() + " model", choice.lotSize() > 0 ? ", lot size " + choice.lotSize() : "");
         }

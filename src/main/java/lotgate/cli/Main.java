@@ -3,6 +3,7 @@ package lotgate.cli;
 import java.io.PrintWriter;
 import lotgate.files.InputFileException;
 import lotgate.files.OutputFileException;
+import lotgate.jobs.JobException;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -104,6 +105,10 @@ public final class Main implements Runnable {
         } else if (e instanceof lotgate.history.StoreException) {
             code = ExitCode.STORE;
             message = e.getMessage();
+        } else if (e instanceof JobException refused) {
+            code = exitCode(refused.kind());
+            message = refused.getMessage() + (refused.kind() == JobException.Kind.INVALID_REQUEST
+                    ? " (see '" + cli.getCommandSpec().qualifiedName() + " --help')" : "");
         } else if (e instanceof Failure f) {
             code = f.exitCode();
             message = f.getMessage();
@@ -119,6 +124,16 @@ public final class Main implements Runnable {
         }
         err.flush();
         return code;
+    }
+
+    /** The exit code that stands for a job's refusal of its request. */
+    static int exitCode(JobException.Kind kind) {
+        return switch (kind) {
+            case INVALID_REQUEST, CONFLICT -> ExitCode.USAGE;
+            case BAD_INPUT -> ExitCode.BAD_INPUT;
+            case INCOMPLETE_SAMPLE -> ExitCode.INCOMPLETE_SAMPLE;
+            case DISCONTINUED -> ExitCode.DISCONTINUED;
+        };
     }
 
     private static boolean debugRequested(String[] args) {

@@ -1,9 +1,9 @@
 package lotgate.cli;
 
+import lotgate.jobs.Checks;
 import lotgate.sampling.OcModel;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.ParameterException;
 
 /** The OC model and lot size options shared by the commands that compute curves and plans. */
 final class ModelOptions {
@@ -40,20 +40,12 @@ final class ModelOptions {
         return model == null ? "binomial" : model.name();
     }
 
-    OcModel resolve(CommandSpec spec) {
-        if (model == ModelName.hypergeometric && lotSize == null) {
-            throw new ParameterException(spec.commandLine(),
-                    "the hypergeometric model needs the lot size: add --lot-size N");
-        }
-        return OcModel.of(modelName(), lotSizeOrZero());
+    /** The model named, or null when the user named none. */
+    String named() {
+        return model == null ? null : model.name();
     }
 
-    /** Quality levels above 100% only make sense as nonconformities per unit. */
-    static void checkLevel(CommandSpec spec, OcModel model, String option, double level) {
-        if (model.countsUnits() && level >= 1) {
-            throw new ParameterException(spec.commandLine(), "option '" + option + "': a fraction nonconforming"
-                    + " must be below 100%, got " + Percent.level(level) + " (use --model poisson for"
-                    + " nonconformities per unit)");
-        }
+    OcModel resolve(CommandSpec spec) {
+        return Checks.model(named(), lotSize);
     }
 }

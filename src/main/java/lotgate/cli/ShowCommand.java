@@ -1,5 +1,7 @@
 package lotgate.cli;
 
+import lotgate.report.Percent;
+import lotgate.report.Json;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -105,9 +107,9 @@ final class ShowCommand implements Runnable {
         }
         out.println("  created      " + saved.created());
         if (saved.measurement() != null) {
-            out.println("  measures     " + VariablesDesign.describe(saved.measurement()));
+            out.println("  measures     " + PlanWording.measurement(saved.measurement()));
         } else {
-            out.println("  model        " + DesignCommand.modelLine(saved.model(), saved.lotSize()));
+            out.println("  model        " + PlanWording.model(saved.model(), saved.lotSize()));
         }
         for (ClassPlan criteria : saved.classes()) {
             Plan plan = criteria.plan();

@@ -1,5 +1,6 @@
 package lotgate.cli;
 
+import lotgate.report.Json;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.file.Path;

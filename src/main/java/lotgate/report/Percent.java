@@ -1,24 +1,24 @@
-package lotgate.cli;
+package lotgate.report;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
 
 /** Fractions shown as percent: quality levels as typed, probabilities with four significant digits. */
-final class Percent {
+public final class Percent {
     private static final MathContext FOUR_DIGITS = new MathContext(4, RoundingMode.HALF_EVEN);
 
     private Percent() {
     }
 
     /** A quality level in its shortest exact form, such as 1%, 0.65% or 2.5%. */
-    static String level(double fraction) {
+    public static String level(double fraction) {
         return plain(new BigDecimal(Double.toString(fraction)).movePointRight(2)
                 .round(new MathContext(10, RoundingMode.HALF_EVEN))) + "%";
     }
 
     /** A probability with four significant digits, such as 95.58%, 4.425% or 6.420e-06%. */
-    static String probability(double fraction) {
+    public static String probability(double fraction) {
         if (fraction == 0) {
             return "0%";
         }
@@ -31,7 +31,7 @@ final class Percent {
     }
 
     /** A quality level read off a curve, to four significant digits. */
-    static String measured(double fraction) {
+    public static String measured(double fraction) {
         return probability(fraction);
     }
 

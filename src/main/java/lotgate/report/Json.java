@@ -1,4 +1,4 @@
-package lotgate.cli;
+package lotgate.report;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
@@ -8,17 +8,17 @@ import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
 /** JSON output: one indented object per command. */
-final class Json {
+public final class Json {
     private static final ObjectMapper MAPPER = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT).build();
 
     private Json() {
     }
 
-    static ObjectNode object() {
+    public static ObjectNode object() {
         return JsonNodeFactory.instance.objectNode();
     }
 
-    static String text(ObjectNode node) {
+    public static String text(ObjectNode node) {
         try {
             return MAPPER.writeValueAsString(node);
         } catch (JsonProcessingException e) {

@@ -1,7 +1,5 @@
-package lotgate.cli;
+package lotgate.jobs;
 
-import com.fasterxml.jackson.databind.node.ObjectNode;
-import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.time.temporal.ChronoUnit;
@@ -27,9 +25,6 @@ import lotgate.sentencing.LotDecision;
  * ask for, the plan that severity selects from a family, and the record the decision becomes.
  */
 final class Inspection implements AutoCloseable {
-    /** What recording the lot gave: its place in the store and the severity for the next lot. */
-    record Recorded(StoredRecord record, Severity next, SeverityTracker.Switch caused) {
-    }
 
     private final HistoryStore store;
     private final SwitchingRules rules;
@@ -52,10 +47,10 @@ final class Inspection implements AutoCloseable {
         this.supersedes = supersedes;
     }
 
-    static Inspection open(StoreOption option, Path planFile, boolean family, LotDetails lot, Long supersedes) {
+    static Inspection open(String storeLocation, Path planFile, boolean family, LotDetails lot, Long supersedes) {
         PlanFamily plans = family ? PlanFamily.read(planFile) : null;
         SwitchingRules rules = family ? SwitchingRules.fromJson(plans.switching()) : SwitchingRules.CURRENT;
-        HistoryStore store = option.open();
+        HistoryStore store = HistoryStore.open(storeLocation);
         try {
             List<LotRow> rows = store.rows(lot.supplier(), lot.part());
             SupplierHistory history = new SupplierHistory(rows, rules);
@@ -63,7 +58,7 @@ final class Inspection implements AutoCloseable {
             if (supersedes == null) {
                 for (SupplierHistory.Entry entry : history.entries()) {
                     if (entry.row().lot().equals(lot.lot())) {
-                        throw new Main.Failure(ExitCode.USAGE, "lot " + lot.lot() + " of " + lot.supplier() + ", part "
+                        throw new JobException(JobException.Kind.CONFLICT, "lot", "lot " + lot.lot() + " of " + lot.supplier() + ", part "
                                 + lot.part() + " is already recorded as #" + entry.row().seq() + " in "
                                 + store.location() + "; to correct that record, sentence again with --supersedes "
                                 + entry.row().seq() + " --reason TEXT");
@@ -74,7 +69,7 @@ final class Inspection implements AutoCloseable {
                 severity = correctedSeverity(store, history, lot, supersedes);
             } else if (severity == Severity.DISCONTINUED) {
                 SeverityTracker.Switch last = history.switches().get(history.switches().size() - 1);
-                throw new Main.Failure(ExitCode.DISCONTINUED, "inspection of part " + lot.part() + " from "
+                throw new JobException(JobException.Kind.DISCONTINUED, "part", "inspection of part " + lot.part() + " from "
                         + lot.supplier() + " is discontinued since lot " + last.lot() + " (" + last.reason() + ");"
                         + " record the supplier's corrective action with 'lotgate corrective-action' first");
             }
@@ -91,7 +86,7 @@ final class Inspection implements AutoCloseable {
                 String wanted = severity.label();
                 if (!plans.variants().containsKey(wanted)) {
                     if (severity == Severity.TIGHTENED) {
-                        throw new Main.Failure(ExitCode.BAD_INPUT, planFile + ": the switching rules call for tightened"
+                        throw new JobException(JobException.Kind.BAD_INPUT, "planFile", planFile + ": the switching rules call for tightened"
                                 + " inspection, but the family has no tightened plan");
                     }
                     notice = "the family has no " + wanted + " plan: the normal plan was applied";
@@ -111,13 +106,13 @@ final class Inspection implements AutoCloseable {
     private static Severity correctedSeverity(HistoryStore store, SupplierHistory history, LotDetails lot, long seq) {
         StoredRecord old = store.record(seq);
         if (old == null) {
-            throw new Main.Failure(ExitCode.USAGE, "--supersedes " + seq + ": the store " + store.location()
+            throw new JobException(JobException.Kind.CONFLICT, "supersedes", "--supersedes " + seq + ": the store " + store.location()
                     + " has no record " + seq);
         }
         var content = old.json();
         if (!"lot".equals(content.path("kind").asText()) || !lot.supplier().equals(content.path("supplier").asText())
                 || !lot.part().equals(content.path("part").asText())) {
-            throw new Main.Failure(ExitCode.USAGE, "--supersedes " + seq + ": record " + seq + " is not a lot of "
+            throw new JobException(JobException.Kind.CONFLICT, "supersedes", "--supersedes " + seq + ": record " + seq + " is not a lot of "
                     + lot.supplier() + ", part " + lot.part());
         }
         for (SupplierHistory.Entry entry : history.entries()) {
@@ -125,7 +120,7 @@ final class Inspection implements AutoCloseable {
                 return entry.inspectedUnder();
             }
         }
-        throw new Main.Failure(ExitCode.USAGE, "--supersedes " + seq + ": record " + seq + " was already corrected;"
+        throw new JobException(JobException.Kind.CONFLICT, "supersedes", "--supersedes " + seq + ": record " + seq + " was already corrected;"
                 + " supersede its latest correction instead");
     }
 
@@ -141,7 +136,13 @@ final class Inspection implements AutoCloseable {
         return notice;
     }
 
-    Recorded record(LotDecision decision, String production, String reason) {
+    /** What the lot was inspected under, with nothing recorded. */
+    SentenceLot.Recording unrecorded() {
+        return new SentenceLot.Recording(store.location(), severity, rules.edition(), null, null, null, supersedes);
+    }
+
+    /** Appends the lot's record and says what it was inspected under and what comes next. */
+    SentenceLot.Recording record(LotDecision decision, String production, String reason) {
         int nonconforming = decision.sample().all().nonconformingUnits(DefectClass.ANY);
         RecordContent.Lot content = new RecordContent.Lot(lot.supplier(), lot.part(), decision.lot().lot(),
                 decision.lot().lotSize(), decision.lot().received(), decision.lot().inspector(),
@@ -156,45 +157,8 @@ final class Inspection implements AutoCloseable {
                 caused = entry.caused();
             }
         }
-        return new Recorded(stored, after.current(), caused);
-    }
-
-    ObjectNode json(Recorded recorded) {
-        ObjectNode node = Json.object();
-        node.put("store", store.location());
-        node.put("severityApplied", severity.label());
-        node.put("switchingRules", rules.edition());
-        node.put("recorded", recorded != null);
-        if (recorded != null) {
-            node.put("seq", recorded.record().seq());
-            node.put("recordHash", recorded.record().hash());
-            node.put("severityNext", recorded.next().label());
-            if (recorded.caused() != null) {
-                node.put("switch", recorded.caused().from().label() + " to " + recorded.caused().to().label());
-                node.put("switchReason", recorded.caused().reason());
-            }
-            if (supersedes > 0) {
-                node.put("supersedes", supersedes);
-            }
-        }
-        return node;
-    }
-
-    void printText(PrintWriter out, Recorded recorded) {
-        out.println("  inspection severity: " + severity.label() + " (" + rules.edition() + " switching rules)"
-);
-        if (recorded == null) {
-            out.println("  not recorded (--no-record)");
-            return;
-        }
-        out.println("  recorded as #" + recorded.record().seq() + " in " + store.location()
-                + (supersedes > 0 ? ", superseding #" + supersedes : ""));
-        if (recorded.caused() != null) {
-            out.println("  SWITCH: " + recorded.caused().from().label() + " to " + recorded.caused().to().label()
-                    + " inspection for the next lot: " + recorded.caused().reason());
-        } else {
-            out.println("  next lot of this part: " + recorded.next().label() + " inspection");
-        }
+        return new SentenceLot.Recording(store.location(), severity, rules.edition(), stored, after.current(), caused,
+                supersedes);
     }
 
     @Override

@@ -1,0 +1,54 @@
+package lotgate.jobs;
+
+import java.nio.file.Path;
+import lotgate.report.ChartFile;
+import lotgate.report.Percent;
+import lotgate.sampling.OcModel;
+import lotgate.sampling.RiskPoints;
+
+/** Trade checks that several jobs make on the values of their requests. */
+public final class Checks {
+    private Checks() {
+    }
+
+    /** Refuses a fraction nonconforming of 100% or more: such levels only make sense as nonconformities per unit. */
+    public static void level(OcModel model, String field, double level) {
+        if (model.countsUnits() && level >= 1) {
+            throw JobException.invalid(field, "option '" + field + "': a fraction nonconforming"
+                    + " must be below 100%, got " + Percent.level(level) + " (use --model poisson for"
+                    + " nonconformities per unit)");
+        }
+    }
+
+    /** The risk points of a plan, checked value by value; {@code missing} says what to give when a level is absent. */
+    static RiskPoints points(OcModel model, Double aql, double alpha, Double ltpd, double beta, String missing) {
+        if (aql == null || ltpd == null) {
+            throw JobException.invalid(aql == null ? "aql" : "ltpd", missing);
+        }
+        level(model, "--aql", aql);
+        level(model, "--ltpd", ltpd);
+        if (aql >= ltpd) {
+            throw JobException.invalid("aql", "--aql " + Percent.level(aql) + " must be below --ltpd "
+                    + Percent.level(ltpd));
+        }
+        if (alpha + beta >= 1) {
+            throw JobException.invalid("alpha", "--alpha plus --beta must be below 100%");
+        }
+        return new RiskPoints(aql, alpha, ltpd, beta);
+    }
+
+    /** The OC model by name (null: binomial) for a lot size (null: none); the hypergeometric model needs one. */
+    public static OcModel model(String name, Integer lotSize) {
+        if ("hypergeometric".equals(name) && lotSize == null) {
+            throw JobException.invalid("lotSize", "the hypergeometric model needs the lot size: add --lot-size N");
+        }
+        return OcModel.of(name == null ? "binomial" : name, lotSize == null ? 0 : lotSize);
+    }
+
+    /** Refuses a chart file that lotgate cannot draw to (PNG and SVG only). */
+    public static void chartName(String field, Path file) {
+        if (file != null && !ChartFile.supported(file)) {
+            throw JobException.invalid(field, "chart file " + file + " must end in .png or .svg");
+        }
+    }
+}
