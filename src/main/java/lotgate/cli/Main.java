@@ -19,7 +19,7 @@ import picocli.CommandLine.Option;
         subcommands = {DesignCommand.class, CurveCommand.class, CompareCommand.class, ShowCommand.class,
                 SentenceCommand.class, InspectCommand.class, HistoryCommand.class, SupplierCommand.class, SuppliersCommand.class,
                 VerifyCommand.class, ActionCommand.class, ImportCommand.class, FamilyCommand.class,
-                DemoCommand.class, CommandLine.HelpCommand.class},
+                DemoCommand.class, WorkbenchCommand.class, CommandLine.HelpCommand.class},
         footerHeading = "%nExit codes:%n",
         footer = {
                 "   0  done (sentencing: lot accepted)",

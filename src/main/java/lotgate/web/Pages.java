@@ -1,0 +1,180 @@
+package lotgate.web;
+
+import static lotgate.web.Html.escape;
+
+/** The workbench's pages: frames and forms written here, filled in the browser from the JSON answers. */
+final class Pages {
+    private Pages() {
+    }
+
+    private static String field(String name, String label, String value, String hint) {
+        return "<label for=\"f-" + name + "\">" + label + (hint.isEmpty() ? "" : " <span class=\"hint\">" + hint + "</span>")
+                + "</label><input type=\"text\" id=\"f-" + name + "\" name=\"" + name + "\" value=\"" + escape(value)
+                + "\" autocomplete=\"off\" spellcheck=\"false\">" + errorSlot(name);
+    }
+
+    private static String errorSlot(String name) {
+        return "<p class=\"field-error\" data-error-for=\"" + name + "\"></p>";
+    }
+
+    private static String select(String name, String label, String... options) {
+        StringBuilder out = new StringBuilder("<label for=\"f-" + name + "\">" + label + "</label><select id=\"f-" + name
+                + "\" name=\"" + name + "\">");
+        for (String option : options) {
+            int bar = option.indexOf('|');
+            String value = bar < 0 ? option : option.substring(0, bar);
+            String text = bar < 0 ? option : option.substring(bar + 1);
+            out.append("<option value=\"").append(value).append("\">").append(text).append("</option>");
+        }
+        return out.append("</select>").append(errorSlot(name)).toString();
+    }
+
+    static String design(String csrf, Workbench.Settings settings) {
+        String body = """
+                <div class="columns">
+                <section>
+                <form id="design" class="panel" autocomplete="off" novalidate>
+                <h2>What the plan must do</h2>
+                """
+                + select("scheme", "Scheme", "single|single: n and c", "double|double: two samples",
+                        "multiple|multiple: stages you give", "sequential|sequential: unit by unit (Wald)",
+                        "variables|variables: measured characteristic")
+                + "<div class=\"pair\"><div>" + field("aql", "AQL", "1%", "(good lots)") + "</div><div>"
+                + field("ltpd", "LTPD", "5%", "(bad lots)") + "</div></div>"
+                + "<div class=\"pair\"><div>" + field("alpha", "Producer's risk alpha", "5%", "") + "</div><div>"
+                + field("beta", "Consumer's risk beta", "10%", "") + "</div></div>"
+                + "<div class=\"pair\"><div>"
+                + select("model", "Model", "binomial|binomial (type B)", "hypergeometric|hypergeometric (type A)",
+                        "poisson|Poisson (defects per unit)")
+                + "</div><div>" + field("lot-size", "Lot size N", "", "(optional)") + "</div></div>"
+                + "<div class=\"pair\" data-for-scheme=\"single\"><div>" + field("acceptance", "Acceptance number c", "", "(fix it)")
+                + "</div><div>" + field("sample-size", "Sample size n", "", "(evaluate)") + "</div></div>"
+                + "<div data-for-scheme=\"multiple\" class=\"hidden\">" + field("stages", "Stages", "", "N:C:R each, e.g. 50:-:3 50:1:4 50:3")
+                + "</div>"
+                + "<div data-for-scheme=\"variables\" class=\"hidden\"><div class=\"pair\"><div>"
+                + field("lower", "Lower limit", "", "") + "</div><div>" + field("upper", "Upper limit", "", "")
+                + "</div></div>" + field("sigma", "Known sigma", "", "(leave empty when unknown)") + "</div>"
+                + "<div data-for-scheme=\"single\"><label for=\"f-classes\">Defect classes <span class=\"hint\">one a line,"
+                + " e.g. critical:c=0,aql=0.1%,ltpd=1%</span></label><textarea id=\"f-classes\" name=\"classes\""
+                + " spellcheck=\"false\"></textarea>" + errorSlot("classes") + "</div>"
+                + """
+                <p class="form-error" role="alert"></p>
+                <p class="status" id="design-status"></p>
+                </form>
+                <form id="save" class="panel" autocomplete="off" novalidate>
+                <h2>Save the plan</h2>
+                """
+                + field("name", "Plan name", "", "(letters, digits, - and _)")
+                + field("description", "Description", "", "(optional)")
+                + """
+                <label><input type="checkbox" name="replace" value="yes"> replace a saved plan of that name</label>
+                <p class="form-error" role="alert"></p>
+                <button type="submit" id="save-button">Save to the plans folder</button>
+                <p class="status" id="save-status"></p>
+                </form>
+                <section class="panel"><h2>Saved plans</h2>
+                <p class="status">In <span class="mono" id="plans-folder"></span></p>
+                <ul class="saved" id="saved"></ul></section>
+                </section>
+                <section>
+                <div class="panel" id="answer-panel"><h2>The plan</h2>
+                <div class="tiles" id="tiles"></div>
+                <pre class="answer" id="answer" aria-live="polite"></pre>
+                </div>
+                <div class="panel"><h2>Curves</h2>
+                <div class="tabs" role="tablist">
+                <button type="button" role="tab" data-curve="oc" aria-selected="true">OC: P(accept)</button>
+                <button type="button" role="tab" data-curve="aoq" aria-selected="false">AOQ</button>
+                <button type="button" role="tab" data-curve="ati" aria-selected="false">ATI</button>
+                <button type="button" role="tab" data-curve="asn" aria-selected="false">ASN</button>
+                </div>
+                <div id="curve"></div>
+                <p class="no-print"><button type="button" class="quiet" id="pin">Lay this plan on the chart</button>
+                <button type="button" class="quiet" id="unpin">Clear laid plans</button></p>
+                <ul id="pinned"></ul>
+                </div>
+                </section>
+                </div>
+                """;
+        body = body.replace("<span class=\"mono\" id=\"plans-folder\"></span>",
+                "<span class=\"mono\" id=\"plans-folder\">" + escape(settings.plans().toString()) + "</span>");
+        return Html.page("Plan design", "/", csrf, body, "chart.js", "design.js");
+    }
+
+    static String sentence(String csrf) {
+        String body = """
+                <div class="columns">
+                <section>
+                <form id="lot" class="panel" autocomplete="off" novalidate>
+                <h2>The lot</h2>
+                <label for="f-plan">Saved plan or plan family</label><select id="f-plan" name="plan"></select>
+                <p class="field-error" data-error-for="plan"></p>
+                """
+                + field("lot", "Lot", "", "(default: from the sheet)")
+                + field("supplier", "Supplier", "", "")
+                + field("part", "Part", "", "")
+                + "<div class=\"pair\"><div>" + field("lot-size", "Lot size N", "", "") + "</div><div>"
+                + field("received", "Received", "", "(2026-03-14)") + "</div></div>"
+                + field("inspector", "Inspector", "", "")
+                + """
+                <label><input type="checkbox" name="record" value="yes" checked> record the lot in the history</label>
+                <label for="f-sheet">Inspection sheet (.xlsx, .xls, .csv)</label>
+                <div class="drop" id="drop">Drop the sheet here, or
+                <input type="file" id="f-sheet" name="sheet" accept=".xlsx,.xls,.csv"></div>
+                <p class="field-error" data-error-for="sheet"></p>
+                <p class="form-error" role="alert"></p>
+                <button type="submit" id="sentence-button">Sentence the lot</button>
+                <p class="status" id="sentence-status"></p>
+                </form>
+                </section>
+                <section>
+                <div class="panel" id="verdict-panel"><h2>Verdict</h2>
+                <div id="verdict"><p class="status">Choose a plan and a sheet, then sentence the lot.</p></div>
+                </div>
+                <form class="panel" id="bench" autocomplete="off" novalidate>
+                <h2>At the bench: unit by unit</h2>
+                <p class="status">For the plan chosen above; say each unit as you inspect it.</p>
+                <div class="pair"><div><button type="button" id="unit-good">Conforming</button>
+                <button type="button" id="unit-bad" class="quiet">Nonconforming</button></div>
+                <div><label for="f-defects">or nonconformities in this unit</label>
+                <input type="number" min="0" id="f-defects" name="defects" value="0">
+                <button type="button" class="quiet" id="unit-count">Add unit</button></div></div>
+                <p class="field-error" data-error-for="units"></p>
+                <p class="form-error" role="alert"></p>
+                <div class="bench-units" id="bench-units"></div>
+                <div id="bench-state"></div>
+                <p><button type="button" class="quiet" id="unit-undo">Undo last unit</button>
+                <button type="button" class="quiet" id="unit-reset">Start again</button></p>
+                </form>
+                </section>
+                </div>
+                """;
+        return Html.page("Sentencing", "/sentence", csrf, body, "sentence.js");
+    }
+
+    static String suppliers(String csrf) {
+        String body = """
+                <div class="panel" id="store-panel"><h2>The history store</h2><div id="store"></div></div>
+                <div class="panel"><h2>Suppliers ranked</h2>
+                <p class="status" id="ranking-status"></p>
+                <div id="ranking"></div></div>
+                """;
+        return Html.page("Suppliers", "/suppliers", csrf, body, "chart.js", "suppliers.js");
+    }
+
+    static String supplier(String csrf, String name) {
+        String shown = name == null ? "" : name;
+        String body = "<div class=\"panel\" id=\"supplier-panel\" data-supplier=\"" + escape(shown) + "\"><h1 id=\"supplier-name\">"
+                + escape(shown) + "</h1><p class=\"status\" id=\"supplier-status\"></p><div id=\"supplier-facts\"></div>"
+                + "<p class=\"no-print\" id=\"downloads\"></p></div>"
+                + """
+                <div class="panel"><h2>p-chart: fraction nonconforming per lot</h2><div id="p-chart"></div></div>
+                <div class="columns-2">
+                <div class="panel"><h2>Pareto of defects</h2><div id="pareto"></div></div>
+                <div class="panel"><h2>Inspection severity</h2><div id="severity"></div></div>
+                </div>
+                <div class="panel"><h2>Rejected lots</h2><div id="rejected"></div></div>
+                """;
+        return Html.page(shown.isEmpty() ? "Supplier" : shown, "/suppliers", csrf, body, "chart.js", "suppliers.js");
+    }
+}
