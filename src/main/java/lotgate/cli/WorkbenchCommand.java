@@ -5,8 +5,6 @@ import java.io.PrintWriter;
 import java.net.InetAddress;
 import java.net.UnknownHostException;
 import java.nio.file.Path;
-import java.util.Locale;
-import java.util.concurrent.CountDownLatch;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -57,6 +55,9 @@ final class WorkbenchCommand implements Runnable {
     @Spec
     CommandSpec spec;
 
+    /** The environment variable that may set the access token for a workbench open to the network. */
+    static final String TOKEN_VARIABLE = "LOTGATE_WORKBENCH_TOKEN";
+
     @Override
     public void run() {
         if (port < 0 || port > 65535) {
@@ -71,21 +72,26 @@ final class WorkbenchCommand implements Runnable {
         String token = null;
         PrintWriter err = spec.commandLine().getErr();
         if (!host.isLoopbackAddress()) {
-            String given = System.getenv(lotgate.web.Workbench.TOKEN_VARIABLE);
+            String given = System.getenv(TOKEN_VARIABLE);
             if (given != null && !given.isBlank() && given.trim().length() < 16) {
-                throw new ParameterException(spec.commandLine(), "$" + lotgate.web.Workbench.TOKEN_VARIABLE
+                throw new ParameterException(spec.commandLine(), "$" + TOKEN_VARIABLE
                         + " must be at least 16 characters long");
             }
-            token = given != null && !given.isBlank() ? given.trim() : lotgate.web.Workbench.newToken();
+            token = given != null && !given.isBlank() ? given.trim() : null;
             err.println("lotgate: warning: the workbench listens on " + host.getHostAddress() + ", open to other"
                     + " machines; every request needs the access token, so share the address below only with the"
                     + " stations that should sentence lots and read the history");
             err.flush();
         }
-        lotgate.web.Workbench.Settings settings = new lotgate.web.Workbench.Settings(host, port, token,
-                storeOption.location(), plans.toAbsolutePath().normalize(), uploadLimit * 1024L * 1024L,
-                reports.toAbsolutePath().normalize());
-        serve(settings);
+        try {
+            lotgate.web.Serve.run(host, port, token, storeOption.location(), plans.toAbsolutePath().normalize(),
+                    reports.toAbsolutePath().normalize(), uploadLimit * 1024L * 1024L, !noBrowser,
+                    spec.commandLine().getOut(), err);
+        } catch (IOException e) {
+            throw new ParameterException(spec.commandLine(), "the workbench cannot listen on "
+                    + host.getHostAddress() + " port " + port + " (" + e.getMessage() + "); choose another --port"
+                    + " or --bind");
+        }
     }
 
     private InetAddress address() {
@@ -96,56 +102,6 @@ final class WorkbenchCommand implements Runnable {
             return InetAddress.getByName(bind.trim());
         } catch (UnknownHostException e) {
             throw new ParameterException(spec.commandLine(), "--bind " + bind + " is not an address of this machine");
-        }
-    }
-
-    private void serve(lotgate.web.Workbench.Settings settings) {
-        PrintWriter out = spec.commandLine().getOut();
-        lotgate.web.Workbench workbench;
-        try {
-            workbench = lotgate.web.Workbench.start(settings);
-        } catch (Exception e) {
-            throw new ParameterException(spec.commandLine(), "the workbench cannot listen on "
-                    + settings.host().getHostAddress() + " port " + settings.port() + " (" + e.getMessage()
-                    + "); choose another --port or --bind");
-        }
-        CountDownLatch stopped = new CountDownLatch(1);
-        Runtime.getRuntime().addShutdownHook(new Thread(() -> {
-            try {
-                workbench.close();
-            } catch (Exception e) {
-                // Stopping anyway.
-            }
-            try {
-                stopped.await();
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-            }
-        }, "workbench-stop"));
-        out.println("lotgate workbench: " + workbench.openingAddress() + " (Ctrl+C stops it)");
-        out.flush();
-        if (!noBrowser) {
-            openBrowser(workbench.openingAddress().toString());
-        }
-        try {
-            workbench.join();
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-        } finally {
-            stopped.countDown();
-        }
-    }
-
-    private void openBrowser(String address) {
-        String os = System.getProperty("os.name", "").toLowerCase(Locale.ROOT);
-        String[] command = os.contains("win") ? new String[] {"rundll32", "url.dll,FileProtocolHandler", address}
-                : os.contains("mac") ? new String[] {"open", address} : new String[] {"xdg-open", address};
-        try {
-            new ProcessBuilder(command).redirectErrorStream(true).redirectOutput(ProcessBuilder.Redirect.DISCARD).start();
-        } catch (IOException e) {
-            PrintWriter err = spec.commandLine().getErr();
-            err.println("lotgate: no browser could be opened; open " + address + " yourself");
-            err.flush();
         }
     }
 }

@@ -22,8 +22,6 @@ public final class Workbench implements AutoCloseable {
     public static final int DEFAULT_PORT = 7717;
     /** Largest inspection sheet accepted by upload, in bytes (64 MiB). */
     public static final long DEFAULT_UPLOAD_LIMIT = 64L * 1024 * 1024;
-    /** The environment variable that may set the access token for a workbench open to the network. */
-    public static final String TOKEN_VARIABLE = "LOTGATE_WORKBENCH_TOKEN";
 
     static {
         // Jetty logs through SLF4J; lotgate has no log, so keep SLF4J from warning that none is bound.

@@ -20,8 +20,12 @@ public final class BenchmarkMain {
     private BenchmarkMain() {
     }
 
-    public static void main(String[] args) throws RunnerException {
+    public static void main(String[] args) throws Exception {
         String include = args.length > 0 ? args[0] : "lotgate.bench.*Benchmark";
+        if (include.equals("WorkbenchLoad")) {
+            WorkbenchLoad.run();
+            return;
+        }
         ChainedOptionsBuilder options = new OptionsBuilder().include(include);
         if (include.contains("DesignBenchmark") || include.contains("StagedBenchmark") || include.endsWith("*Benchmark")) {
             // Design cases take milliseconds: short timed iterations. The sentencing benchmark sets its own.
@@ -91,6 +95,11 @@ public final class BenchmarkMain {
             System.out.printf("%-44s %12.0f%n", "lotgate sentence (whole command)", sentence);
             System.out.printf("%-44s %12.0f%n", "bare POI SAX pass counting cells", bare);
             System.out.printf("%-44s %12.2f   (target: at most 1.30)%n", "ratio sentence / bare pass", sentence / bare);
+        }
+        if (args.length == 0) {
+            // The workbench's bounded load test on loopback runs after the JMH benchmarks.
+            System.out.println();
+            WorkbenchLoad.run();
         }
     }
 }
