@@ -131,30 +131,34 @@ public record OperatingCharacteristic(Plan plan, OcModel model, int lotSize) {
             }
         }
         // Golden-section refinement in the bracket around the best grid point (AOQ is unimodal there).
-        double low = top * Math.max(0, bestIndex - 1) / steps;
-        double high = top * Math.min(steps, bestIndex + 1) / steps;
+        double at = goldenMaximum(this::aoq, top * Math.max(0, bestIndex - 1) / steps,
+                top * Math.min(steps, bestIndex + 1) / steps, 1e-13);
+        return new Aoql(at, aoq(at));
+    }
+
+    /** Where a function with one peak in [low, high] is largest, by golden-section search to a relative tolerance. */
+    static double goldenMaximum(java.util.function.DoubleUnaryOperator f, double low, double high, double tolerance) {
         double ratio = (Math.sqrt(5) - 1) / 2;
         double x1 = high - ratio * (high - low);
         double x2 = low + ratio * (high - low);
-        double f1 = aoq(x1);
-        double f2 = aoq(x2);
-        while (high - low > 1e-13 * high) {
+        double f1 = f.applyAsDouble(x1);
+        double f2 = f.applyAsDouble(x2);
+        while (high - low > tolerance * high) {
             if (f1 < f2) {
                 low = x1;
                 x1 = x2;
                 f1 = f2;
                 x2 = low + ratio * (high - low);
-                f2 = aoq(x2);
+                f2 = f.applyAsDouble(x2);
             } else {
                 high = x2;
                 x2 = x1;
                 f2 = f1;
                 x1 = high - ratio * (high - low);
-                f1 = aoq(x1);
+                f1 = f.applyAsDouble(x1);
             }
         }
-        double at = 0.5 * (low + high);
-        return new Aoql(at, aoq(at));
+        return 0.5 * (low + high);
     }
 
     private Aoql integerAoql(OcModel.Hypergeometric h, int topDefectives) {
