@@ -34,26 +34,32 @@ final class ActionCommand implements Runnable {
     LocalDate date;
 
     @Mixin
-    StoreOption storeOption;
+    RecordingStoreOption storeOption;
 
     @Spec
     CommandSpec spec;
 
     @Override
     public void run() {
+        for (String[] id : new String[][] {{"--supplier", supplier}, {"--part", part}}) {
+            String problem = lotgate.history.Identifiers.problem(id[0], id[1]);
+            if (problem != null) {
+                throw new ParameterException(spec.commandLine(), problem);
+            }
+        }
         if (reason.isBlank()) {
             throw new ParameterException(spec.commandLine(), "--reason must say what the supplier did");
         }
         StoredRecord record;
         String location;
-        try (HistoryStore store = storeOption.open()) {
+        try (HistoryStore store = storeOption.openForRecording()) {
             record = store.append(RecordContent.action(supplier, part, reason.trim(), date == null ? LocalDate.now() : date),
                     Instant.now().truncatedTo(ChronoUnit.MILLIS));
             location = store.location();
         }
         PrintWriter out = spec.commandLine().getOut();
         out.println("Corrective action for " + supplier + ", part " + part + " recorded as #" + record.seq() + " in "
-                + location + ".");
+                + location + " (chain hash " + record.hash() + ").");
         out.flush();
     }
 }

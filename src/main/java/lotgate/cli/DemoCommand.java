@@ -86,7 +86,7 @@ final class DemoCommand implements Runnable {
         }
         step(out, "7. The quality engineer loads last year's receiving records (49 invented lots) into a fresh"
                         + " history store:",
-                "import", sheets + "/lots-2025.csv", "--store", store);
+                "import", sheets + "/lots-2025.csv", "--store", store, "--create-store");
         step(out, "8. For Arnwick's bolts, a tightened and a reduced plan join the normal one as a plan family:",
                 "design", "--aql", "0.65%", "--ltpd", "4%", "--lot-size", "5000",
                 "--save", plans + "/arnwick-af-m8-40-tightened.json", "--replace", "--format", "csv");

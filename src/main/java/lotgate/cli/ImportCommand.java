@@ -45,7 +45,7 @@ final class ImportCommand implements Runnable {
     String sheet;
 
     @Mixin
-    StoreOption storeOption;
+    RecordingStoreOption storeOption;
 
     @Spec
     CommandSpec spec;
@@ -60,6 +60,8 @@ final class ImportCommand implements Runnable {
         SheetSource source = SheetSource.open(file);
         String sheetName = sheet != null ? sheet : source.sheetNames().get(0);
         List<RecordContent.Lot> lots = new ArrayList<>();
+        List<Integer> sheetRows = new ArrayList<>();
+        Map<List<String>, Integer> seen = new HashMap<>();
         Map<String, Integer> columns = new HashMap<>();
         source.read(sheet, (row, cells) -> {
             if (columns.isEmpty()) {
@@ -78,14 +80,31 @@ final class ImportCommand implements Runnable {
                 }
                 return;
             }
-            lots.add(lot(source, sheetName, row, cells, columns));
+            RecordContent.Lot lot = lot(source, sheetName, row, cells, columns);
+            Integer first = seen.putIfAbsent(List.of(lot.supplier(), lot.part(), lot.lot()), row);
+            if (first != null) {
+                throw new SheetException(file, source.whereRow(sheetName, row) + ": lot " + lot.lot() + " of "
+                        + lot.supplier() + ", part " + lot.part() + " is listed twice (first " + source.whereRow(
+                        sheetName, first) + "); a lot is recorded once (nothing was imported)");
+            }
+            lots.add(lot);
+            sheetRows.add(row);
         });
         if (lots.isEmpty()) {
             throw new SheetException(file, "no lots to import below the header");
         }
         int written;
         String location;
-        try (HistoryStore store = storeOption.open()) {
+        try (HistoryStore store = storeOption.openForRecording()) {
+            for (int i = 0; i < lots.size(); i++) {
+                RecordContent.Lot lot = lots.get(i);
+                long existing = store.currentRecord(lot.supplier(), lot.part(), lot.lot());
+                if (existing > 0) {
+                    throw new SheetException(file, source.whereRow(sheetName, sheetRows.get(i)) + ": lot " + lot.lot()
+                            + " of " + lot.supplier() + ", part " + lot.part() + " is already recorded as #" + existing
+                            + " in " + store.location() + " (nothing was imported)");
+                }
+            }
             List<ObjectNode> contents = withSeverities(store, lots);
             written = store.appendAll(contents, Instant.now().truncatedTo(ChronoUnit.MILLIS)).size();
             location = store.location();
@@ -179,6 +198,13 @@ final class ImportCommand implements Runnable {
             throw bad.apply("production", "production '" + productionCell.text() + "' is neither steady nor irregular");
         }
         Cell inspector = cell.apply("inspector");
+        for (String name : new String[] {"lot", "supplier", "part", "inspector"}) {
+            String problem = cell.apply(name) == null ? null
+                    : lotgate.history.Identifiers.problem(name, cell.apply(name).text().trim());
+            if (problem != null) {
+                throw bad.apply(name, problem);
+            }
+        }
         return new RecordContent.Lot(cell.apply("supplier").text().trim(), cell.apply("part").text().trim(),
                 cell.apply("lot").text().trim(), lotSize, received, inspector == null ? null : inspector.text().trim(),
                 verdict, inspected, found, defects, null, production, 0, null);

@@ -25,7 +25,7 @@ import picocli.CommandLine.Option;
                 "   0  done (sentencing: lot accepted)",
                 "   1  lot rejected",
                 "   2  bad option or value",
-                "   3  input file missing, unreadable or invalid",
+                "   3  input file missing, unreadable or invalid; history store missing",
                 "   4  incomplete sample",
                 "   5  no sampling plan meets the request",
                 "   6  an output file cannot be written",
@@ -60,9 +60,12 @@ public final class Main implements Runnable {
     /** Runs lotgate with the given streams and returns its exit code. */
     public static int run(PrintWriter out, PrintWriter err, String... args) {
         CommandLine cli = commandLine();
-        cli.setOut(out);
-        cli.setErr(err);
-        return cli.execute(args);
+        cli.setOut(new PrintWriter(new EscapingWriter(out), true));
+        cli.setErr(new PrintWriter(new EscapingWriter(err), true));
+        int code = cli.execute(args);
+        cli.getOut().flush();
+        cli.getErr().flush();
+        return code;
     }
 
     static CommandLine commandLine() {
@@ -84,7 +87,8 @@ public final class Main implements Runnable {
                             + String.join(", ", cli.getSubcommands().keySet())
                     : "unknown option or extra argument '" + first + "'";
         }
-        err.println("lotgate: " + message + " (see '" + cli.getCommandSpec().qualifiedName() + " --help')");
+        err.println("lotgate: " + lotgate.history.Identifiers.escape(lotgate.history.StoreLocation.masked(message))
+                + " (see '" + cli.getCommandSpec().qualifiedName() + " --help')");
         if (debugRequested(args)) {
             e.printStackTrace(err);
         }
@@ -102,6 +106,13 @@ public final class Main implements Runnable {
         } else if (e instanceof OutputFileException) {
             code = ExitCode.CANNOT_WRITE;
             message = e.getMessage();
+        } else if (e instanceof lotgate.history.StoreException.Missing) {
+            code = ExitCode.BAD_INPUT;
+            message = e.getMessage();
+        } else if (e instanceof lotgate.history.StoreException.DuplicateLot duplicate) {
+            code = ExitCode.USAGE;
+            message = e.getMessage() + "; to correct that record, sentence again with --supersedes "
+                    + duplicate.existing() + " --reason TEXT";
         } else if (e instanceof lotgate.history.StoreException) {
             code = ExitCode.STORE;
             message = e.getMessage();
@@ -114,10 +125,11 @@ public final class Main implements Runnable {
             message = f.getMessage();
         } else {
             code = ExitCode.INTERNAL;
-            message = "internal fault: " + e + " (rerun with --debug and report it)";
+            message = "internal fault: " + lotgate.history.StoreLocation.masked(String.valueOf(e))
+                    + " (rerun with --debug and report it)";
         }
         if (message != null) {
-            err.println("lotgate: " + message);
+            err.println("lotgate: " + lotgate.history.Identifiers.escape(lotgate.history.StoreLocation.masked(message)));
         }
         if (debugRequested(parsed.originalArgs().toArray(String[]::new))) {
             e.printStackTrace(err);

@@ -112,7 +112,7 @@ final class SentenceCommand implements Runnable {
     String production;
 
     @Mixin
-    StoreOption storeOption;
+    RecordingStoreOption storeOption;
 
     @Option(names = "--chart", paramLabel = "FILE",
             description = "Draw the sampling chart: the count found against units inspected, with the plan's"
@@ -133,6 +133,9 @@ final class SentenceCommand implements Runnable {
     @Override
     public void run() {
         int[] range = rowRange();
+        if (!noRecord) {
+            storeOption.prepareForRecording();
+        }
         SentenceLot.Result result = SentenceLot.run(new SentenceLot.Request(planFile, sheetFile, sheet, columns(),
                 range[0], range[1], givenDetails(), lotFile, confidence, !noRecord, supersedes, reason, production,
                 storeOption.location(), new SentenceLot.Outputs(record, chart, reports)));
@@ -172,6 +175,13 @@ final class SentenceCommand implements Runnable {
             } catch (DateTimeParseException e) {
                 throw new ParameterException(spec.commandLine(), "--received " + received + ": give a date such as"
                         + " 2026-03-14");
+            }
+        }
+        String[][] ids = {{"--lot", lotId}, {"--supplier", supplier}, {"--part", part}, {"--inspector", inspector}};
+        for (String[] id : ids) {
+            String problem = lotgate.history.Identifiers.problem(id[0], id[1]);
+            if (problem != null) {
+                throw new ParameterException(spec.commandLine(), problem);
             }
         }
         return new LotDetails(blankToNull(lotId), blankToNull(supplier), blankToNull(part),

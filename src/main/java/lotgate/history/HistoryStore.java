@@ -1,8 +1,10 @@
 package lotgate.history;
 
+import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.security.MessageDigest;
 import java.sql.Connection;
 import java.sql.DriverManager;
 import java.sql.PreparedStatement;
@@ -12,78 +14,128 @@ import java.sql.Statement;
 import java.time.Instant;
 import java.time.LocalDate;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Properties;
+import java.util.TreeMap;
 import lotgate.files.CanonicalJson;
 
 /**
  * The lot history: an append-only chain of records in an embedded SQLite file or a shared
  * PostgreSQL database. Each record carries the hash of its content chained to the record before;
- * every write is one transaction, and appends are serialised so that the chain never forks.
+ * every write is one transaction, appends are serialised so that the chain never forks, and the
+ * database itself holds each lot to one current record.
  */
 public final class HistoryStore implements AutoCloseable {
     /** The schema version this lotgate writes; older stores are migrated when opened. */
-    public static final int SCHEMA_VERSION = 2;
+    public static final int SCHEMA_VERSION = 3;
     static final String GENESIS = "0".repeat(64);
 
-    private final String location;
+    private final StoreLocation location;
     private final Connection connection;
     private final boolean postgres;
     /** The schema version after migration, which decides the columns a record is written with. */
     private int version;
+    /** Whether this opening created the store. */
+    private boolean created;
+    private String storeId;
+    private Instant idRecordedAt;
+    /** The hash the first record links to: derived from the store's id, or zeros for a store older than its id. */
+    private String genesis = GENESIS;
 
-    private HistoryStore(String location, Connection connection, boolean postgres) {
+    private HistoryStore(StoreLocation location, Connection connection) {
         this.location = location;
         this.connection = connection;
-        this.postgres = postgres;
+        this.postgres = location.postgres();
     }
 
-    /** The store a user names: a JDBC URL (jdbc:sqlite:, jdbc:postgresql:) or the path of a SQLite file. */
+    /** A place in the chain: a record's sequence number and its chain hash ("SEQ:HASH" as text). */
+    public record Head(long seq, String hash) {
+        /** Reads "SEQ:HASH" as verify prints it. */
+        public static Head parse(String text) {
+            int colon = text.indexOf(':');
+            if (colon < 1) {
+                throw new IllegalArgumentException("'" + Identifiers.escape(text) + "' is not SEQ:HASH, as verify"
+                        + " prints the head (e.g. 12:3f9a...)");
+            }
+            long seq;
+            try {
+                seq = Long.parseLong(text.substring(0, colon).trim().replace("#", ""));
+            } catch (NumberFormatException e) {
+                seq = -1;
+            }
+            String hash = text.substring(colon + 1).trim().toLowerCase(java.util.Locale.ROOT);
+            if (seq < 0 || !hash.matches("[0-9a-f]{64}")) {
+                throw new IllegalArgumentException("'" + Identifiers.escape(text) + "' is not SEQ:HASH with a"
+                        + " record number and the 64 hexadecimal digits of its chain hash");
+            }
+            return new Head(seq, hash);
+        }
+
+        @Override
+        public String toString() {
+            return seq + ":" + hash;
+        }
+    }
+
+    /** The store a user names: a JDBC URL (jdbc:sqlite:, jdbc:postgresql:) or the path of a SQLite file; created if missing. */
     public static HistoryStore open(String location) {
-        return open(location, SCHEMA_VERSION);
+        return open(location, true);
+    }
+
+    /**
+     * Opens a store; one that does not exist yet is created only when {@code mayCreate}, else refused
+     * with {@link StoreException.Missing}. A store held in memory is always refused.
+     */
+    public static HistoryStore open(String location, boolean mayCreate) {
+        return open(location, mayCreate, SCHEMA_VERSION, System.getenv());
     }
 
     /** Opens a store and migrates it to the given schema version (tests build older stores with this). */
     static HistoryStore open(String location, int targetVersion) {
-        boolean postgres = location.startsWith("jdbc:postgresql:");
-        String url;
-        if (postgres || location.startsWith("jdbc:sqlite:")) {
-            url = location;
-        } else if (location.startsWith("jdbc:")) {
-            throw new StoreException("store " + location + ": lotgate stores history in SQLite (a file path or"
-                    + " jdbc:sqlite:) or PostgreSQL (jdbc:postgresql:)");
-        } else {
-            Path file = Path.of(location).toAbsolutePath();
-            try {
-                Files.createDirectories(file.getParent());
-            } catch (java.io.IOException e) {
-                throw new StoreException("store " + location + ": cannot create its folder (" + e.getMessage() + ")", e);
+        return open(location, true, targetVersion, System.getenv());
+    }
+
+    static HistoryStore open(String given, boolean mayCreate, int targetVersion, Map<String, String> environment) {
+        StoreLocation location = StoreLocation.of(given);
+        if (!location.postgres()) {
+            Path file = location.file();
+            if (!Files.exists(file)) {
+                if (!mayCreate) {
+                    throw new StoreException.Missing("history store " + location.shown() + " does not exist");
+                }
+                try {
+                    Files.createDirectories(file.getParent());
+                } catch (java.io.IOException e) {
+                    throw new StoreException("store " + location.shown() + ": cannot create its folder ("
+                            + e.getMessage() + ")", e);
+                }
             }
-            url = "jdbc:sqlite:" + file;
         }
         Connection connection;
         try {
-            if (postgres) {
-                connection = DriverManager.getConnection(url);
+            if (location.postgres()) {
+                connection = DriverManager.getConnection(location.url(), location.postgresProperties(environment));
             } else {
                 Properties properties = new Properties();
                 properties.setProperty("journal_mode", "WAL");
                 properties.setProperty("synchronous", "FULL");
                 properties.setProperty("busy_timeout", "60000");
                 properties.setProperty("foreign_keys", "true");
-                connection = DriverManager.getConnection(url, properties);
+                connection = DriverManager.getConnection(location.url(), properties);
             }
             // SQLite: lotgate begins each transaction itself (the driver would otherwise begin the next one at
             // once after every commit and, for writes, hold the lock for as long as the connection is open).
-            connection.setAutoCommit(!postgres);
+            connection.setAutoCommit(!location.postgres());
         } catch (SQLException e) {
-            throw new StoreException("cannot open the history store " + location + " (" + firstLine(e) + ")", e);
+            throw new StoreException("cannot open the history store " + location.shown() + " ("
+                    + location.scrub(firstLine(e)) + ")", null);
         }
-        HistoryStore store = new HistoryStore(location, connection, postgres);
+        HistoryStore store = new HistoryStore(location, connection);
         try {
-            store.migrate(targetVersion);
+            store.migrate(targetVersion, mayCreate);
         } catch (RuntimeException e) {
             store.close();
             throw e;
@@ -96,12 +148,28 @@ public final class HistoryStore implements AutoCloseable {
         return message.lines().findFirst().orElse(message);
     }
 
+    /** The store's location as shown to people (a password in it masked). */
     public String location() {
-        return location;
+        return location.shown();
     }
 
     public boolean isPostgres() {
         return postgres;
+    }
+
+    /** Whether opening the store created it. */
+    public boolean created() {
+        return created;
+    }
+
+    /** The random id the store recorded when it was created (or, for an older store, when it was migrated). */
+    public String storeId() {
+        return storeId;
+    }
+
+    /** When the store recorded its id. */
+    public Instant idRecordedAt() {
+        return idRecordedAt;
     }
 
     @Override
@@ -157,29 +225,35 @@ public final class HistoryStore implements AutoCloseable {
             if (e instanceof StoreException store) {
                 throw store;
             }
-            throw new StoreException("history store " + location + ": cannot " + what + " (" + firstLine(e) + ")", e);
+            // The driver's exception is not chained: its message may quote the URL with its password.
+            throw new StoreException("history store " + location.shown() + ": cannot " + what + " ("
+                    + location.scrub(firstLine(e)) + ")", null);
         }
     }
 
     // ---- schema and migrations ----
 
-    private void migrate(int targetVersion) {
+    private void migrate(int targetVersion, boolean mayCreate) {
         transaction("migrate the schema", () -> {
             try (Statement statement = connection.createStatement()) {
                 if (postgres) {
                     statement.execute("SELECT pg_advisory_xact_lock(2859)");
                 }
-                statement.execute("CREATE TABLE IF NOT EXISTS lotgate_schema (version INTEGER NOT NULL)");
+            }
+            boolean exists = tableExists("lotgate_schema");
+            if (!exists && !mayCreate) {
+                throw new StoreException.Missing("history store " + location.shown() + " does not exist (it holds"
+                        + " no lotgate history)");
+            }
+            if (!exists) {
+                execute("CREATE TABLE lotgate_schema (version INTEGER NOT NULL)");
+                execute("INSERT INTO lotgate_schema (version) VALUES (0)");
+                created = true;
             }
             int version = schemaVersion();
             if (version > SCHEMA_VERSION) {
-                throw new StoreException("history store " + location + " has schema version " + version
+                throw new StoreException("history store " + location.shown() + " has schema version " + version
                         + ", newer than this lotgate reads (" + SCHEMA_VERSION + "); use a newer lotgate");
-            }
-            if (version == 0) {
-                try (Statement statement = connection.createStatement()) {
-                    statement.execute("INSERT INTO lotgate_schema (version) VALUES (0)");
-                }
             }
             for (int next = version + 1; next <= targetVersion; next++) {
                 Migrations.apply(next, connection, postgres);
@@ -189,8 +263,29 @@ public final class HistoryStore implements AutoCloseable {
                 }
             }
             this.version = Math.max(version, targetVersion);
+            if (this.version >= 3) {
+                try (Statement statement = connection.createStatement();
+                        ResultSet identity = statement.executeQuery("SELECT id, recorded_at, genesis FROM lotgate_store")) {
+                    if (identity.next()) {
+                        storeId = identity.getString(1);
+                        idRecordedAt = Instant.parse(identity.getString(2));
+                        genesis = identity.getString(3);
+                    }
+                }
+            }
             return null;
         });
+    }
+
+    private boolean tableExists(String table) throws SQLException {
+        String sql = postgres ? "SELECT to_regclass(?) IS NOT NULL"
+                : "SELECT COUNT(*) > 0 FROM sqlite_master WHERE type = 'table' AND name = ?";
+        try (PreparedStatement query = connection.prepareStatement(sql)) {
+            query.setString(1, table);
+            try (ResultSet result = query.executeQuery()) {
+                return result.next() && result.getBoolean(1);
+            }
+        }
     }
 
     /** The store's schema version (0 for a new store). */
@@ -199,11 +294,35 @@ public final class HistoryStore implements AutoCloseable {
                 ResultSet rows = statement.executeQuery("SELECT version FROM lotgate_schema")) {
             return rows.next() ? rows.getInt(1) : 0;
         } catch (SQLException e) {
-            throw new StoreException("history store " + location + ": cannot read the schema version", e);
+            throw new StoreException("history store " + location.shown() + ": cannot read the schema version", null);
         }
     }
 
+    /** The hash a new store's first record links to: derived from its id, so that the id cannot be swapped. */
+    static String genesisOf(String storeId) {
+        return CanonicalJson.sha256("lotgate history store\n" + storeId);
+    }
+
+    /** The key that holds a lot to one current record: the hash of its supplier, part and lot id. */
+    static String lotKey(String supplier, String part, String lot) {
+        com.fasterxml.jackson.databind.node.ArrayNode key = com.fasterxml.jackson.databind.node.JsonNodeFactory.instance
+                .arrayNode().add(supplier).add(part).add(lot);
+        return CanonicalJson.sha256(CanonicalJson.text(key));
+    }
+
     // ---- writing ----
+
+    /** The lot key taken by another record: the transaction is rolled back, then the holder is looked up. */
+    private static final class KeyTaken extends StoreException {
+        final String key;
+        final JsonNode content;
+
+        KeyTaken(String key, JsonNode content) {
+            super("lot already recorded");
+            this.key = key;
+            this.content = content;
+        }
+    }
 
     /**
      * Appends a record in one transaction, chained to the last one.
@@ -214,35 +333,164 @@ public final class HistoryStore implements AutoCloseable {
         return appendAll(List.of(content), recordedAt).get(0);
     }
 
-    /** Appends several records in one transaction: all of them, or none. */
+    /**
+     * Appends several records in one transaction: all of them, or none. Refuses, recording nothing, when
+     * the chain's head no longer matches its last record (the store was damaged: see {@link #verify}), when
+     * an id holds a control character, and when a lot is already recorded and not superseded.
+     */
     public List<StoredRecord> appendAll(List<ObjectNode> contents, Instant recordedAt) {
-        return transaction("record the lots", () -> {
-            long last;
-            String previous;
-            try (Statement statement = connection.createStatement();
-                    ResultSet head = statement.executeQuery("SELECT seq, hash FROM chain_head WHERE id = 1"
-                            + (postgres ? " FOR UPDATE" : ""))) {
-                head.next();
-                last = head.getLong(1);
-                previous = head.getString(2);
+        for (ObjectNode content : contents) {
+            for (String field : new String[] {"supplier", "part", "lot", "inspector"}) {
+                String problem = Identifiers.problem(field, Migrations.text(content, field));
+                if (problem != null) {
+                    throw new StoreException("history store " + location.shown() + ": " + problem
+                            + " (nothing was recorded)");
+                }
             }
-            List<StoredRecord> stored = new ArrayList<>();
-            for (ObjectNode content : contents) {
-                String text = CanonicalJson.text(content);
-                long seq = ++last;
-                String hash = StoredRecord.hashOf(previous, seq, recordedAt, text);
-                Migrations.insertRecord(connection, version, seq, recordedAt, text, content, previous, hash);
-                stored.add(new StoredRecord(seq, recordedAt, text, previous, hash));
-                previous = hash;
+        }
+        try {
+            return transaction("record the lots", () -> {
+                Head head = lockedHead();
+                String damage = headProblem(head);
+                if (damage != null) {
+                    throw new StoreException("history store " + location.shown() + " is damaged: " + damage
+                            + "; nothing was recorded. Run 'lotgate verify --store " + location.shown() + "' to find"
+                            + " the damage");
+                }
+                long last = head.seq();
+                String previous = head.hash();
+                List<StoredRecord> stored = new ArrayList<>();
+                for (ObjectNode content : contents) {
+                    String text = CanonicalJson.text(content);
+                    long seq = ++last;
+                    String hash = StoredRecord.hashOf(previous, seq, recordedAt, text);
+                    String key = null;
+                    if (version >= 3 && "lot".equals(Migrations.text(content, "kind"))) {
+                        key = lotKey(Migrations.text(content, "supplier"), Migrations.text(content, "part"),
+                                Migrations.text(content, "lot"));
+                        long supersedes = content.path("supersedes").asLong(0);
+                        if (supersedes > 0) {
+                            release(supersedes);
+                        }
+                    }
+                    try {
+                        Migrations.insertRecord(connection, version, seq, recordedAt, text, content, previous, hash, key);
+                    } catch (SQLException e) {
+                        if (key != null && uniqueViolation(e)) {
+                            throw new KeyTaken(key, content);
+                        }
+                        throw e;
+                    }
+                    stored.add(new StoredRecord(seq, recordedAt, text, previous, hash));
+                    previous = hash;
+                }
+                try (PreparedStatement update = connection.prepareStatement("UPDATE chain_head SET seq = ?, hash = ?"
+                        + " WHERE id = 1")) {
+                    update.setLong(1, last);
+                    update.setString(2, previous);
+                    update.executeUpdate();
+                }
+                return stored;
+            });
+        } catch (KeyTaken taken) {
+            long holder = holderOf(taken.key);
+            throw new StoreException.DuplicateLot("lot " + Migrations.text(taken.content, "lot") + " of "
+                    + Migrations.text(taken.content, "supplier") + ", part " + Migrations.text(taken.content, "part")
+                    + " is already recorded as #" + holder + " in " + location.shown() + " (nothing was recorded)",
+                    holder);
+        }
+    }
+
+    private boolean uniqueViolation(SQLException e) {
+        if (postgres) {
+            return "23505".equals(e.getSQLState());
+        }
+        // SQLITE_CONSTRAINT_UNIQUE is 2067; the driver reports the primary code 19 with the name in its message.
+        return e.getErrorCode() == 19 || e.getErrorCode() == 2067 || String.valueOf(e.getMessage())
+                .contains("UNIQUE constraint failed: lot_record.lot_key");
+    }
+
+    /** The record that holds a lot key now, or 0. */
+    private long holderOf(String key) {
+        return read("find the lot's record", () -> {
+            try (PreparedStatement query = connection.prepareStatement("SELECT seq FROM lot_record WHERE lot_key = ?")) {
+                query.setString(1, key);
+                try (ResultSet result = query.executeQuery()) {
+                    return result.next() ? result.getLong(1) : 0L;
+                }
             }
-            try (PreparedStatement update = connection.prepareStatement("UPDATE chain_head SET seq = ?, hash = ?"
-                    + " WHERE id = 1")) {
-                update.setLong(1, last);
-                update.setString(2, previous);
-                update.executeUpdate();
-            }
-            return stored;
         });
+    }
+
+    /** A correction takes over its lot: the record it supersedes gives up the lot's key. */
+    private void release(long superseded) throws SQLException {
+        try (PreparedStatement update = connection.prepareStatement("UPDATE lot_record SET lot_key = NULL"
+                + " WHERE seq = ? AND lot_key IS NOT NULL")) {
+            update.setLong(1, superseded);
+            if (update.executeUpdate() != 1) {
+                throw new StoreException("history store " + location.shown() + ": record " + superseded + " is not"
+                        + " the current record of a lot (it was already corrected, or is not a lot); supersede its"
+                        + " latest correction instead (nothing was recorded)");
+            }
+        }
+    }
+
+    /** The chain head, locked for this transaction. */
+    private Head lockedHead() throws SQLException {
+        try (Statement statement = connection.createStatement();
+                ResultSet head = statement.executeQuery("SELECT seq, hash FROM chain_head WHERE id = 1"
+                        + (postgres ? " FOR UPDATE" : ""))) {
+            if (!head.next()) {
+                return null;
+            }
+            return new Head(head.getLong(1), head.getString(2));
+        }
+    }
+
+    /**
+     * What is wrong at the end of the chain, or null: in constant time, the head must name the last record,
+     * whose hash (recomputed from its content) and columns must match; no record may follow it.
+     */
+    private String headProblem(Head head) throws SQLException {
+        if (head == null) {
+            return "its chain head is missing";
+        }
+        try (PreparedStatement after = connection.prepareStatement("SELECT seq FROM lot_record WHERE seq > ?"
+                + " ORDER BY seq LIMIT 1")) {
+            after.setLong(1, head.seq());
+            try (ResultSet result = after.executeQuery()) {
+                if (result.next()) {
+                    return "record " + result.getLong(1) + " follows the chain head (record " + head.seq() + ")";
+                }
+            }
+        }
+        if (head.seq() == 0) {
+            return head.hash().equals(genesis) ? null : "the chain head no longer matches the store's start";
+        }
+        try (PreparedStatement query = connection.prepareStatement("SELECT " + Migrations.columns(version)
+                + " FROM lot_record WHERE seq = ?")) {
+            query.setLong(1, head.seq());
+            try (ResultSet row = query.executeQuery()) {
+                if (!row.next()) {
+                    return "the last record " + head.seq() + ", named by the chain head, is missing";
+                }
+                String content = row.getString(3);
+                String hash = StoredRecord.hashOf(row.getString(4), head.seq(), Instant.parse(row.getString(2)),
+                        content);
+                if (!hash.equals(row.getString(5)) || !hash.equals(head.hash())) {
+                    return "the last record " + head.seq() + " no longer matches its hash or the chain head";
+                }
+                String mismatch = Migrations.columnsMismatch(row, version, json(head.seq(), content));
+                if (mismatch != null) {
+                    return "column " + mismatch + " of the last record " + head.seq() + " no longer matches its content";
+                }
+            }
+        }
+        return null;
+    }
+
+    private static JsonNode json(long seq, String content) {
+        return new StoredRecord(seq, null, content, null, null).json();
     }
 
     // ---- reading ----
@@ -321,6 +569,14 @@ public final class HistoryStore implements AutoCloseable {
         });
     }
 
+    /** The record that holds a lot now (its latest correction, or the lot's only record), or 0 if none. */
+    public long currentRecord(String supplier, String part, String lot) {
+        if (version < 3) {
+            return 0;
+        }
+        return holderOf(lotKey(supplier, part, lot));
+    }
+
     /** The full content of one record. */
     public StoredRecord record(long seq) {
         return read("read record " + seq, () -> {
@@ -389,60 +645,161 @@ public final class HistoryStore implements AutoCloseable {
 
     // ---- verification ----
 
-    /** The outcome of checking the whole chain: intact, or the first record that was altered or removed. */
-    public record Verification(boolean intact, long records, String problem) {
+    /**
+     * The outcome of checking the whole store: intact, or the first record that was altered or removed.
+     *
+     * @param records the records checked and found intact (all of them when intact)
+     * @param head    the last record's place and hash, to keep elsewhere (null when damaged)
+     * @param storeId the store's random id
+     */
+    public record Verification(boolean intact, long records, String problem, Head head, String storeId) {
     }
 
-    /** Recomputes every hash and link, and checks that the extracted columns still match the content. */
+    /** Checks the whole store (see {@link #verify(List)}) with no kept heads. */
     public Verification verify() {
+        return verify(List.of());
+    }
+
+    /**
+     * Recomputes every hash and link; checks every column that queries read and every defect-count row
+     * against each record's content, the lot keys against the records' order, the chain head against the
+     * last record, and that each kept head (a place and hash copied from an earlier output) is still in
+     * the chain: a store cut short, replaced or rewritten after the head was kept fails here.
+     */
+    public Verification verify(List<Head> kept) {
         return read("verify the chain", () -> {
+            if (version >= 3 && !genesis.equals(GENESIS) && !genesis.equals(genesisOf(storeId))) {
+                return new Verification(false, 0, "the store's id no longer matches the start of its chain",
+                        null, storeId);
+            }
+            Map<Long, List<String>> defects = defectRows();
+            Map<String, Long> keyHolder = new HashMap<>();
+            Map<Long, String> heldKey = new HashMap<>();
+            Map<Long, String> storedKeys = new TreeMap<>();
             long expected = 1;
-            String previous = GENESIS;
+            String previous = version >= 3 ? genesis : GENESIS;
             try (Statement statement = connection.createStatement();
-                    ResultSet result = statement.executeQuery("SELECT seq, recorded_at, content, previous_hash, hash,"
-                            + " kind, supplier, part, lot, verdict, inspected, nonconforming, supersedes"
+                    ResultSet result = statement.executeQuery("SELECT " + Migrations.columns(version)
                             + " FROM lot_record ORDER BY seq")) {
                 while (result.next()) {
                     long seq = result.getLong(1);
                     if (seq != expected) {
-                        return new Verification(false, expected - 1, seq > expected
+                        return damaged(expected - 1, seq > expected
                                 ? "record " + expected + (seq == expected + 1 ? " was" : " to " + (seq - 1) + " were")
                                         + " removed (the chain goes on at record " + seq + ")"
                                 : "record " + seq + " appears twice");
                     }
                     String content = result.getString(3);
                     if (!previous.equals(result.getString(4))) {
-                        return new Verification(false, seq - 1, "record " + seq + " no longer links to record "
-                                + (seq - 1) + ": a record before it was altered or replaced");
+                        return damaged(seq - 1, "record " + seq + " no longer links to "
+                                + (seq == 1 ? "the start of the store's chain" : "record " + (seq - 1))
+                                + ": a record before it was altered or replaced");
                     }
                     String hash = StoredRecord.hashOf(previous, seq, Instant.parse(result.getString(2)), content);
                     if (!hash.equals(result.getString(5))) {
-                        return new Verification(false, seq - 1, "record " + seq + " was altered: its content no"
-                                + " longer matches its hash");
+                        return damaged(seq - 1, "record " + seq + " was altered: its content no longer matches its"
+                                + " hash");
                     }
-                    String mismatch = Migrations.columnsMismatch(result, new StoredRecord(seq, null, content, previous,
-                            hash).json());
+                    JsonNode json = json(seq, content);
+                    String mismatch = Migrations.columnsMismatch(result, version, json);
                     if (mismatch != null) {
-                        return new Verification(false, seq - 1, "record " + seq + " was altered: column " + mismatch
+                        return damaged(seq - 1, "record " + seq + " was altered: column " + mismatch
                                 + " no longer matches its content");
+                    }
+                    if (version >= 2 && !Migrations.defectRows(json).equals(defects.getOrDefault(seq, List.of()))) {
+                        return damaged(seq - 1, "record " + seq + " was altered: its defect counts (table"
+                                + " defect_count) no longer match its content");
+                    }
+                    defects.remove(seq);
+                    if (version >= 3) {
+                        Migrations.claimKey(seq, json, keyHolder, heldKey);
+                        String stored = result.getString(Migrations.LOT_KEY_COLUMN);
+                        if (stored != null) {
+                            storedKeys.put(seq, stored);
+                        }
                     }
                     previous = hash;
                     expected++;
                 }
             }
-            try (Statement statement = connection.createStatement();
-                    ResultSet head = statement.executeQuery("SELECT seq, hash FROM chain_head WHERE id = 1")) {
-                head.next();
-                long last = head.getLong(1);
-                if (last != expected - 1 || !head.getString(2).equals(previous)) {
-                    return new Verification(false, expected - 1, last > expected - 1
-                            ? "the last " + (last - expected + 1) + " record(s) were removed (the chain head names"
-                                    + " record " + last + ", the store ends at record " + (expected - 1) + ")"
-                            : "the chain head does not match the last record " + (expected - 1));
+            long last = expected - 1;
+            for (Map.Entry<Long, String> entry : storedKeys.entrySet()) {
+                if (!entry.getValue().equals(heldKey.get(entry.getKey()))) {
+                    return damaged(entry.getKey() - 1, "record " + entry.getKey() + " was altered: column lot_key no"
+                            + " longer matches the records' content");
                 }
             }
-            return new Verification(true, expected - 1, null);
+            for (Map.Entry<Long, String> entry : new TreeMap<>(heldKey).entrySet()) {
+                if (!storedKeys.containsKey(entry.getKey())) {
+                    return damaged(entry.getKey() - 1, "record " + entry.getKey() + " was altered: column lot_key no"
+                            + " longer matches the records' content");
+                }
+            }
+            Head head = lockedHead();
+            if (head == null) {
+                return damaged(last, "its chain head is missing");
+            }
+            if (head.seq() != last || !head.hash().equals(previous)) {
+                return damaged(last, head.seq() > last
+                        ? "the last " + (head.seq() - last) + " record(s) were removed (the chain head names record "
+                                + head.seq() + ", the store ends at record " + last + ")"
+                        : "the chain head does not match the last record " + last);
+            }
+            if (!defects.isEmpty()) {
+                long seq = defects.keySet().iterator().next();
+                return damaged(Math.min(last, seq - 1), "table defect_count holds defect counts for record " + seq
+                        + (seq > last ? ", which is not in the store" : ", which has none"));
+            }
+            for (Head keptHead : kept) {
+                String problem = keptHeadProblem(keptHead, last);
+                if (problem != null) {
+                    return damaged(last, problem);
+                }
+            }
+            return new Verification(true, last, null, new Head(last, previous), storeId);
         });
     }
 
+    private Verification damaged(long intactRecords, String problem) {
+        return new Verification(false, intactRecords, problem, null, storeId);
+    }
+
+    private String keptHeadProblem(Head kept, long last) throws SQLException {
+        if (kept.seq() == 0) {
+            return kept.hash().equals(version >= 3 ? genesis : GENESIS) ? null
+                    : "the kept head " + kept + " is not the start of this store's chain: the store was replaced";
+        }
+        if (kept.seq() > last) {
+            return "the kept head " + kept + " names record " + kept.seq() + ", but the store ends at record " + last
+                    + ": records were removed from its end, or the store was replaced";
+        }
+        try (PreparedStatement query = connection.prepareStatement("SELECT hash FROM lot_record WHERE seq = ?")) {
+            query.setLong(1, kept.seq());
+            try (ResultSet result = query.executeQuery()) {
+                result.next();
+                String hash = result.getString(1);
+                return MessageDigest.isEqual(hash.getBytes(java.nio.charset.StandardCharsets.US_ASCII),
+                        kept.hash().getBytes(java.nio.charset.StandardCharsets.US_ASCII)) ? null
+                        : "record " + kept.seq() + " no longer has the kept hash " + kept.hash() + " (it has " + hash
+                                + "): the chain was rewritten or replaced since that head was kept";
+            }
+        }
+    }
+
+    /** Every defect-count row, as text per record, sorted the way {@link Migrations#defectRows} sorts them. */
+    private Map<Long, List<String>> defectRows() throws SQLException {
+        Map<Long, List<String>> rows = new TreeMap<>();
+        if (version < 2) {
+            return rows;
+        }
+        try (Statement statement = connection.createStatement();
+                ResultSet result = statement.executeQuery("SELECT seq, supplier, part, defect, units FROM defect_count")) {
+            while (result.next()) {
+                rows.computeIfAbsent(result.getLong(1), k -> new ArrayList<>()).add(Migrations.defectRow(
+                        result.getString(2), result.getString(3), result.getString(4), result.getLong(5)));
+            }
+        }
+        rows.values().forEach(java.util.Collections::sort);
+        return rows;
+    }
 }

@@ -8,7 +8,10 @@ import java.sql.SQLException;
 import java.sql.Statement;
 import java.time.Instant;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.UUID;
 
 /**
  * The store's versioned schema. Each version is a step applied in the opening transaction, in order,
@@ -17,7 +20,9 @@ import java.util.List;
  *
  * <ol>
  * <li>the records and the chain head;
- * <li>the severity and production columns, and the defect counts per record for the audit.
+ * <li>the severity and production columns, and the defect counts per record for the audit;
+ * <li>the store's identity (a random id, to which a new store's chain is anchored) and the lot key,
+ * unique among records, that holds each lot (supplier, part, lot id) to one current record.
  * </ol>
  */
 final class Migrations {
@@ -28,6 +33,7 @@ final class Migrations {
         switch (version) {
             case 1 -> version1(connection);
             case 2 -> version2(connection);
+            case 3 -> version3(connection);
             default -> throw new IllegalArgumentException("no schema version " + version);
         }
     }
@@ -86,7 +92,79 @@ final class Migrations {
         }
     }
 
-    private static String text(JsonNode content, String field) {
+    private static void version3(Connection connection) throws SQLException {
+        try (Statement statement = connection.createStatement()) {
+            statement.execute("ALTER TABLE lot_record ADD COLUMN lot_key TEXT");
+        }
+        Map<String, Long> keyHolder = new HashMap<>();
+        Map<Long, String> heldKey = new HashMap<>();
+        try (Statement statement = connection.createStatement();
+                ResultSet rows = statement.executeQuery("SELECT seq, content FROM lot_record ORDER BY seq")) {
+            while (rows.next()) {
+                long seq = rows.getLong(1);
+                claimKey(seq, new StoredRecord(seq, null, rows.getString(2), null, null).json(), keyHolder, heldKey);
+            }
+        }
+        try (PreparedStatement update = connection.prepareStatement("UPDATE lot_record SET lot_key = ? WHERE seq = ?")) {
+            for (Map.Entry<Long, String> held : heldKey.entrySet()) {
+                update.setString(1, held.getValue());
+                update.setLong(2, held.getKey());
+                update.addBatch();
+            }
+            update.executeBatch();
+        }
+        String id = UUID.randomUUID().toString();
+        long records;
+        try (Statement statement = connection.createStatement()) {
+            statement.execute("CREATE UNIQUE INDEX lot_record_one_per_lot ON lot_record (lot_key)");
+            statement.execute("CREATE TABLE lotgate_store (id TEXT NOT NULL, recorded_at TEXT NOT NULL,"
+                    + " genesis TEXT NOT NULL)");
+            try (ResultSet head = statement.executeQuery("SELECT seq FROM chain_head WHERE id = 1")) {
+                head.next();
+                records = head.getLong(1);
+            }
+        }
+        // A new store's chain starts from its id; an older store keeps the start its records already link to.
+        String genesis = records == 0 ? HistoryStore.genesisOf(id) : HistoryStore.GENESIS;
+        try (PreparedStatement insert = connection.prepareStatement("INSERT INTO lotgate_store (id, recorded_at,"
+                + " genesis) VALUES (?, ?, ?)")) {
+            insert.setString(1, id);
+            insert.setString(2, Instant.now().truncatedTo(java.time.temporal.ChronoUnit.MILLIS).toString());
+            insert.setString(3, genesis);
+            insert.executeUpdate();
+        }
+        if (records == 0) {
+            try (PreparedStatement update = connection.prepareStatement("UPDATE chain_head SET hash = ? WHERE id = 1")) {
+                update.setString(1, genesis);
+                update.executeUpdate();
+            }
+        }
+    }
+
+    /**
+     * Replays one record into the current holders of lot keys: a correction frees the key of the record it
+     * supersedes, and a lot takes its key when no current record holds it. (Before schema 3 a lot could be
+     * recorded twice; the second record then holds no key.)
+     */
+    static void claimKey(long seq, JsonNode content, Map<String, Long> keyHolder, Map<Long, String> heldKey) {
+        if (!"lot".equals(text(content, "kind"))) {
+            return;
+        }
+        long supersedes = content.path("supersedes").asLong(0);
+        if (supersedes > 0) {
+            String freed = heldKey.remove(supersedes);
+            if (freed != null) {
+                keyHolder.remove(freed);
+            }
+        }
+        String key = HistoryStore.lotKey(text(content, "supplier"), text(content, "part"), text(content, "lot"));
+        if (!keyHolder.containsKey(key)) {
+            keyHolder.put(key, seq);
+            heldKey.put(seq, key);
+        }
+    }
+
+    static String text(JsonNode content, String field) {
         JsonNode value = content.get(field);
         return value == null || value.isNull() ? null : value.asText();
     }
@@ -98,13 +176,17 @@ final class Migrations {
 
     /** Writes a record's row in the columns of the given schema version, extracted from its content. */
     static void insertRecord(Connection connection, int version, long seq, Instant recordedAt, String text,
-            JsonNode content, String previous, String hash) throws SQLException {
+            JsonNode content, String previous, String hash, String lotKey) throws SQLException {
         String columns = "seq, recorded_at, kind, supplier, part, lot, lot_size, received, verdict, inspected,"
                 + " nonconforming, supersedes, content, previous_hash, hash";
         String marks = "?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?";
         if (version >= 2) {
             columns += ", severity, production";
             marks += ", ?, ?";
+        }
+        if (version >= 3) {
+            columns += ", lot_key";
+            marks += ", ?";
         }
         try (PreparedStatement insert = connection.prepareStatement("INSERT INTO lot_record (" + columns
                 + ") VALUES (" + marks + ")")) {
@@ -126,6 +208,9 @@ final class Migrations {
             if (version >= 2) {
                 insert.setString(16, text(content, "severity"));
                 insert.setString(17, text(content, "production"));
+            }
+            if (version >= 3) {
+                insert.setString(18, lotKey);
             }
             insert.executeUpdate();
         }
@@ -155,25 +240,58 @@ final class Migrations {
         }
     }
 
-    /** The first extracted column that no longer matches the record's content, or null. */
-    static String columnsMismatch(ResultSet row, JsonNode content) throws SQLException {
-        String[][] texts = {{"kind", row.getString(6)}, {"supplier", row.getString(7)}, {"part", row.getString(8)},
-                {"lot", row.getString(9)}, {"verdict", row.getString(10)}};
-        for (String[] pair : texts) {
-            String expected = text(content, pair[0]);
-            if (expected == null ? pair[1] != null : !expected.equals(pair[1])) {
+    /** The columns verification reads, in this order, for a schema version. */
+    static String columns(int version) {
+        return "seq, recorded_at, content, previous_hash, hash, kind, supplier, part, lot, verdict, inspected,"
+                + " nonconforming, supersedes, lot_size, received" + (version >= 2 ? ", severity, production" : "")
+                + (version >= 3 ? ", lot_key" : "");
+    }
+
+    /** The index of lot_key among {@link #columns}. */
+    static final int LOT_KEY_COLUMN = 18;
+
+    /**
+     * The first column read by queries that no longer matches the record's content, or null. Numbers are
+     * compared as the database gives them as text, so that 1000.4 in an integer column is not read as 1000.
+     */
+    static String columnsMismatch(ResultSet row, int version, JsonNode content) throws SQLException {
+        List<String[]> pairs = new ArrayList<>(List.of(
+                new String[] {"kind", text(content, "kind"), row.getString(6)},
+                new String[] {"supplier", text(content, "supplier"), row.getString(7)},
+                new String[] {"part", text(content, "part"), row.getString(8)},
+                new String[] {"lot", text(content, "lot"), row.getString(9)},
+                new String[] {"verdict", text(content, "verdict"), row.getString(10)},
+                new String[] {"inspected", Integer.toString(number(content, "inspected")), row.getString(11)},
+                new String[] {"nonconforming", Integer.toString(number(content, "nonconforming")), row.getString(12)},
+                new String[] {"supersedes", Long.toString(content.path("supersedes").asLong(0)), row.getString(13)},
+                new String[] {"lot_size", Integer.toString(number(content, "lotSize")), row.getString(14)},
+                new String[] {"received", text(content, "received"), row.getString(15)}));
+        if (version >= 2) {
+            pairs.add(new String[] {"severity", text(content, "severity"), row.getString(16)});
+            pairs.add(new String[] {"production", text(content, "production"), row.getString(17)});
+        }
+        for (String[] pair : pairs) {
+            if (pair[1] == null ? pair[2] != null : !pair[1].equals(pair[2])) {
                 return pair[0];
             }
         }
-        if (row.getInt(11) != number(content, "inspected")) {
-            return "inspected";
-        }
-        if (row.getInt(12) != number(content, "nonconforming")) {
-            return "nonconforming";
-        }
-        if (row.getLong(13) != content.path("supersedes").asLong(0)) {
-            return "supersedes";
-        }
         return null;
+    }
+
+    /** The defect-count rows a record's content calls for, as comparable text, sorted. */
+    static List<String> defectRows(JsonNode content) {
+        List<String> rows = new ArrayList<>();
+        JsonNode types = content.get("defectTypes");
+        if (types != null && types.isObject()) {
+            types.fields().forEachRemaining(entry -> rows.add(defectRow(text(content, "supplier"),
+                    text(content, "part"), entry.getKey(), entry.getValue().asLong())));
+        }
+        java.util.Collections.sort(rows);
+        return rows;
+    }
+
+    static String defectRow(String supplier, String part, String defect, long units) {
+        return com.fasterxml.jackson.databind.node.JsonNodeFactory.instance.arrayNode().add(supplier).add(part)
+                .add(defect).add(units).toString();
     }
 }

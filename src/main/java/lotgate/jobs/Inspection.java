@@ -50,7 +50,8 @@ final class Inspection implements AutoCloseable {
     static Inspection open(String storeLocation, Path planFile, boolean family, LotDetails lot, Long supersedes) {
         PlanFamily plans = family ? PlanFamily.read(planFile) : null;
         SwitchingRules rules = family ? SwitchingRules.fromJson(plans.switching()) : SwitchingRules.CURRENT;
-        HistoryStore store = HistoryStore.open(storeLocation);
+        // The job never creates a store: the face decides where one may be created (and says so).
+        HistoryStore store = HistoryStore.open(storeLocation, false);
         try {
             List<LotRow> rows = store.rows(lot.supplier(), lot.part());
             SupplierHistory history = new SupplierHistory(rows, rules);

@@ -9,6 +9,7 @@ import java.util.Locale;
 import lotgate.files.AtomicWrite;
 import lotgate.files.Sha256;
 import lotgate.files.StagedFiles;
+import lotgate.history.Identifiers;
 import lotgate.history.Severity;
 import lotgate.history.SeverityTracker;
 import lotgate.history.StoredRecord;
@@ -125,6 +126,15 @@ public final class SentenceLot {
         boolean family = PlanFamily.isFamily(request.planFile());
         SheetSource source = SheetSource.open(request.sheetFile());
         LotDetails lot = request.given().orElse(LotDetails.read(source, request.lotFile()));
+        String[][] ids = {{"lot", lot.lot()}, {"supplier", lot.supplier()}, {"part", lot.part()},
+                {"inspector", lot.inspector()}};
+        for (String[] id : ids) {
+            String problem = Identifiers.problem(id[0], id[1]);
+            if (problem != null) {
+                throw new JobException(JobException.Kind.BAD_INPUT, id[0], "lot details of " + request.sheetFile()
+                        + ": " + problem + " (nothing was recorded)");
+            }
+        }
         if ((request.record() || family) && (lot.supplier() == null || lot.part() == null)) {
             throw JobException.invalid("supplier", "give the lot's --supplier and --part (or put them in the"
                     + " lot details) so that the lot joins its supplier's history, or sentence with --no-record");

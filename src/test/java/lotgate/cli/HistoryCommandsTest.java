@@ -49,7 +49,7 @@ class HistoryCommandsTest {
 
     private Cli.Result sentence(String plan, String lot, int units, int failing, String... extra) throws Exception {
         List<String> args = new ArrayList<>(List.of("sentence", plan, sheet(lot, units, failing).toString(), "--lot", lot,
-                "--supplier", "Invented Works", "--part", "IW-1", "--store", store, "--format", "json"));
+                "--supplier", "Invented Works", "--part", "IW-1", "--store", store, "--create-store", "--format", "json"));
         args.addAll(List.of(extra));
         return Cli.run(args.toArray(String[]::new));
     }
@@ -148,11 +148,13 @@ class HistoryCommandsTest {
     void importIsAllOrNothing() throws Exception {
         Path bad = pastLots(List.of(row("P1", "Invented Works", "IW-1", "2026-01-05", 80, 2, "accept", "burr:2"),
                 row("P2", "Invented Works", "IW-1", "2026-01-12", 80, "lots", "accept", "")));
-        Cli.Result refused = Cli.run("import", bad.toString(), "--store", store);
+        Cli.Result refused = Cli.run("import", bad.toString(), "--store", store, "--create-store");
         assertEquals(ExitCode.BAD_INPUT, refused.exitCode());
         assertTrue(refused.err().endsWith("past.csv: row 3, column F: nonconforming 'lots' is not a whole number of 0 or"
                 + " more" + System.lineSeparator()), refused.err());
-        assertTrue(Cli.run("history", "--store", store).out().contains(": 0 records"), "nothing was imported");
+        Cli.Result history = Cli.run("history", "--store", store);
+        assertEquals(ExitCode.BAD_INPUT, history.exitCode(), "nothing was imported, not even a store was created");
+        assertEquals("lotgate: history store " + store + " does not exist" + System.lineSeparator(), history.err());
     }
 
     @Test
@@ -160,7 +162,7 @@ class HistoryCommandsTest {
         Path past = pastLots(List.of(row("P1", "Invented Works", "IW-1", "2026-01-05", 80, 2, "accept", "burr:2"),
                 row("P2", "Invented Works", "IW-1", "2026-01-12", 80, 0, "accept", ""),
                 row("P3", "Invented Works", "IW-1", "2026-01-19", 80, 5, "reject", "burr:1; crack:4")));
-        assertEquals(0, Cli.run("import", past.toString(), "--store", store).exitCode());
+        assertEquals(0, Cli.run("import", past.toString(), "--store", store, "--create-store").exitCode());
         JsonNode audit = JSON.readTree(Cli.run("supplier", "Invented Works", "--store", store, "--format", "json").out());
         JsonNode average = audit.get("processAverage");
         assertEquals(7.0 / 240, average.get("estimate").asDouble(), 1e-15);
@@ -183,7 +185,7 @@ class HistoryCommandsTest {
         for (int i = 1; i <= 30; i++) {
             lots.add(row("B" + i, "Big Invented", "B-1", "2026-02-01", 100, 1, "accept", "burr:1"));
         }
-        assertEquals(0, Cli.run("import", pastLots(lots).toString(), "--store", store).exitCode());
+        assertEquals(0, Cli.run("import", pastLots(lots).toString(), "--store", store, "--create-store").exitCode());
         JsonNode ranking = JSON.readTree(Cli.run("suppliers", "--store", store, "--format", "json").out());
         // Upper 95% bounds, SciPy 1.10.1: 0 in 240 gives beta.ppf(0.975, 1, 240) = 0.015252810401278714;
         // 30 in 3000 gives beta.ppf(0.975, 31, 2970) = 0.014245074173757966, so the larger record ranks first.
@@ -196,7 +198,7 @@ class HistoryCommandsTest {
     void hostileNamesComeOutInertInEveryReport() throws Exception {
         String evil = "=cmd|' /C calc'!A0 <script>alert(1)</script> \"Qu\u00f6tes\"";
         Path past = pastLots(List.of(row("H1", evil, "@P-1", "2026-03-02", 80, 3, "reject", "<b>burr</b>:3")));
-        assertEquals(0, Cli.run("import", past.toString(), "--store", store).exitCode());
+        assertEquals(0, Cli.run("import", past.toString(), "--store", store, "--create-store").exitCode());
         Path html = folder.resolve("audit.html");
         Path xlsx = folder.resolve("audit.xlsx");
         Path ranking = folder.resolve("ranking.html");

@@ -229,7 +229,7 @@ class VariablesCommandsTest {
         for (int lot = 1; lot <= 3; lot++) {
             Cli.Result result = Cli.run("sentence", file.toString(), sheet("lot" + lot + ".csv",
                     normalSample(42, 10.0 + 0.002 * lot, 0.01)).toString(), "--lot", "M" + lot, "--supplier",
-                    "Invented Test Supplier", "--part", "P-1", "--store", store);
+                    "Invented Test Supplier", "--part", "P-1", "--store", store, "--create-store");
             assertEquals(0, result.exitCode(), result.err());
         }
         Path html = folder.resolve("audit.html");

@@ -18,6 +18,7 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Random;
 import java.util.Set;
+import java.util.stream.Stream;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
@@ -131,7 +132,7 @@ class HistoryStoreTest {
         fill(location, 1);
         sql(location, "UPDATE lotgate_schema SET version = 99");
         StoreException refused = assertThrows(StoreException.class, () -> HistoryStore.open(location));
-        assertEquals("history store " + location + " has schema version 99, newer than this lotgate reads ("
+        assertEquals("history store " + StoreLocation.masked(location) + " has schema version 99, newer than this lotgate reads ("
                 + HistoryStore.SCHEMA_VERSION + "); use a newer lotgate", refused.getMessage());
     }
 
@@ -241,5 +242,183 @@ class HistoryStoreTest {
             }
         }
         assertFalse(reportedDone.isEmpty());
+    }
+
+    /** The message with which the store refuses to append a new lot, after checking that nothing was appended. */
+    private static String refusedAppend(String location) {
+        try (HistoryStore store = HistoryStore.open(location)) {
+            int before = store.rows(null, null).size();
+            StoreException refused = assertThrows(StoreException.class, () -> store.append(Stores.lot(
+                    "Invented Supplier", "P-1", "L-5", true, 0), Stores.now()));
+            assertEquals(before, store.rows(null, null).size(), "nothing was appended");
+            return refused.getMessage();
+        }
+    }
+
+    @ParameterizedTest
+    @MethodSource("kinds")
+    void noRecordIsAppendedToAChainWhoseHeadNoLongerMatches(String kind) throws SQLException {
+        String location = Stores.fresh(kind, folder);
+        fill(location, 4);
+        sql(location, "UPDATE lot_record SET content = REPLACE(content, 'L-4', 'L-9') WHERE seq = 4");
+        assertEquals("history store " + StoreLocation.masked(location) + " is damaged: the last record 4 no longer"
+                + " matches its hash or the chain head; nothing was recorded. Run 'lotgate verify --store "
+                + StoreLocation.masked(location) + "' to find the damage", refusedAppend(location));
+        String cut = Stores.fresh(kind, folder);
+        fill(cut, 4);
+        sql(cut, "DELETE FROM lot_record WHERE seq = 4");
+        assertTrue(refusedAppend(cut).contains("is damaged: the last record 4, named by the chain head, is missing;"
+                + " nothing was recorded"));
+        String column = Stores.fresh(kind, folder);
+        fill(column, 4);
+        sql(column, "UPDATE lot_record SET received = '2025-12-31' WHERE seq = 4");
+        assertTrue(refusedAppend(column).contains("is damaged: column received of the last record 4 no longer"
+                + " matches its content"));
+    }
+
+    @ParameterizedTest
+    @MethodSource("kinds")
+    void aLotIsRecordedOnceUntilACorrectionSupersedesIt(String kind) {
+        String location = Stores.fresh(kind, folder);
+        fill(location, 3);
+        try (HistoryStore store = HistoryStore.open(location)) {
+            StoreException.DuplicateLot duplicate = assertThrows(StoreException.DuplicateLot.class, () -> store.append(
+                    Stores.lot("Invented Supplier", "P-1", "L-2", true, 0), Stores.now()));
+            assertEquals("lot L-2 of Invented Supplier, part P-1 is already recorded as #2 in "
+                    + StoreLocation.masked(location) + " (nothing was recorded)", duplicate.getMessage());
+            assertEquals(2, duplicate.existing());
+            // The same lot id of another part or supplier is another lot.
+            store.append(Stores.lot("Invented Supplier", "P-2", "L-2", true, 0), Stores.now());
+            store.append(Stores.lot("Invented Other", "P-1", "L-2", true, 0), Stores.now());
+            var correction = Stores.lot("Invented Supplier", "P-1", "L-2", true, 0);
+            correction.put("supersedes", 2).put("reason", "recount (invented)");
+            assertEquals(6, store.append(correction, Stores.now()).seq());
+            var again = Stores.lot("Invented Supplier", "P-1", "L-2", true, 0);
+            again.put("supersedes", 2).put("reason", "again (invented)");
+            StoreException twice = assertThrows(StoreException.class, () -> store.append(again, Stores.now()));
+            assertTrue(twice.getMessage().contains("record 2 is not the current record of a lot (it was already"
+                    + " corrected, or is not a lot); supersede its latest correction instead"), twice.getMessage());
+            assertThrows(StoreException.DuplicateLot.class, () -> store.append(Stores.lot("Invented Supplier", "P-1",
+                    "L-2", true, 0), Stores.now()), "the correction now holds the lot");
+            HistoryStore.Verification verification = store.verify();
+            assertTrue(verification.intact(), verification.problem());
+            assertEquals(6, verification.records());
+        }
+    }
+
+    @ParameterizedTest
+    @MethodSource("kinds")
+    void aStoreThatRecordedALotTwiceBeforeTheConstraintMigratesAndKeepsBoth(String kind) {
+        String location = Stores.fresh(kind, folder);
+        try (HistoryStore old = HistoryStore.open(location, 2)) {
+            old.append(Stores.lot("Invented Supplier", "P-1", "L-1", true, 1), Stores.now());
+            old.append(Stores.lot("Invented Supplier", "P-1", "L-1", true, 2), Stores.now());
+        }
+        try (HistoryStore store = HistoryStore.open(location)) {
+            assertEquals(HistoryStore.SCHEMA_VERSION, store.schemaVersion());
+            HistoryStore.Verification verification = store.verify();
+            assertTrue(verification.intact(), verification.problem());
+            assertEquals(2, store.rows(null, null).size());
+            assertThrows(StoreException.DuplicateLot.class, () -> store.append(Stores.lot("Invented Supplier", "P-1",
+                    "L-1", true, 0), Stores.now()));
+            assertTrue(store.storeId().matches("[0-9a-f-]{36}"), store.storeId());
+        }
+    }
+
+    @ParameterizedTest
+    @MethodSource("kinds")
+    void twoProcessesRecordingTheSameLotsRecordEachOnce(String kind) throws Exception {
+        String location = Stores.fresh(kind, folder);
+        fill(location, 0);
+        Process first = recorder(location, 200, "Invented Twin", "100");
+        Process second = recorder(location, 200, "Invented Twin", "100");
+        List<String> linesFirst = lines(first);
+        List<String> linesSecond = lines(second);
+        // Both output streams are read to their end, so the processes have ended: no timer is needed.
+        assertEquals(0, first.waitFor(), String.join("\n", linesFirst));
+        assertEquals(0, second.waitFor(), String.join("\n", linesSecond));
+        long done = Stream.concat(linesFirst.stream(), linesSecond.stream()).filter(l -> l.startsWith("done ")).count();
+        long refused = Stream.concat(linesFirst.stream(), linesSecond.stream()).filter(l -> l.startsWith("duplicate "))
+                .count();
+        System.out.println("concurrency | " + kind + " | 2 processes x 200 attempts on 100 lot ids | recorded " + done
+                + " | refused as duplicates " + refused);
+        assertEquals(400, done + refused, "every attempt was either recorded or refused as a duplicate");
+        assertEquals(100, done);
+        try (HistoryStore store = HistoryStore.open(location)) {
+            HistoryStore.Verification verification = store.verify();
+            assertTrue(verification.intact(), verification.problem());
+            assertEquals(100, verification.records());
+            assertEquals(100, store.rows(null, null).stream().map(LotRow::lot).distinct().count());
+        }
+    }
+
+    @ParameterizedTest
+    @MethodSource("kinds")
+    void aKeptHeadCatchesAStoreCutShortOrReplaced(String kind) throws SQLException {
+        String location = Stores.fresh(kind, folder);
+        fill(location, 5);
+        HistoryStore.Head kept;
+        String id;
+        try (HistoryStore store = HistoryStore.open(location)) {
+            HistoryStore.Verification verification = store.verify();
+            kept = verification.head();
+            id = verification.storeId();
+            assertEquals(5, kept.seq());
+            assertEquals(store.record(5).hash(), kept.hash());
+            assertTrue(store.verify(List.of(kept, new HistoryStore.Head(2, store.record(2).hash()))).intact());
+        }
+        // Cut short by someone who also moved the chain head back: the chain alone looks intact.
+        sql(location, "DELETE FROM defect_count WHERE seq >= 4");
+        sql(location, "DELETE FROM lot_record WHERE seq >= 4");
+        sql(location, "UPDATE chain_head SET seq = 3, hash = (SELECT hash FROM lot_record WHERE seq = 3)");
+        try (HistoryStore store = HistoryStore.open(location)) {
+            assertTrue(store.verify().intact(), "a consistent truncation is not seen without a kept head");
+            assertEquals(id, store.verify().storeId());
+            HistoryStore.Verification verification = store.verify(List.of(kept));
+            assertFalse(verification.intact());
+            assertEquals("the kept head " + kept + " names record 5, but the store ends at record 3: records were"
+                    + " removed from its end, or the store was replaced", verification.problem());
+        }
+        // Replaced by a fresh store of the same length.
+        String other = Stores.fresh(kind, folder);
+        fill(other, 5);
+        try (HistoryStore store = HistoryStore.open(other)) {
+            HistoryStore.Verification verification = store.verify(List.of(kept));
+            assertFalse(verification.intact());
+            assertTrue(verification.problem().startsWith("record 5 no longer has the kept hash " + kept.hash()),
+                    verification.problem());
+            assertFalse(id.equals(verification.storeId()), "each store has its own id");
+        }
+    }
+
+    @ParameterizedTest
+    @MethodSource("kinds")
+    void aReadOnlyOpeningRefusesAStoreThatDoesNotExist(String kind) {
+        String location = Stores.fresh(kind, folder);
+        StoreException.Missing missing = assertThrows(StoreException.Missing.class, () -> HistoryStore.open(location,
+                false));
+        assertTrue(missing.getMessage().startsWith("history store " + StoreLocation.masked(location)
+                + " does not exist"), missing.getMessage());
+        try (HistoryStore store = HistoryStore.open(location, true)) {
+            assertTrue(store.created());
+        }
+        try (HistoryStore store = HistoryStore.open(location, false)) {
+            assertFalse(store.created());
+        }
+    }
+
+    private static Process recorder(String location, int count, String supplier, String shared) throws Exception {
+        String classpath = System.getProperty("surefire.test.class.path", System.getProperty("java.class.path"));
+        return new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(), "-Xmx128m",
+                "-Dlog4j.provider=org.apache.logging.log4j.simple.internal.SimpleProvider", "-cp", classpath,
+                Recorder.class.getName(), location, Integer.toString(count), supplier, shared)
+                .redirectErrorStream(true).start();
+    }
+
+    private static List<String> lines(Process process) throws Exception {
+        try (BufferedReader out = new BufferedReader(new InputStreamReader(process.getInputStream(),
+                StandardCharsets.UTF_8))) {
+            return out.lines().toList();
+        }
     }
 }

@@ -147,6 +147,13 @@ class JobsTest {
         assertEquals("planFile", refused.field());
     }
 
+    /** A new, empty store: a job records only into a store that exists (the face decides where one is created). */
+    private String newStore() {
+        String store = folder.resolve("history.sqlite").toString();
+        HistoryStore.open(store).close();
+        return store;
+    }
+
     private SentenceLot.Request sentence(String sheet, boolean record, String store, SentenceLot.Outputs outputs) {
         return new SentenceLot.Request(BOLTS, demo(sheet), null, Columns.standard(), 0, 0,
                 new LotDetails(null, null, null, 0, null, null), null, 0.95, record, null, null, "steady", store,
@@ -155,7 +162,7 @@ class JobsTest {
 
     @Test
     void sentencingALotRecordsItAndWritesItsOutputs() {
-        String store = folder.resolve("history.sqlite").toString();
+        String store = newStore();
         Path report = folder.resolve("out").resolve("lot.html");
         Path record = folder.resolve("out").resolve("lot.json");
         SentenceLot.Result result = SentenceLot.run(sentence("arnwick-af2611.xlsx", true, store,
@@ -171,7 +178,7 @@ class JobsTest {
 
     @Test
     void aLotAlreadyRecordedIsAConflict() {
-        String store = folder.resolve("history.sqlite").toString();
+        String store = newStore();
         SentenceLot.run(sentence("arnwick-af2611.xlsx", true, store, SentenceLot.Outputs.NONE));
         JobException refused = assertThrows(JobException.class, () -> SentenceLot.run(
                 sentence("arnwick-af2611.xlsx", true, store, SentenceLot.Outputs.NONE)));
@@ -181,7 +188,7 @@ class JobsTest {
 
     @Test
     void anOutputThatCannotBeWrittenLeavesNoRecordAndNoFile() throws IOException {
-        String store = folder.resolve("history.sqlite").toString();
+        String store = newStore();
         Path blocker = Files.writeString(folder.resolve("blocker"), "a file, not a folder");
         Path record = folder.resolve("record.json");
         assertThrows(OutputFileException.class, () -> SentenceLot.run(sentence("arnwick-af2611.xlsx", true, store,
