@@ -3,6 +3,7 @@ package lotgate.report;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
+import java.awt.Shape;
 import java.awt.geom.Rectangle2D;
 import java.text.DecimalFormat;
 import java.text.DecimalFormatSymbols;
@@ -11,6 +12,8 @@ import java.util.Locale;
 import java.util.function.ToDoubleFunction;
 import lotgate.sampling.CurvePoint;
 import org.jfree.chart.JFreeChart;
+import org.jfree.chart.LegendItem;
+import org.jfree.chart.LegendItemCollection;
 import org.jfree.chart.annotations.XYTextAnnotation;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.plot.CombinedDomainXYPlot;
@@ -28,11 +31,7 @@ import org.jfree.data.xy.XYSeriesCollection;
  * core, the charts only draw them.
  */
 public final class Charts {
-    private static final Color[] PALETTE = {
-            new Color(0x1f, 0x4e, 0x99), new Color(0xc0, 0x39, 0x2b), new Color(0x2e, 0x8b, 0x57),
-            new Color(0x8e, 0x44, 0xad), new Color(0xd3, 0x84, 0x00), new Color(0x34, 0x49, 0x5e)};
-    private static final Color MARK = new Color(0x55, 0x55, 0x55);
-    private static final Font LABEL = new Font(Font.SANS_SERIF, Font.PLAIN, 11);
+    private static final Font LABEL = ChartStyle.NOTE;
 
     /** A point the plan was asked to pass through or stay clear of: the AQL and LTPD requests. */
     public record RiskMark(String label, double quality, double acceptance) {
@@ -55,19 +54,30 @@ public final class Charts {
             String marksLabel) {
         XYPlot plot = ocPlot(perUnit, curves, marks, marksLabel);
         plot.getDomainAxis().setRange(0, widest(curves));
-        return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, true));
+        return finish(new JFreeChart(title, ChartStyle.TITLE, plot, true));
+    }
+
+    /**
+     * An OC chart with the points asked of the plan (squares, such as the AQL and LTPD with their risks) and the
+     * points observed (diamonds, such as a lot's observed quality), each kind with its legend entry.
+     */
+    public static JFreeChart oc(String title, boolean perUnit, List<ChartCurve> curves, List<RiskMark> design,
+            String designLabel, List<RiskMark> observed, String observedLabel) {
+        XYPlot plot = ocPlot(perUnit, curves, design, designLabel, observed, observedLabel);
+        plot.getDomainAxis().setRange(0, widest(curves));
+        return finish(new JFreeChart(title, ChartStyle.TITLE, plot, true));
     }
 
     public static JFreeChart aoq(String title, boolean perUnit, ChartCurve curve, double aoql, double aoqlAt) {
         XYPlot plot = aoqPlot(perUnit, curve, aoql, aoqlAt, true);
         plot.getDomainAxis().setRange(0, widest(List.of(curve)));
-        return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, true));
+        return finish(new JFreeChart(title, ChartStyle.TITLE, plot, true));
     }
 
     public static JFreeChart ati(String title, boolean perUnit, ChartCurve curve, int sampleSize, int lotSize) {
         XYPlot plot = atiPlot(perUnit, curve, sampleSize, lotSize, true);
         plot.getDomainAxis().setRange(0, widest(List.of(curve)));
-        return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, true));
+        return finish(new JFreeChart(title, ChartStyle.TITLE, plot, true));
     }
 
     /** ASN curves: the units inspected on average to reach a decision, against incoming quality. */
@@ -78,14 +88,14 @@ public final class Charts {
         }
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
         for (int i = 0; i < curves.size(); i++) {
-            renderer.setSeriesPaint(i, PALETTE[i % PALETTE.length]);
-            renderer.setSeriesStroke(i, new BasicStroke(2f));
+            renderer.setSeriesPaint(i, ChartStyle.series(i));
+            renderer.setSeriesStroke(i, ChartStyle.seriesStroke(i));
         }
         NumberAxis units = new NumberAxis("Average sample number (units)");
         units.setAutoRangeIncludesZero(true);
         XYPlot plot = new XYPlot(data, qualityAxisOf(perUnit), units, renderer);
         plot.getDomainAxis().setRange(0, widest(curves));
-        return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, style(plot), true));
+        return finish(new JFreeChart(title, ChartStyle.TITLE, style(plot), true));
     }
 
     /**
@@ -98,104 +108,274 @@ public final class Charts {
      */
     public static JFreeChart sampling(String title, boolean units, double[] acceptance, double[] rejection,
             double[] path, boolean lines) {
-        XYSeriesCollection data = new XYSeriesCollection();
         XYSeries accept = new XYSeries("Accept at or below", false, true);
         XYSeries reject = new XYSeries("Reject at or above", false, true);
-        XYSeries found = new XYSeries("Count found in this lot", false, true);
-        for (int m = 1; m < acceptance.length; m++) {
-            if (!Double.isNaN(acceptance[m])) {
-                accept.add(m, acceptance[m]);
+        XYSeries acceptPoints = new XYSeries("Accept at or below (at a stage end)", false, true);
+        XYSeries rejectPoints = new XYSeries("Reject at or above (at a stage end)", false, true);
+        int last = 0;
+        if (lines) {
+            for (int m = 1; m < acceptance.length; m++) {
+                // Counts are never negative: the acceptance line starts where it reaches 0.
+                if (!Double.isNaN(acceptance[m]) && acceptance[m] >= 0) {
+                    accept.add(m, acceptance[m]);
+                }
+                if (!Double.isNaN(rejection[m])) {
+                    reject.add(m, rejection[m]);
+                }
             }
-            if (!Double.isNaN(rejection[m])) {
-                reject.add(m, rejection[m]);
+        } else {
+            // A plan in stages decides only at the end of each stage: its numbers hold over the stage, as steps.
+            for (int m = 1; m < acceptance.length; m++) {
+                if (!Double.isNaN(acceptance[m]) || !Double.isNaN(rejection[m])) {
+                    if (!Double.isNaN(acceptance[m]) && acceptance[m] >= 0) {
+                        accept.add(last, acceptance[m]);
+                        accept.add(m, acceptance[m]);
+                        acceptPoints.add(m, acceptance[m]);
+                    }
+                    reject.add(last, rejection[m]);
+                    reject.add(m, rejection[m]);
+                    rejectPoints.add(m, rejection[m]);
+                    last = m;
+                }
             }
         }
+        XYSeries found = new XYSeries("Count found in this lot", false, true);
         found.add(0, 0);
+        double count = 0;
+        int stop = 0;
         for (int m = 1; m < path.length; m++) {
             if (!Double.isNaN(path[m])) {
+                // The count moves only when a nonconforming unit is found: a step, not a slope.
+                found.add(m, count);
                 found.add(m, path[m]);
+                count = path[m];
+                stop = m;
             }
         }
+        XYSeries end = new XYSeries("Where this lot's inspection stopped", false, true);
+        end.add(stop, count);
+        XYSeriesCollection data = new XYSeriesCollection();
         data.addSeries(accept);
         data.addSeries(reject);
         data.addSeries(found);
-        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, !lines);
-        renderer.setSeriesPaint(0, PALETTE[2]);
-        renderer.setSeriesPaint(1, PALETTE[1]);
-        renderer.setSeriesPaint(2, PALETTE[0]);
-        renderer.setSeriesStroke(0, new BasicStroke(1.6f));
-        renderer.setSeriesStroke(1, new BasicStroke(1.6f));
-        renderer.setSeriesStroke(2, new BasicStroke(2.2f));
-        renderer.setSeriesShapesVisible(2, true);
-        renderer.setSeriesShape(2, new Rectangle2D.Double(-2.5, -2.5, 5, 5));
-        if (!lines) {
-            // A plan in stages decides only at the end of each stage: its numbers are points, not lines.
-            renderer.setSeriesLinesVisible(0, false);
-            renderer.setSeriesLinesVisible(1, false);
-            renderer.setSeriesShape(0, new Rectangle2D.Double(-5, -5, 10, 10));
-            renderer.setSeriesShape(1, new Rectangle2D.Double(-5, -5, 10, 10));
+        data.addSeries(end);
+        data.addSeries(acceptPoints);
+        data.addSeries(rejectPoints);
+        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
+        renderer.setSeriesPaint(0, ChartStyle.CALM);
+        renderer.setSeriesStroke(0, ChartStyle.limit());
+        renderer.setSeriesPaint(1, ChartStyle.ALERT);
+        renderer.setSeriesStroke(1, ChartStyle.limit());
+        renderer.setSeriesPaint(2, ChartStyle.DATA);
+        renderer.setSeriesStroke(2, new BasicStroke(2.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER));
+        renderer.setSeriesPaint(3, ChartStyle.INK);
+        renderer.setSeriesLinesVisible(3, false);
+        renderer.setSeriesShapesVisible(3, true);
+        renderer.setSeriesShape(3, ChartStyle.observed());
+        for (int s = 4; s <= 5; s++) {
+            renderer.setSeriesPaint(s, s == 4 ? ChartStyle.CALM : ChartStyle.ALERT);
+            renderer.setSeriesLinesVisible(s, false);
+            renderer.setSeriesShapesVisible(s, true);
+            renderer.setSeriesShape(s, ChartStyle.designPoint());
+            renderer.setSeriesVisibleInLegend(s, false);
         }
         NumberAxis inspected = new NumberAxis("Units inspected");
         inspected.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
-        inspected.setAutoRangeIncludesZero(true);
-        NumberAxis count = new NumberAxis(units ? "Nonconforming units found" : "Nonconformities found");
-        count.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
-        // The path starts at 0 anyway; a margin below keeps markers at 0 clear of the axis.
-        count.setAutoRangeIncludesZero(false);
-        count.setLowerMargin(0.06);
-        XYPlot plot = new XYPlot(data, inspected, count, renderer);
-        return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, style(plot), true));
+        inspected.setRange(0, Math.max(acceptance.length - 1, path.length - 1) * 1.02 + 1);
+        NumberAxis counts = new NumberAxis(units ? "Nonconforming units found" : "Nonconformities found");
+        counts.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
+        double top = 1;
+        for (int s = 0; s < 3; s++) {
+            top = Math.max(top, data.getSeries(s).getMaxY());
+        }
+        counts.setRange(0, top * 1.08 + 0.3);
+        XYPlot plot = new XYPlot(data, inspected, counts, renderer);
+        return finish(new JFreeChart(title, ChartStyle.TITLE, style(plot), true));
     }
 
     /**
-     * The p-chart: each lot's fraction nonconforming in receiving order, with the centre line and the
-     * 3-sigma limits for each lot's sample size.
+     * A lot on a control chart: its value and the centre and limits for its sample size, whether it was rejected,
+     * and the inspection severity it was judged under ("normal", "tightened", "reduced", or null).
      */
-    public static JFreeChart pChart(String title, List<String> lots, double[] fraction, double[] centre,
-            double[] lower, double[] upper) {
-        return shewhart(title, lots, new double[][] {fraction, centre, lower, upper}, new String[] {
-                "Lot fraction nonconforming", "Centre (process average)", "Upper control limit", "Lower control limit"},
-                percentAxis("Fraction nonconforming"));
+    public record ControlPoint(String lot, double value, double centre, double lower, double upper, boolean rejected,
+            String severity) {
+        boolean outside() {
+            return value > upper || value < lower;
+        }
+    }
+
+    /** A change of inspection severity, drawn after the lot of index {@code afterIndex} (0-based). */
+    public record SwitchMark(int afterIndex, String to) {
     }
 
     /**
-     * A Shewhart chart of one value per lot in receiving order, with its centre and 3-sigma limits (per lot).
-     *
-     * @param series the values, the centre, the lower and the upper limits, each one entry per lot
+     * The p-chart: each lot's fraction nonconforming in receiving order, named by its lot id, with the centre line
+     * and the 3-sigma limits for each lot's sample size (steps where sample sizes differ), the lots outside their
+     * limits, the rejected lots, and the stretches of tightened or reduced inspection with their switches marked.
      */
-    public static JFreeChart control(String title, List<String> lots, double[][] series, String valueLabel) {
+    public static JFreeChart pChart(String title, List<ControlPoint> points, List<SwitchMark> switches) {
+        return control(title, points, switches, percentAxis("Fraction nonconforming"), "Lot fraction nonconforming");
+    }
+
+    /**
+     * A Shewhart chart of one value per lot in receiving order, with its centre and 3-sigma limits (per lot). The
+     * value axis starts where the data does, not at 0.
+     */
+    public static JFreeChart control(String title, List<ControlPoint> points, String valueLabel) {
         NumberAxis value = new NumberAxis(valueLabel);
         value.setAutoRangeIncludesZero(false);
-        return shewhart(title, lots, series, new String[] {"Lot value", "Centre", "Upper control limit",
-                "Lower control limit"}, value);
+        return control(title, points, List.of(), value, "Lot value");
     }
 
-    /** The values with their centre line and limits (the lower one unlabelled in the legend). */
-    private static JFreeChart shewhart(String title, List<String> lots, double[][] series, String[] names,
-            NumberAxis valueAxis) {
+    private static JFreeChart control(String title, List<ControlPoint> points, List<SwitchMark> switches,
+            NumberAxis valueAxis, String valueName) {
         XYSeriesCollection data = new XYSeriesCollection();
-        double[][] ordered = {series[0], series[1], series[3], series[2]};
-        for (int s = 0; s < names.length; s++) {
-            XYSeries line = new XYSeries(names[s], false, true);
-            for (int i = 0; i < lots.size(); i++) {
-                line.add(i + 1, ordered[s][i]);
+        XYSeries values = new XYSeries(valueName, false, true);
+        XYSeries centre = new XYSeries("Centre line", false, true);
+        XYSeries upper = new XYSeries("Upper control limit", false, true);
+        XYSeries lower = new XYSeries("Lower control limit", false, true);
+        XYSeries outside = new XYSeries("Outside the control limits", false, true);
+        XYSeries rejected = new XYSeries("Lot rejected", false, true);
+        for (int i = 0; i < points.size(); i++) {
+            ControlPoint point = points.get(i);
+            values.add(i, point.value());
+            // Each lot's limits span its own slot, so that limits for different sample sizes show as steps.
+            centre.add(i - 0.5, point.centre());
+            centre.add(i + 0.5, point.centre());
+            upper.add(i - 0.5, point.upper());
+            upper.add(i + 0.5, point.upper());
+            lower.add(i - 0.5, point.lower());
+            lower.add(i + 0.5, point.lower());
+            if (point.outside()) {
+                outside.add(i, point.value());
             }
-            data.addSeries(line);
+            if (point.rejected()) {
+                rejected.add(i, point.value());
+            }
         }
+        data.addSeries(values);
+        data.addSeries(centre);
+        data.addSeries(upper);
+        data.addSeries(lower);
+        data.addSeries(outside);
+        data.addSeries(rejected);
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
+        renderer.setSeriesPaint(0, ChartStyle.DATA);
+        renderer.setSeriesStroke(0, new BasicStroke(1.6f));
         renderer.setSeriesShapesVisible(0, true);
-        renderer.setSeriesShape(0, new Rectangle2D.Double(-3, -3, 6, 6));
-        Color[] colours = {PALETTE[0], PALETTE[2], PALETTE[1], PALETTE[1]};
-        for (int s = 0; s < names.length; s++) {
-            renderer.setSeriesPaint(s, colours[s]);
-            renderer.setSeriesStroke(s, s == 0 ? new BasicStroke(1.5f) : new BasicStroke(1.2f, BasicStroke.CAP_BUTT,
-                    BasicStroke.JOIN_MITER, 10f, new float[] {5f, 3f}, 0f));
-        }
-        renderer.setSeriesVisibleInLegend(3, false);
-        NumberAxis order = new NumberAxis("Lot, in order received (1 = " + (lots.isEmpty() ? "" : lots.get(0)) + ")");
-        order.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
+        renderer.setSeriesShape(0, ChartStyle.point());
+        renderer.setSeriesPaint(1, ChartStyle.CALM);
+        renderer.setSeriesStroke(1, ChartStyle.centre());
+        renderer.setSeriesPaint(2, ChartStyle.ALERT);
+        renderer.setSeriesStroke(2, ChartStyle.limit());
+        renderer.setSeriesPaint(3, ChartStyle.ALERT);
+        renderer.setSeriesStroke(3, ChartStyle.limit());
+        renderer.setSeriesPaint(4, ChartStyle.ALERT);
+        renderer.setSeriesLinesVisible(4, false);
+        renderer.setSeriesShapesVisible(4, true);
+        renderer.setSeriesShape(4, ChartStyle.outside());
+        renderer.setSeriesPaint(5, ChartStyle.INK);
+        renderer.setSeriesLinesVisible(5, false);
+        renderer.setSeriesShapesVisible(5, true);
+        renderer.setSeriesShapesFilled(5, false);
+        renderer.setSeriesOutlineStroke(5, new BasicStroke(1.8f));
+        renderer.setSeriesShape(5, ChartStyle.ring());
+        renderer.setUseOutlinePaint(false);
+        renderer.setDrawOutlines(true);
+
+        String[] names = points.stream().map(ControlPoint::lot).toArray(String[]::new);
+        org.jfree.chart.axis.SymbolAxis order = new org.jfree.chart.axis.SymbolAxis("Lot, in the order received",
+                names);
+        order.setVerticalTickLabels(true);
+        order.setGridBandsVisible(false);
+        order.setRange(-0.6, Math.max(points.size() - 0.4, 0.6));
         XYPlot plot = new XYPlot(data, order, valueAxis, renderer);
-        return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, style(plot), true));
+        valueAxis.setUpperMargin(0.12);
+
+        LegendItemCollection legend = new LegendItemCollection();
+        legend.add(legendLine(valueName, ChartStyle.DATA, new BasicStroke(1.6f), ChartStyle.point(), true));
+        legend.add(legendLine("Centre line", ChartStyle.CALM, ChartStyle.centre(), null, false));
+        legend.add(legendLine("Upper and lower control limits (3 sigma)", ChartStyle.ALERT, ChartStyle.limit(), null,
+                false));
+        if (!outside.isEmpty()) {
+            legend.add(legendMark("Outside the control limits", ChartStyle.ALERT, ChartStyle.outside(), true));
+        }
+        if (!rejected.isEmpty()) {
+            legend.add(legendMark("Lot rejected", ChartStyle.INK, ChartStyle.ring(), false));
+        }
+        shadeSeverity(plot, points, legend);
+        for (SwitchMark change : switches) {
+            ValueMarker line = new ValueMarker(change.afterIndex() + 0.5, ChartStyle.INK, new BasicStroke(1.2f,
+                    BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, new float[] {2f, 2f}, 0f));
+            line.setLabel("to " + change.to());
+            line.setLabelFont(ChartStyle.NOTE_BOLD);
+            line.setLabelPaint(ChartStyle.INK);
+            line.setLabelBackgroundColor(new Color(255, 255, 255, 225));
+            boolean atEnd = change.afterIndex() >= points.size() - 1;
+            // A switch after the last lot reads to the left of its line, inside the plot.
+            line.setLabelAnchor(atEnd ? RectangleAnchor.TOP_LEFT : RectangleAnchor.TOP_RIGHT);
+            line.setLabelTextAnchor(atEnd ? TextAnchor.TOP_RIGHT : TextAnchor.TOP_LEFT);
+            plot.addDomainMarker(line, org.jfree.chart.ui.Layer.FOREGROUND);
+        }
+        if (!switches.isEmpty()) {
+            legend.add(legendLine("Severity switch (after the lot on its left)", ChartStyle.INK, new BasicStroke(1.2f,
+                    BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, new float[] {2f, 2f}, 0f), null, false));
+        }
+        plot.setFixedLegendItems(legend);
+        return finish(new JFreeChart(title, ChartStyle.TITLE, style(plot), true));
+    }
+
+    /** Shades each stretch of lots judged under tightened or reduced inspection. */
+    private static void shadeSeverity(XYPlot plot, List<ControlPoint> points, LegendItemCollection legend) {
+        boolean tightened = false;
+        boolean reduced = false;
+        int i = 0;
+        while (i < points.size()) {
+            String severity = points.get(i).severity();
+            int j = i;
+            while (j + 1 < points.size() && java.util.Objects.equals(points.get(j + 1).severity(), severity)) {
+                j++;
+            }
+            if ("tightened".equals(severity) || "reduced".equals(severity)) {
+                Color shade = "tightened".equals(severity) ? ChartStyle.TIGHTENED_SHADE : ChartStyle.REDUCED_SHADE;
+                org.jfree.chart.plot.IntervalMarker band = new org.jfree.chart.plot.IntervalMarker(i - 0.5, j + 0.5,
+                        shade);
+                plot.addDomainMarker(band, org.jfree.chart.ui.Layer.BACKGROUND);
+                tightened |= "tightened".equals(severity);
+                reduced |= "reduced".equals(severity);
+            }
+            i = j + 1;
+        }
+        if (tightened) {
+            legend.add(legendShade("Judged under tightened inspection", ChartStyle.TIGHTENED_SHADE));
+        }
+        if (reduced) {
+            legend.add(legendShade("Judged under reduced inspection", ChartStyle.REDUCED_SHADE));
+        }
+    }
+
+    private static LegendItem legendLine(String label, Color colour, BasicStroke stroke, Shape shape, boolean filled) {
+        LegendItem item = new LegendItem(label, null, null, null, shape != null,
+                shape != null ? shape : new Rectangle2D.Double(-3, -3, 6, 6), filled, colour, false, colour, stroke,
+                true, new java.awt.geom.Line2D.Double(-10, 0, 10, 0), stroke, colour);
+        item.setLabelFont(ChartStyle.LEGEND);
+        return item;
+    }
+
+    private static LegendItem legendShade(String label, Color shade) {
+        LegendItem item = new LegendItem(label, null, null, null, true, new Rectangle2D.Double(-7, -6, 14, 12), true,
+                shade, true, ChartStyle.QUIET, new BasicStroke(0.8f), false,
+                new java.awt.geom.Line2D.Double(-10, 0, 10, 0), new BasicStroke(1f), shade);
+        item.setLabelFont(ChartStyle.LEGEND);
+        return item;
+    }
+
+    private static LegendItem legendMark(String label, Color colour, Shape shape, boolean filled) {
+        LegendItem item = new LegendItem(label, null, null, null, true, shape, filled, colour, !filled, colour,
+                new BasicStroke(1.8f), false, new java.awt.geom.Line2D.Double(-10, 0, 10, 0), new BasicStroke(1f),
+                colour);
+        item.setLabelFont(ChartStyle.LEGEND);
+        return item;
     }
 
     /** The Pareto chart: defect types as bars, most frequent first, with the cumulative share as a line. */
@@ -210,7 +390,7 @@ public final class Charts {
         org.jfree.chart.plot.CategoryPlot plot = new org.jfree.chart.plot.CategoryPlot(bars,
                 new org.jfree.chart.axis.CategoryAxis("Defect type"), new NumberAxis("Nonconforming units"),
                 new org.jfree.chart.renderer.category.BarRenderer());
-        plot.getRenderer().setSeriesPaint(0, PALETTE[0]);
+        plot.getRenderer().setSeriesPaint(0, ChartStyle.DATA);
         ((org.jfree.chart.renderer.category.BarRenderer) plot.getRenderer()).setShadowVisible(false);
         ((org.jfree.chart.renderer.category.BarRenderer) plot.getRenderer())
                 .setBarPainter(new org.jfree.chart.renderer.category.StandardBarPainter());
@@ -220,18 +400,27 @@ public final class Charts {
         plot.mapDatasetToRangeAxis(1, 1);
         org.jfree.chart.renderer.category.LineAndShapeRenderer cumulativeRenderer =
                 new org.jfree.chart.renderer.category.LineAndShapeRenderer();
-        cumulativeRenderer.setSeriesPaint(0, PALETTE[1]);
+        cumulativeRenderer.setSeriesPaint(0, ChartStyle.ALERT);
+        cumulativeRenderer.setSeriesStroke(0, ChartStyle.data());
+        cumulativeRenderer.setSeriesShape(0, ChartStyle.point());
         plot.setRenderer(1, cumulativeRenderer);
         plot.setDatasetRenderingOrder(org.jfree.chart.plot.DatasetRenderingOrder.FORWARD);
         plot.getDomainAxis().setCategoryLabelPositions(org.jfree.chart.axis.CategoryLabelPositions.UP_45);
         plot.setBackgroundPaint(Color.WHITE);
-        plot.setRangeGridlinePaint(new Color(0xdd, 0xdd, 0xdd));
-        return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, true));
+        plot.setRangeGridlinePaint(ChartStyle.GRID);
+        plot.setOutlinePaint(ChartStyle.GRID);
+        for (int a = 0; a < 2; a++) {
+            axisFonts(plot.getRangeAxis(a));
+        }
+        axisFonts(plot.getDomainAxis());
+        return finish(new JFreeChart(title, ChartStyle.TITLE, plot, true));
     }
 
     /** Adds a line under the title, such as the model and lot size. */
     public static JFreeChart withSubtitle(JFreeChart chart, String subtitle) {
-        TextTitle line = new TextTitle(subtitle, new Font(Font.SANS_SERIF, Font.PLAIN, 13));
+        TextTitle line = new TextTitle(subtitle, ChartStyle.SUBTITLE, ChartStyle.INK,
+                org.jfree.chart.ui.RectangleEdge.TOP, org.jfree.chart.ui.HorizontalAlignment.CENTER,
+                org.jfree.chart.ui.VerticalAlignment.CENTER, new org.jfree.chart.ui.RectangleInsets(2, 4, 6, 4));
         chart.addSubtitle(0, line);
         return chart;
     }
@@ -258,48 +447,70 @@ public final class Charts {
         if (lotSize > 0) {
             combined.add(atiPlot(perUnit, curve, sampleSize, lotSize, false), 2);
         }
-        return finish(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, combined, true));
+        return finish(new JFreeChart(title, ChartStyle.TITLE, combined, true));
     }
 
     private static XYPlot ocPlot(boolean perUnit, List<ChartCurve> curves, List<RiskMark> marks, String marksLabel) {
+        return ocPlot(perUnit, curves, marks, marksLabel, List.of(), null);
+    }
+
+    /**
+     * The OC curves with two kinds of marks: points asked of the plan (squares) and points observed (diamonds).
+     * Labels sit up and to the right of their point, where a falling curve leaves room.
+     */
+    private static XYPlot ocPlot(boolean perUnit, List<ChartCurve> curves, List<RiskMark> marks, String marksLabel,
+            List<RiskMark> observed, String observedLabel) {
         XYSeriesCollection data = new XYSeriesCollection();
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
         for (int i = 0; i < curves.size(); i++) {
             data.addSeries(series(curves.get(i), CurvePoint::acceptance));
-            renderer.setSeriesPaint(i, PALETTE[i % PALETTE.length]);
-            renderer.setSeriesStroke(i, new BasicStroke(2f));
+            renderer.setSeriesPaint(i, ChartStyle.series(i));
+            renderer.setSeriesStroke(i, ChartStyle.seriesStroke(i));
         }
-        XYPlot plot = new XYPlot(data, qualityAxisOf(perUnit), percentAxis("Probability of acceptance"), renderer);
-        plot.getRangeAxis().setRange(0, 1.02);
-        if (!marks.isEmpty()) {
+        NumberAxis probability = percentAxis("Probability of acceptance");
+        probability.setRange(0, 1.09);
+        probability.setTickUnit(new org.jfree.chart.axis.NumberTickUnit(0.1, probability.getNumberFormatOverride()));
+        XYPlot plot = new XYPlot(data, qualityAxisOf(perUnit), probability, renderer);
+        int index = 1;
+        for (int kind = 0; kind < 2; kind++) {
+            List<RiskMark> list = kind == 0 ? marks : observed;
+            if (list.isEmpty()) {
+                continue;
+            }
             XYSeriesCollection points = new XYSeriesCollection();
-            XYSeries asked = new XYSeries(marksLabel, false, true);
-            for (RiskMark mark : marks) {
+            XYSeries asked = new XYSeries(kind == 0 ? marksLabel : observedLabel, false, true);
+            for (RiskMark mark : list) {
                 asked.add(mark.quality(), mark.acceptance());
-                XYTextAnnotation text = new XYTextAnnotation("  " + mark.label(), mark.quality(), mark.acceptance());
-                text.setFont(LABEL);
-                text.setTextAnchor(mark.acceptance() > 0.5 ? TextAnchor.TOP_LEFT : TextAnchor.BOTTOM_LEFT);
-                plot.addAnnotation(text);
+                if (mark.label().isEmpty()) {
+                    continue;
+                }
+                XYTextAnnotation text = new XYTextAnnotation(" " + mark.label() + " ", mark.quality(), mark.acceptance());
+                text.setFont(kind == 0 ? LABEL : ChartStyle.NOTE_BOLD);
+                text.setPaint(ChartStyle.INK);
+                text.setBackgroundPaint(new Color(255, 255, 255, 215));
+                text.setTextAnchor(TextAnchor.BOTTOM_LEFT);
+                plot.addAnnotation(new OffsetText(text, 8, -8));
             }
             points.addSeries(asked);
             XYLineAndShapeRenderer dots = new XYLineAndShapeRenderer(false, true);
-            dots.setSeriesPaint(0, MARK);
-            dots.setSeriesShape(0, new Rectangle2D.Double(-4, -4, 8, 8));
-            plot.setDataset(1, points);
-            plot.setRenderer(1, dots);
+            dots.setSeriesPaint(0, kind == 0 ? ChartStyle.QUIET : ChartStyle.INK);
+            dots.setSeriesShape(0, kind == 0 ? ChartStyle.designPoint() : ChartStyle.observed());
+            plot.setDataset(index, points);
+            plot.setRenderer(index, dots);
+            index++;
         }
         return style(plot);
     }
 
     private static XYPlot aoqPlot(boolean perUnit, ChartCurve curve, double aoql, double aoqlAt, boolean legend) {
         XYSeriesCollection data = new XYSeriesCollection(series(curve, CurvePoint::aoq));
-        XYLineAndShapeRenderer renderer = lines(PALETTE[0], legend);
+        XYLineAndShapeRenderer renderer = lines(ChartStyle.DATA, legend);
         String outgoing = perUnit ? "Average outgoing quality (per 100 units)" : "Average outgoing quality";
         XYPlot plot = new XYPlot(data, qualityAxisOf(perUnit), percentAxis(outgoing), renderer);
-        ValueMarker limit = new ValueMarker(aoql, PALETTE[1], new BasicStroke(1.2f, BasicStroke.CAP_BUTT,
-                BasicStroke.JOIN_MITER, 10f, new float[] {6f, 4f}, 0f));
+        ValueMarker limit = new ValueMarker(aoql, ChartStyle.ALERT, ChartStyle.limit());
         limit.setLabel("AOQL " + percent(aoql) + " at incoming " + percent(aoqlAt) + "  ");
         limit.setLabelFont(LABEL);
+        limit.setLabelBackgroundColor(new Color(255, 255, 255, 225));
         limit.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
         limit.setLabelTextAnchor(TextAnchor.BOTTOM_RIGHT);
         plot.addRangeMarker(limit);
@@ -309,14 +520,15 @@ public final class Charts {
 
     private static XYPlot atiPlot(boolean perUnit, ChartCurve curve, int sampleSize, int lotSize, boolean legend) {
         XYSeriesCollection data = new XYSeriesCollection(series(curve, CurvePoint::ati));
-        XYLineAndShapeRenderer renderer = lines(PALETTE[2], legend);
+        XYLineAndShapeRenderer renderer = lines(ChartStyle.CALM, legend);
         NumberAxis units = new NumberAxis("Units inspected per lot");
         units.setRange(0, lotSize * 1.05);
         XYPlot plot = new XYPlot(data, qualityAxisOf(perUnit), units, renderer);
         for (double level : new double[] {sampleSize, lotSize}) {
-            ValueMarker marker = new ValueMarker(level, MARK, new BasicStroke(0.8f));
+            ValueMarker marker = new ValueMarker(level, ChartStyle.QUIET, ChartStyle.reference());
             marker.setLabel((level == lotSize ? "whole lot N = " : "fewest inspected = ") + (int) level + "  ");
             marker.setLabelFont(LABEL);
+            marker.setLabelBackgroundColor(new Color(255, 255, 255, 225));
             marker.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
             marker.setLabelTextAnchor(TextAnchor.BOTTOM_RIGHT);
             plot.addRangeMarker(marker);
@@ -329,7 +541,7 @@ public final class Charts {
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
         renderer.setSeriesVisibleInLegend(0, legend);
         renderer.setSeriesPaint(0, colour);
-        renderer.setSeriesStroke(0, new BasicStroke(2f));
+        renderer.setSeriesStroke(0, ChartStyle.data());
         return renderer;
     }
 
@@ -370,16 +582,77 @@ public final class Charts {
 
     private static XYPlot style(XYPlot plot) {
         plot.setBackgroundPaint(Color.WHITE);
-        plot.setDomainGridlinePaint(new Color(0xdd, 0xdd, 0xdd));
-        plot.setRangeGridlinePaint(new Color(0xdd, 0xdd, 0xdd));
-        plot.setOutlinePaint(new Color(0xaa, 0xaa, 0xaa));
+        plot.setDomainGridlinePaint(ChartStyle.GRID);
+        plot.setRangeGridlinePaint(ChartStyle.GRID);
+        plot.setDomainGridlineStroke(new BasicStroke(0.8f));
+        plot.setRangeGridlineStroke(new BasicStroke(0.8f));
+        plot.setOutlinePaint(ChartStyle.QUIET);
+        for (int a = 0; a < plot.getDomainAxisCount(); a++) {
+            axisFonts(plot.getDomainAxis(a));
+        }
+        for (int a = 0; a < plot.getRangeAxisCount(); a++) {
+            axisFonts(plot.getRangeAxis(a));
+        }
         return plot;
+    }
+
+    private static void axisFonts(org.jfree.chart.axis.Axis axis) {
+        if (axis == null) {
+            return;
+        }
+        axis.setLabelFont(ChartStyle.AXIS_LABEL);
+        axis.setLabelPaint(ChartStyle.INK);
+        axis.setTickLabelFont(ChartStyle.TICKS);
+        axis.setTickLabelPaint(ChartStyle.INK);
+        axis.setAxisLinePaint(ChartStyle.QUIET);
+        axis.setTickMarkPaint(ChartStyle.QUIET);
     }
 
     private static JFreeChart finish(JFreeChart chart) {
         chart.setBackgroundPaint(Color.WHITE);
         chart.setAntiAlias(true);
+        chart.setTextAntiAlias(true);
+        if (chart.getTitle() != null) {
+            chart.getTitle().setPaint(ChartStyle.INK);
+        }
+        if (chart.getPlot() instanceof CombinedDomainXYPlot combined) {
+            axisFonts(combined.getDomainAxis());
+            for (Object sub : combined.getSubplots()) {
+                style((XYPlot) sub);
+            }
+        }
+        if (chart.getLegend() != null) {
+            chart.getLegend().setItemFont(ChartStyle.LEGEND);
+            chart.getLegend().setItemPaint(ChartStyle.INK);
+            chart.getLegend().setFrame(org.jfree.chart.block.BlockBorder.NONE);
+        }
         return chart;
     }
 
+    /** A text annotation moved by a few points from its data point, so that it never sits on the mark or curve. */
+    private static final class OffsetText extends org.jfree.chart.annotations.AbstractXYAnnotation {
+        private static final long serialVersionUID = 1L;
+        private final XYTextAnnotation text;
+        private final double dx;
+        private final double dy;
+
+        OffsetText(XYTextAnnotation text, double dx, double dy) {
+            this.text = text;
+            this.dx = dx;
+            this.dy = dy;
+        }
+
+        @Override
+        public void draw(java.awt.Graphics2D g2, XYPlot plot, Rectangle2D dataArea,
+                org.jfree.chart.axis.ValueAxis domainAxis, org.jfree.chart.axis.ValueAxis rangeAxis, int rendererIndex,
+                org.jfree.chart.plot.PlotRenderingInfo info) {
+            java.awt.Graphics2D shifted = (java.awt.Graphics2D) g2.create();
+            try {
+                shifted.translate(dx, dy);
+                text.draw(shifted, plot, dataArea, domainAxis, rangeAxis, rendererIndex, null);
+            } finally {
+                shifted.dispose();
+            }
+        }
+    }
 }

@@ -7,6 +7,7 @@ import java.util.Locale;
 import lotgate.sampling.OcModel;
 import lotgate.sampling.OperatingCharacteristic;
 import lotgate.sentencing.ClassVerdict;
+import lotgate.sentencing.Evidence;
 import lotgate.sentencing.LotDecision;
 import org.jfree.chart.JFreeChart;
 
@@ -45,17 +46,31 @@ public final class LotReport {
                     .designedFor().ltpd()), 1.2 * verdict.evidence().observed()));
         }
         range = Math.min(range, model.maxQuality());
+        List<Charts.RiskMark> design = new ArrayList<>();
+        boolean classified = !decision.plan().unclassified();
+        boolean measured = decision.measured() != null;
         for (ClassVerdict verdict : decision.sentence().classes()) {
             OperatingCharacteristic oc = new OperatingCharacteristic(verdict.plan(), model, lotSize);
-            String label = (decision.plan().unclassified() ? "" : verdict.defectClass().label() + ": ")
-                    + PlanWording.brief(verdict.plan());
-            curves.add(new ChartCurve(label, oc.curve(range, 300)));
-            marks.add(new Charts.RiskMark((decision.plan().unclassified() ? "" : verdict.defectClass().label() + " ")
-                    + "found " + verdict.found() + " of " + verdict.inspected(), verdict.evidence().observed(),
-                    verdict.evidence().acceptanceAtObserved()));
+            String prefix = classified ? verdict.defectClass().label() + " " : "";
+            curves.add(new ChartCurve((classified ? verdict.defectClass().label() + ": " : "")
+                    + PlanWording.brief(verdict.plan()), oc.curve(range, 300)));
+            Evidence evidence = verdict.evidence();
+            lotgate.sampling.RiskPoints asked = decision.plan().criteria(verdict.defectClass()).designedFor();
+            // With several classes the risks stay in the evidence lines: their labels would cover each other.
+            design.add(new Charts.RiskMark(classified ? "" : "AQL " + SentenceText.percent(asked.aql())
+                    + ": producer's risk " + SentenceText.percent(verdict.plan().rejection(model, asked.aql())),
+                    asked.aql(), evidence.acceptanceAtAql()));
+            design.add(new Charts.RiskMark(classified ? "" : "LTPD " + SentenceText.percent(asked.ltpd())
+                    + ": consumer's risk " + SentenceText.percent(evidence.acceptanceAtLtpd()), asked.ltpd(),
+                    evidence.acceptanceAtLtpd()));
+            marks.add(new Charts.RiskMark(measured ? "this lot: estimate " + SentenceText.percent(evidence.observed())
+                    : prefix + "this lot: " + verdict.found() + " in " + verdict.inspected() + " ("
+                            + SentenceText.percent(evidence.observed()) + ")", evidence.observed(),
+                    evidence.acceptanceAtObserved()));
         }
-        JFreeChart chart = Charts.oc("OC curve and the lot's observed quality", !model.countsUnits(), curves, marks,
-                "Observed in this lot's sample");
+        String title = measured ? "OC curve and the lot's estimated quality" : "OC curve and the lot's observed quality";
+        JFreeChart chart = Charts.oc(title, !model.countsUnits(), curves, design, "Design points and their risks",
+                marks, measured ? "This lot's estimated fraction beyond the limits" : "Observed in this lot's sample");
         return Charts.withSubtitle(chart, "lot " + decision.lot().lot() + ", plan " + decision.plan().name());
     }
 

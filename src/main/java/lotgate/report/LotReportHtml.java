@@ -66,7 +66,7 @@ final class LotReportHtml {
                 .append(".facts td:nth-child(odd) { font-weight: bold; }\n")
                 .append("svg { width: 100%; height: auto; } .small { font-size: 8pt; color: #555; }\n")
                 .append("pre { font: inherit; margin: 0; white-space: pre-wrap; }\n")
-                .append("@media print { body { font-size: 8pt; } pre { font-size: 7.5pt; } svg { max-height: 58mm; } h1 { font-size: 12pt; } }\n")
+                .append("@media print { body { font-size: 8pt; } pre { font-size: 7.5pt; } svg { max-height: 74mm; } h1 { font-size: 12pt; } }\n")
                 .append("</style></head><body>\n");
         html.append("<h1>Lot ").append(escape(lot.lot())).append(" <span class=\"verdict\">")
                 .append(accepted ? "ACCEPT" : "REJECT").append("</span></h1>\n");
@@ -108,9 +108,10 @@ final class LotReportHtml {
             html.append(escape("Note: " + notice)).append('\n');
         }
         html.append("</pre>\n");
-        SVGGraphics2D svg = new SVGGraphics2D(900, 430);
-        LotReport.ocChart(decision).draw(svg, new java.awt.Rectangle(0, 0, 900, 430));
-        html.append(svg.getSVGElement(null, false, new ViewBox(0, 0, 900, 430), null, null)).append('\n');
+        // A small canvas keeps the chart's lettering large once the page scales it to print width.
+        SVGGraphics2D svg = new SVGGraphics2D(660, 400);
+        LotReport.ocChart(decision).draw(svg, new java.awt.Rectangle(0, 0, 660, 400));
+        html.append(svg.getSVGElement(null, false, new ViewBox(0, 0, 660, 400), null, null)).append('\n');
         if (!sample.nonconforming().isEmpty()) {
             html.append("<table><tr><th>Row</th><th>Unit</th>").append(sample.passFail() ? ""
                     : "<th>Critical</th><th>Major</th><th>Minor</th>").append("<th>Defect</th><th>Note</th></tr>\n");

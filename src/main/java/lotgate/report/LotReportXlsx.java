@@ -44,11 +44,11 @@ final class LotReportXlsx {
 
     private LotReportXlsx(LotDecision decision) {
         this.decision = decision;
-        Font boldFont = workbook.createFont();
+        Font boldFont = WorkbookLayout.font(workbook);
         boldFont.setBold(true);
         bold = workbook.createCellStyle();
         bold.setFont(boldFont);
-        Font big = workbook.createFont();
+        Font big = WorkbookLayout.font(workbook);
         big.setBold(true);
         big.setFontHeightInPoints((short) 16);
         title = workbook.createCellStyle();
@@ -60,7 +60,7 @@ final class LotReportXlsx {
         highlighted.setFillPattern(FillPatternType.SOLID_FOREGROUND);
         quoted = workbook.createCellStyle();
         quoted.setQuotePrefixed(true);
-        Font verdictFont = workbook.createFont();
+        Font verdictFont = WorkbookLayout.font(workbook);
         verdictFont.setBold(true);
         verdictFont.setFontHeightInPoints((short) 14);
         verdictFont.setColor(IndexedColors.WHITE.getIndex());

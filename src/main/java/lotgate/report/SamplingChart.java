@@ -26,10 +26,8 @@ public final class SamplingChart {
         Plan plan = verdict.plan();
         InspectionSample sample = decision.sample();
         boolean units = decision.countsUnits();
-        int shown = plan instanceof SequentialPlan sequential
-                ? Math.min(sequential.truncation(), Math.max(verdict.inspected() + 20, Math.min(sequential.truncation(),
-                        3 * verdict.inspected())))
-                : plan.maxSampleSize();
+        // A sequential plan is drawn to its truncation point, where its two boundaries meet.
+        int shown = plan.maxSampleSize();
         double[] accept = new double[shown + 1];
         double[] reject = new double[shown + 1];
         double[] path = new double[verdict.inspected() + 1];
@@ -38,8 +36,8 @@ public final class SamplingChart {
         Arrays.fill(path, Double.NaN);
         if (plan instanceof SequentialPlan sequential) {
             for (int m = 1; m <= shown; m++) {
-                accept[m] = -sequential.h1() + sequential.slope() * m;
-                reject[m] = sequential.h2() + sequential.slope() * m;
+                accept[m] = sequential.acceptanceNumber(m);
+                reject[m] = sequential.rejectionNumber(m);
             }
             long count = 0;
             int[] sequence = sample.sequence();

@@ -12,22 +12,15 @@ import lotgate.history.SeverityTracker;
 import lotgate.history.SupplierAudit;
 import org.apache.poi.ss.usermodel.CellStyle;
 import org.apache.poi.ss.usermodel.Font;
-import org.apache.poi.ss.util.CellRangeAddress;
+import org.apache.poi.xddf.usermodel.PresetLineDash;
 import org.apache.poi.xddf.usermodel.chart.AxisPosition;
-import org.apache.poi.xddf.usermodel.chart.BarDirection;
-import org.apache.poi.xddf.usermodel.chart.ChartTypes;
-import org.apache.poi.xddf.usermodel.chart.LegendPosition;
 import org.apache.poi.xddf.usermodel.chart.MarkerStyle;
 import org.apache.poi.xddf.usermodel.chart.XDDFBarChartData;
 import org.apache.poi.xddf.usermodel.chart.XDDFCategoryAxis;
-import org.apache.poi.xddf.usermodel.chart.XDDFChartData;
 import org.apache.poi.xddf.usermodel.chart.XDDFDataSource;
-import org.apache.poi.xddf.usermodel.chart.XDDFDataSourcesFactory;
 import org.apache.poi.xddf.usermodel.chart.XDDFLineChartData;
-import org.apache.poi.xddf.usermodel.chart.XDDFNumericalDataSource;
 import org.apache.poi.xddf.usermodel.chart.XDDFValueAxis;
 import org.apache.poi.xssf.usermodel.XSSFChart;
-import org.apache.poi.xssf.usermodel.XSSFDrawing;
 import org.apache.poi.xssf.usermodel.XSSFRow;
 import org.apache.poi.xssf.usermodel.XSSFSheet;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
@@ -111,135 +104,283 @@ public final class SupplierReport {
 
     private static void xlsx(SupplierAudit audit, List<String> evidence, Path file) {
         try (XSSFWorkbook workbook = new XSSFWorkbook()) {
+            String generated = java.time.LocalDate.now(java.time.ZoneOffset.UTC).toString();
+            WorkbookLayout.baseFont(workbook);
+            String title = title(audit);
+            String subject = audit.supplier() + (audit.part() == null ? "" : ", part " + audit.part());
             CellStyle bold = workbook.createCellStyle();
-            Font font = workbook.createFont();
+            Font font = WorkbookLayout.font(workbook);
             font.setBold(true);
             bold.setFont(font);
+            CellStyle big = workbook.createCellStyle();
+            Font bigFont = WorkbookLayout.font(workbook);
+            bigFont.setBold(true);
+            bigFont.setFontHeightInPoints((short) 14);
+            big.setFont(bigFont);
+            big.setWrapText(true);
             CellStyle quoted = workbook.createCellStyle();
             quoted.setQuotePrefixed(true);
-            CellStyle percent = workbook.createCellStyle();
-            percent.setDataFormat(workbook.createDataFormat().getFormat("0.00%"));
+            CellStyle percent = WorkbookLayout.format(workbook, "0.00%");
+            CellStyle count = WorkbookLayout.format(workbook, "#,##0");
+            CellStyle day = WorkbookLayout.format(workbook, "yyyy-mm-dd");
+            CellStyle measure = WorkbookLayout.format(workbook, "0.0000");
+            CellStyle wrapped = WorkbookLayout.wrapped(workbook);
+            CellStyle heading = WorkbookLayout.heading(workbook);
+            CellStyle text = WorkbookLayout.text(workbook);
+            CellStyle numberHeading = WorkbookLayout.numberHeading(workbook);
             Cells cells = new Cells(bold, quoted, percent);
 
             XSSFSheet summary = workbook.createSheet("Summary");
-            summary.setColumnWidth(0, 110 * 256);
+            int lineWidth = 100;
+            summary.setColumnWidth(0, lineWidth * 256);
             int r = 0;
-            cells.put(summary.createRow(r++), 0, title(audit), bold);
+            cells.line(summary.createRow(r++), title, big, lineWidth, 18);
+            cells.line(summary.createRow(r++), "made " + generated + " by lotgate", null, lineWidth, 13);
+            r++;
             for (String line : summary(audit)) {
-                cells.put(summary.createRow(r++), 0, line, null);
+                cells.line(summary.createRow(r++), line, wrapped, lineWidth, 13);
             }
             r++;
             cells.put(summary.createRow(r++), 0, "Severity switches", bold);
             for (SupplierAudit.Part part : audit.parts()) {
+                if (part.switches().isEmpty()) {
+                    cells.line(summary.createRow(r++), part.part() + ": normal inspection throughout", wrapped,
+                            lineWidth, 13);
+                }
                 for (SeverityTracker.Switch change : part.switches()) {
-                    cells.put(summary.createRow(r++), 0, part.part() + ": after lot " + (change.lot() == null ? "-"
+                    cells.line(summary.createRow(r++), part.part() + ": after lot " + (change.lot() == null ? "-"
                             : change.lot()) + ", " + change.from().label() + " to " + change.to().label() + ": "
-                            + change.reason(), null);
+                            + change.reason(), wrapped, lineWidth, 13);
                 }
             }
             r++;
             cells.put(summary.createRow(r++), 0, "Rejected lots", bold);
+            if (audit.rejectedLots().isEmpty()) {
+                cells.line(summary.createRow(r++), "none in this period", wrapped, lineWidth, 13);
+            }
             for (int i = 0; i < audit.rejectedLots().size(); i++) {
                 LotRow lot = audit.rejectedLots().get(i);
-                cells.put(summary.createRow(r++), 0, "#" + lot.seq() + " " + lot.lot() + " (" + lot.part() + ", received "
-                        + lot.received() + "): " + evidence.get(i), null);
+                cells.line(summary.createRow(r++), "record " + lot.seq() + ", lot " + lot.lot() + " (" + lot.part()
+                        + ", received " + lot.received() + "): " + evidence.get(i), wrapped, lineWidth, 13);
             }
+            WorkbookLayout.print(workbook, summary, false, 0, r, 0, false, title, subject, generated);
 
             XSSFSheet lots = workbook.createSheet("Lots");
-            String[] headings = {"Record", "Lot", "Part", "Received", "Inspected", "Nonconforming", "Fraction",
-                    "Centre", "Lower limit", "Upper limit", "Verdict", "Severity"};
+            String[] headings = {"Record", "Lot", "Part", "Received", "Units inspected", "Nonconforming units",
+                    "Fraction nonconforming", "Centre line", "Lower control limit", "Upper control limit", "Verdict",
+                    "Severity"};
+            WorkbookLayout.Widths widths = new WorkbookLayout.Widths(headings.length);
             XSSFRow head = lots.createRow(0);
+            head.setHeightInPoints(44);
             for (int c = 0; c < headings.length; c++) {
-                cells.put(head, c, headings[c], bold);
+                cells.put(head, c, headings[c], c == 0 || (c >= 4 && c <= 9) ? numberHeading : heading);
+                widths.note(c, headings[c], true);
             }
             for (int index = 0; index < audit.pChart().size(); index++) {
                 QualityStatistics.PChartPoint point = audit.pChart().get(index);
                 LotRow lot = audit.lotsInOrder().get(index);
                 XSSFRow row = lots.createRow(index + 1);
-                cells.put(row, 0, lot.seq(), null);
-                cells.put(row, 1, point.lot(), null);
-                cells.put(row, 2, lot.part(), null);
-                cells.put(row, 3, lot.received() == null ? null : lot.received().toString(), null);
-                cells.put(row, 4, point.inspected(), null);
-                cells.put(row, 5, lot.nonconforming(), null);
+                cells.put(row, 0, lot.seq(), count);
+                cells.put(row, 1, point.lot(), text);
+                cells.put(row, 2, lot.part(), text);
+                if (lot.received() != null) {
+                    row.createCell(3).setCellValue(lot.received());
+                    row.getCell(3).setCellStyle(day);
+                }
+                cells.put(row, 4, point.inspected(), count);
+                cells.put(row, 5, lot.nonconforming(), count);
                 cells.put(row, 6, point.fraction(), percent);
                 cells.put(row, 7, point.centre(), percent);
                 cells.put(row, 8, point.lower(), percent);
                 cells.put(row, 9, point.upper(), percent);
-                cells.put(row, 10, lot.verdict(), null);
-                cells.put(row, 11, lot.severity(), null);
+                cells.put(row, 10, lot.verdict(), text);
+                cells.put(row, 11, lot.severity(), text);
+                widths.note(1, point.lot(), false);
+                widths.note(2, lot.part(), false);
+                widths.note(3, "2026-12-31", false);
+                widths.note(10, lot.verdict(), false);
+                widths.note(11, lot.severity(), false);
             }
+            widths.apply(lots, 8, 28);
+            lots.createFreezePane(0, 1);
             int n = audit.pChart().size();
+            WorkbookLayout.print(workbook, lots, true, headings.length - 1, n, 1, false, title, subject, generated);
             if (n > 0) {
-                XSSFSheet chartSheet = workbook.createSheet("p-chart");
-                lineChart(chartSheet, lots, 1, "p-chart of lot fractions nonconforming", "Fraction nonconforming", "0.0%",
-                        n, 6, new String[] {"Lot fraction", "Centre", "Lower limit", "Upper limit"}, 0);
+                pChartSheet(workbook, audit, cells, percent, title, subject, generated);
             }
             MeasurementCharts charts = audit.measurements();
             if (charts != null) {
                 XSSFSheet measured = workbook.createSheet("Measurements");
-                String[] columns = {"Lot", "Received", "n", "Mean", "Centre", "Lower limit", "Upper limit", "s",
-                        "s centre", "s lower limit", "s upper limit"};
+                String[] columns = {"Lot", "Received", "Units measured", "Mean", "Centre line", "Lower control limit",
+                        "Upper control limit", "s", "s centre line", "s lower control limit", "s upper control limit"};
+                WorkbookLayout.Widths measuredWidths = new WorkbookLayout.Widths(columns.length);
                 XSSFRow top = measured.createRow(0);
+                top.setHeightInPoints(44);
                 for (int c = 0; c < columns.length; c++) {
-                    cells.put(top, c, columns[c], bold);
+                    cells.put(top, c, columns[c], c >= 2 ? numberHeading : heading);
+                    measuredWidths.note(c, columns[c], true);
                 }
                 int row = 1;
                 for (MeasurementCharts.Point point : charts.points()) {
                     XSSFRow line = measured.createRow(row++);
-                    cells.put(line, 0, point.lot(), null);
-                    cells.put(line, 1, point.received() == null ? null : point.received().toString(), null);
-                    cells.put(line, 2, point.n(), null);
-                    cells.put(line, 3, point.mean(), null);
-                    cells.put(line, 4, charts.grandMean(), null);
-                    cells.put(line, 5, point.meanLower(), null);
-                    cells.put(line, 6, point.meanUpper(), null);
-                    cells.put(line, 7, point.deviation(), null);
-                    cells.put(line, 8, point.deviationCentre(), null);
-                    cells.put(line, 9, point.deviationLower(), null);
-                    cells.put(line, 10, point.deviationUpper(), null);
+                    cells.put(line, 0, point.lot(), text);
+                    if (point.received() != null) {
+                        line.createCell(1).setCellValue(point.received());
+                        line.getCell(1).setCellStyle(day);
+                    }
+                    cells.put(line, 2, point.n(), count);
+                    double[] values = {point.mean(), charts.grandMean(), point.meanLower(), point.meanUpper(),
+                            point.deviation(), point.deviationCentre(), point.deviationLower(), point.deviationUpper()};
+                    for (int v = 0; v < values.length; v++) {
+                        cells.put(line, 3 + v, values[v], measure);
+                    }
+                    measuredWidths.note(0, point.lot(), false);
+                    measuredWidths.note(1, "2026-12-31", false);
                 }
+                measuredWidths.apply(measured, 9, 28);
+                measured.createFreezePane(0, 1);
                 int m = charts.points().size();
+                WorkbookLayout.print(workbook, measured, true, columns.length - 1, m, 1, false, title, subject,
+                        generated);
                 String unit = charts.unit().isEmpty() ? "" : " (" + charts.unit() + ")";
                 XSSFSheet chartSheet = workbook.createSheet("Mean and s charts");
-                lineChart(chartSheet, measured, 0, "Means of " + what(charts), "Mean" + unit, "General", m, 3,
-                        new String[] {"Lot mean", "Centre", "Lower limit", "Upper limit"}, 0);
-                lineChart(chartSheet, measured, 0, "Standard deviations of " + what(charts), "s" + unit, "General", m, 7,
-                        new String[] {"Lot s", "Centre", "Lower limit", "Upper limit"}, 31);
+                controlChart(chartSheet, measured, "Means of " + what(charts), "Mean" + unit, m, 3,
+                        new String[] {"Lot mean", "Centre line", "Lower control limit", "Upper control limit"}, 0);
+                controlChart(chartSheet, measured, "Standard deviations of " + what(charts), "s" + unit, m, 7,
+                        new String[] {"Lot s", "Centre line", "Lower control limit", "Upper control limit"}, 30);
+                WorkbookLayout.print(workbook, chartSheet, false, 11, 59, 0, true, title, subject, generated);
             }
 
             XSSFSheet types = workbook.createSheet("Defect types");
             XSSFRow typesHead = types.createRow(0);
-            cells.put(typesHead, 0, "Defect type", bold);
-            cells.put(typesHead, 1, "Nonconforming units", bold);
-            cells.put(typesHead, 2, "Cumulative share", bold);
-            types.setColumnWidth(0, 30 * 256);
+            typesHead.setHeightInPoints(30);
+            cells.put(typesHead, 0, "Defect type", heading);
+            cells.put(typesHead, 1, "Nonconforming units", numberHeading);
+            cells.put(typesHead, 2, "Cumulative share", numberHeading);
+            WorkbookLayout.Widths typeWidths = new WorkbookLayout.Widths(3);
+            typeWidths.note(0, "Defect type", true);
+            typeWidths.note(1, "Nonconforming", true);
+            typeWidths.note(2, "Cumulative", true);
             int t = 1;
             for (QualityStatistics.ParetoBar bar : audit.pareto()) {
                 XSSFRow row = types.createRow(t++);
-                cells.put(row, 0, bar.defect(), null);
-                cells.put(row, 1, bar.count(), null);
+                cells.put(row, 0, bar.defect(), text);
+                cells.put(row, 1, bar.count(), count);
                 cells.put(row, 2, bar.cumulativeShare(), percent);
+                typeWidths.note(0, bar.defect(), false);
             }
+            typeWidths.apply(types, 10, 36);
             int m = audit.pareto().size();
             if (m > 0) {
-                XSSFDrawing drawing = types.createDrawingPatriarch();
-                XSSFChart chart = drawing.createChart(drawing.createAnchor(0, 0, 0, 0, 4, 0, 18, 24));
-                chart.setTitleText("Pareto of defect types");
-                XDDFCategoryAxis bottom = chart.createCategoryAxis(AxisPosition.BOTTOM);
-                XDDFValueAxis left = chart.createValueAxis(AxisPosition.LEFT);
-                left.setTitle("Nonconforming units");
-                XDDFChartData data = chart.createData(ChartTypes.BAR, bottom, left);
-                ((XDDFBarChartData) data).setBarDirection(BarDirection.COL);
-                data.addSeries(XDDFDataSourcesFactory.fromStringCellRange(types, new CellRangeAddress(1, m, 0, 0)),
-                        XDDFDataSourcesFactory.fromNumericCellRange(types, new CellRangeAddress(1, m, 1, 1)))
-                        .setTitle("Nonconforming units", null);
-                chart.plot(data);
+                XSSFChart chart = NativeCharts.chart(types, "Pareto of defect types", 4, 0, 16, 26);
+                XDDFCategoryAxis bottom = NativeCharts.categoryAxis(chart, "Defect type, most frequent first");
+                XDDFValueAxis left = NativeCharts.valueAxis(chart, AxisPosition.LEFT, "Nonconforming units", "0");
+                left.setCrosses(org.apache.poi.xddf.usermodel.chart.AxisCrosses.AUTO_ZERO);
+                left.setMinimum(0);
+                XDDFDataSource<String> names = NativeCharts.names(types, 1, m, 0);
+                XDDFBarChartData bars = NativeCharts.bars(chart, bottom, left);
+                bars.setGapWidth(60);
+                NativeCharts.addBars(bars, names, NativeCharts.numbers(types, 1, m, 1), "Nonconforming units",
+                        ChartStyle.DATA, ChartStyle.INK);
+                chart.plot(bars);
+                XDDFValueAxis right = NativeCharts.secondAxis(chart, "Cumulative share", "0%")[0];
+                NativeCharts.range(right, 0, 1);
+                XDDFLineChartData line = NativeCharts.lines(chart, NativeCharts.lastCategoryAxis(chart), right);
+                NativeCharts.addLine(line, names, NativeCharts.numbers(types, 1, m, 2), "Cumulative share",
+                        NativeCharts.Look.lineWithMarkers(ChartStyle.ALERT, 2.25, MarkerStyle.CIRCLE, 6));
+                chart.plot(line);
             }
+            WorkbookLayout.print(workbook, types, true, 16, Math.max(26, m), 1, true, title, subject, generated);
             AtomicWrite.write(file, workbook::write);
         } catch (IOException e) {
             throw new lotgate.files.OutputFileException(file, e);
         }
+    }
+
+    /**
+     * The p-chart as a native chart: the lots' fractions with centre and limits, marks for lots outside the limits
+     * and for rejected lots, and shaded bars behind the lots judged under tightened or reduced inspection. Its data
+     * sit to the right of the printed area.
+     */
+    private static void pChartSheet(XSSFWorkbook workbook, SupplierAudit audit, Cells cells, CellStyle percent,
+            String title, String subject, String generated) {
+        XSSFSheet sheet = workbook.createSheet("p-chart");
+        int n = audit.pChart().size();
+        int first = 20;
+        String[] columns = {"Lot", "Fraction nonconforming", "Centre line", "Lower control limit",
+                "Upper control limit", "Outside the control limits", "Lot rejected", "Tightened inspection",
+                "Reduced inspection"};
+        XSSFRow head = sheet.getRow(0) != null ? sheet.getRow(0) : sheet.createRow(0);
+        for (int c = 0; c < columns.length; c++) {
+            cells.put(head, first + c, columns[c], null);
+        }
+        double top = 0;
+        for (QualityStatistics.PChartPoint point : audit.pChart()) {
+            top = Math.max(top, Math.max(point.upper(), point.fraction()));
+        }
+        top = Math.ceil(top * 1.15 * 200) / 200;
+        boolean tightened = false;
+        boolean reduced = false;
+        for (int i = 0; i < n; i++) {
+            QualityStatistics.PChartPoint point = audit.pChart().get(i);
+            LotRow lot = audit.lotsInOrder().get(i);
+            XSSFRow row = sheet.getRow(i + 1) != null ? sheet.getRow(i + 1) : sheet.createRow(i + 1);
+            cells.put(row, first, point.lot(), null);
+            cells.put(row, first + 1, point.fraction(), percent);
+            cells.put(row, first + 2, point.centre(), percent);
+            cells.put(row, first + 3, point.lower(), percent);
+            cells.put(row, first + 4, point.upper(), percent);
+            if (point.outOfControl()) {
+                cells.put(row, first + 5, point.fraction(), percent);
+            }
+            if (!lot.accepted()) {
+                cells.put(row, first + 6, point.fraction(), percent);
+            }
+            if ("tightened".equals(lot.severity())) {
+                cells.put(row, first + 7, top, percent);
+                tightened = true;
+            }
+            if ("reduced".equals(lot.severity())) {
+                cells.put(row, first + 8, top, percent);
+                reduced = true;
+            }
+        }
+        XSSFChart chart = NativeCharts.chart(sheet, "p-chart: lot fractions nonconforming", 0, 0, 18, 34);
+        XDDFCategoryAxis bottom = NativeCharts.categoryAxis(chart, "Lot, in the order received");
+        XDDFValueAxis left = NativeCharts.valueAxis(chart, AxisPosition.LEFT, "Fraction nonconforming", "0.0%");
+        NativeCharts.range(left, 0, top);
+        XDDFDataSource<String> names = NativeCharts.names(sheet, 1, n, first);
+        if (tightened || reduced) {
+            // Shading behind the lots judged under a changed severity: its edges are the switches.
+            XDDFBarChartData bands = NativeCharts.bars(chart, bottom, left);
+            bands.setGapWidth(0);
+            // Tightened and reduced never share a lot: stacked, each lot's one band fills its whole slot.
+            bands.setBarGrouping(org.apache.poi.xddf.usermodel.chart.BarGrouping.STACKED);
+            if (tightened) {
+                NativeCharts.addBars(bands, names, NativeCharts.numbers(sheet, 1, n, first + 7),
+                        "Judged under tightened inspection", ChartStyle.TIGHTENED_SHADE, null);
+            }
+            if (reduced) {
+                NativeCharts.addBars(bands, names, NativeCharts.numbers(sheet, 1, n, first + 8),
+                        "Judged under reduced inspection", ChartStyle.REDUCED_SHADE, null);
+            }
+            chart.plot(bands);
+        }
+        XDDFLineChartData lines = NativeCharts.lines(chart, bottom, left);
+        NativeCharts.addLine(lines, names, NativeCharts.numbers(sheet, 1, n, first + 1), "Lot fraction nonconforming",
+                NativeCharts.Look.lineWithMarkers(ChartStyle.DATA, 1.75, MarkerStyle.CIRCLE, 5));
+        NativeCharts.addLine(lines, names, NativeCharts.numbers(sheet, 1, n, first + 2), "Centre line",
+                NativeCharts.Look.line(ChartStyle.CALM, 1.25, PresetLineDash.LARGE_DASH_DOT));
+        NativeCharts.addLine(lines, names, NativeCharts.numbers(sheet, 1, n, first + 4), "Upper control limit",
+                NativeCharts.Look.line(ChartStyle.ALERT, 1.5, PresetLineDash.DASH));
+        NativeCharts.addLine(lines, names, NativeCharts.numbers(sheet, 1, n, first + 3), "Lower control limit",
+                NativeCharts.Look.line(ChartStyle.ALERT, 1.5, PresetLineDash.SYSTEM_DASH));
+        NativeCharts.addLine(lines, names, NativeCharts.numbers(sheet, 1, n, first + 5), "Outside the control limits",
+                NativeCharts.Look.markers(ChartStyle.ALERT, MarkerStyle.TRIANGLE, 11));
+        NativeCharts.addLine(lines, names, NativeCharts.numbers(sheet, 1, n, first + 6), "Lot rejected",
+                NativeCharts.Look.markers(ChartStyle.INK, MarkerStyle.X, 10));
+        chart.plot(lines);
+        WorkbookLayout.print(workbook, sheet, true, 18, 34, 0, true, title, subject, generated);
     }
 
     private static String what(MeasurementCharts charts) {
@@ -247,46 +388,36 @@ public final class SupplierReport {
     }
 
     /**
-     * A native line chart of a value and its centre and limits, read from four adjacent columns of a data sheet
-     * whose column {@code nameColumn} names the lots.
+     * A native chart of a value and its centre and limits, read from four adjacent columns of a data sheet whose
+     * first column names the lots; the value axis spans the data, not from 0.
      */
-    private static void lineChart(XSSFSheet sheet, XSSFSheet dataSheet, int nameColumn, String title, String valueTitle,
-            String format, int n, int firstColumn, String[] series, int topRow) {
-        XSSFDrawing drawing = sheet.getDrawingPatriarch() != null ? sheet.getDrawingPatriarch()
-                : sheet.createDrawingPatriarch();
-        XSSFChart chart = drawing.createChart(drawing.createAnchor(0, 0, 0, 0, 0, topRow, 18, topRow + 30));
-        chart.setTitleText(title);
-        chart.getOrAddLegend().setPosition(LegendPosition.BOTTOM);
-        XDDFCategoryAxis bottom = chart.createCategoryAxis(AxisPosition.BOTTOM);
-        bottom.setTitle("Lot, in order received");
-        XDDFValueAxis left = chart.createValueAxis(AxisPosition.LEFT);
-        left.setTitle(valueTitle);
-        left.setNumberFormat(format);
-        XDDFDataSource<String> names = XDDFDataSourcesFactory.fromStringCellRange(dataSheet,
-                new CellRangeAddress(1, n, nameColumn, nameColumn));
-        XDDFLineChartData data = (XDDFLineChartData) chart.createData(ChartTypes.LINE, bottom, left);
-        org.apache.poi.xddf.usermodel.PresetColor[] colours = {org.apache.poi.xddf.usermodel.PresetColor.NAVY,
-                org.apache.poi.xddf.usermodel.PresetColor.SEA_GREEN,
-                org.apache.poi.xddf.usermodel.PresetColor.DARK_RED,
-                org.apache.poi.xddf.usermodel.PresetColor.DARK_RED};
-        for (int s = 0; s < series.length; s++) {
-            XDDFNumericalDataSource<Double> values = XDDFDataSourcesFactory.fromNumericCellRange(dataSheet,
-                    new CellRangeAddress(1, n, firstColumn + s, firstColumn + s));
-            XDDFLineChartData.Series line = (XDDFLineChartData.Series) data.addSeries(names, values);
-            line.setTitle(series[s], null);
-            line.setMarkerStyle(s == 0 ? MarkerStyle.CIRCLE : MarkerStyle.NONE);
-            line.setSmooth(false);
-            // Spreadsheet programs differ in their default line; name it so that every one draws it.
-            org.apache.poi.xddf.usermodel.XDDFLineProperties stroke = new org.apache.poi.xddf.usermodel.XDDFLineProperties(
-                    new org.apache.poi.xddf.usermodel.XDDFSolidFillProperties(
-                            org.apache.poi.xddf.usermodel.XDDFColor.from(colours[s])));
-            stroke.setWidth(s == 0 ? 1.75 : 1.25);
-            if (s > 0) {
-                stroke.setPresetDash(new org.apache.poi.xddf.usermodel.XDDFPresetLineDash(
-                        org.apache.poi.xddf.usermodel.PresetLineDash.DASH));
+    private static void controlChart(XSSFSheet sheet, XSSFSheet dataSheet, String title, String valueTitle, int n,
+            int firstColumn, String[] series, int topRow) {
+        XSSFChart chart = NativeCharts.chart(sheet, title, 0, topRow, 12, topRow + 29);
+        XDDFCategoryAxis bottom = NativeCharts.categoryAxis(chart, "Lot, in the order received");
+        XDDFValueAxis left = NativeCharts.valueAxis(chart, AxisPosition.LEFT, valueTitle, "General");
+        double low = Double.POSITIVE_INFINITY;
+        double high = Double.NEGATIVE_INFINITY;
+        for (int r = 1; r <= n; r++) {
+            for (int c = firstColumn; c < firstColumn + series.length; c++) {
+                double value = dataSheet.getRow(r).getCell(c).getNumericCellValue();
+                low = Math.min(low, value);
+                high = Math.max(high, value);
             }
-            line.setLineProperties(stroke);
         }
+        double margin = (high - low) * 0.08 + 1e-12;
+        NativeCharts.range(left, low - margin, high + margin);
+        left.setCrosses(org.apache.poi.xddf.usermodel.chart.AxisCrosses.MIN);
+        XDDFDataSource<String> names = NativeCharts.names(dataSheet, 1, n, 0);
+        XDDFLineChartData data = NativeCharts.lines(chart, bottom, left);
+        NativeCharts.addLine(data, names, NativeCharts.numbers(dataSheet, 1, n, firstColumn), series[0],
+                NativeCharts.Look.lineWithMarkers(ChartStyle.DATA, 1.75, MarkerStyle.CIRCLE, 5));
+        NativeCharts.addLine(data, names, NativeCharts.numbers(dataSheet, 1, n, firstColumn + 1), series[1],
+                NativeCharts.Look.line(ChartStyle.CALM, 1.25, PresetLineDash.LARGE_DASH_DOT));
+        NativeCharts.addLine(data, names, NativeCharts.numbers(dataSheet, 1, n, firstColumn + 2), series[2],
+                NativeCharts.Look.line(ChartStyle.ALERT, 1.5, PresetLineDash.SYSTEM_DASH));
+        NativeCharts.addLine(data, names, NativeCharts.numbers(dataSheet, 1, n, firstColumn + 3), series[3],
+                NativeCharts.Look.line(ChartStyle.ALERT, 1.5, PresetLineDash.DASH));
         chart.plot(data);
     }
 
@@ -311,6 +442,14 @@ public final class SupplierReport {
                 cell.setCellStyle(style);
             }
         }
+
+        /** A line of text in a column of the given width, its row as tall as its wrapped lines need. */
+        void line(XSSFRow row, String text, CellStyle style, int width, float lineHeight) {
+            put(row, 0, text, style);
+            // The column holds about 1.2 characters of body text per character of width: estimate the wrapped lines.
+            int lines = Math.max(1, (int) Math.ceil(text.length() / (width * 1.3)));
+            row.setHeightInPoints(lines * lineHeight + 2);
+        }
     }
 
     // ---- html ----
@@ -319,6 +458,40 @@ public final class SupplierReport {
         SVGGraphics2D svg = new SVGGraphics2D(width, height);
         chart.draw(svg, new java.awt.Rectangle(0, 0, width, height));
         return svg.getSVGElement(null, false, new ViewBox(0, 0, width, height), null, null);
+    }
+
+    /** The audit's p-chart with its lots' verdicts, severities and switches. */
+    static org.jfree.chart.JFreeChart pChart(SupplierAudit audit) {
+        List<Charts.ControlPoint> points = new java.util.ArrayList<>();
+        java.util.Map<String, Integer> index = new java.util.HashMap<>();
+        for (int i = 0; i < audit.pChart().size(); i++) {
+            QualityStatistics.PChartPoint point = audit.pChart().get(i);
+            LotRow lot = audit.lotsInOrder().get(i);
+            points.add(new Charts.ControlPoint(point.lot(), point.fraction(), point.centre(), point.lower(),
+                    point.upper(), !lot.accepted(), lot.severity()));
+            index.put(lot.part() + "\u0000" + lot.lot(), i);
+        }
+        List<Charts.SwitchMark> switches = new java.util.ArrayList<>();
+        for (SupplierAudit.Part part : audit.parts()) {
+            for (SeverityTracker.Switch change : part.switches()) {
+                Integer at = change.lot() == null ? null : index.get(part.part() + "\u0000" + change.lot());
+                if (at != null) {
+                    switches.add(new Charts.SwitchMark(at, change.to().label()));
+                }
+            }
+        }
+        return Charts.pChart("p-chart: lot fractions nonconforming", points, switches);
+    }
+
+    private static List<Charts.ControlPoint> meanPoints(SupplierAudit audit) {
+        MeasurementCharts charts = audit.measurements();
+        return charts.points().stream().map(p -> new Charts.ControlPoint(p.lot(), p.mean(), charts.grandMean(),
+                p.meanLower(), p.meanUpper(), false, null)).toList();
+    }
+
+    private static List<Charts.ControlPoint> deviationPoints(SupplierAudit audit) {
+        return audit.measurements().points().stream().map(p -> new Charts.ControlPoint(p.lot(), p.deviation(),
+                p.deviationCentre(), p.deviationLower(), p.deviationUpper(), false, null)).toList();
     }
 
     static String html(SupplierAudit audit, List<String> evidence) {
@@ -346,18 +519,7 @@ public final class SupplierReport {
         }
         html.append("</table>\n");
         if (!audit.pChart().isEmpty()) {
-            int n = audit.pChart().size();
-            double[][] series = new double[4][n];
-            for (int i = 0; i < n; i++) {
-                QualityStatistics.PChartPoint point = audit.pChart().get(i);
-                series[0][i] = point.fraction();
-                series[1][i] = point.centre();
-                series[2][i] = point.lower();
-                series[3][i] = point.upper();
-            }
-            html.append("<h2>p-chart</h2>\n").append(svg(Charts.pChart("Lot fractions nonconforming",
-                    audit.pChart().stream().map(QualityStatistics.PChartPoint::lot).toList(), series[0], series[1],
-                    series[2], series[3]), 900, 380)).append('\n');
+            html.append("<h2>p-chart</h2>\n").append(svg(pChart(audit), 900, 430)).append('\n');
         }
         if (!audit.pareto().isEmpty()) {
             List<QualityStatistics.ParetoBar> bars = audit.pareto();
@@ -369,27 +531,12 @@ public final class SupplierReport {
         }
         MeasurementCharts charts = audit.measurements();
         if (charts != null) {
-            int m = charts.points().size();
-            List<String> names = charts.points().stream().map(MeasurementCharts.Point::lot).toList();
-            double[][] means = new double[4][m];
-            double[][] deviations = new double[4][m];
-            for (int i = 0; i < m; i++) {
-                MeasurementCharts.Point point = charts.points().get(i);
-                means[0][i] = point.mean();
-                means[1][i] = charts.grandMean();
-                means[2][i] = point.meanLower();
-                means[3][i] = point.meanUpper();
-                deviations[0][i] = point.deviation();
-                deviations[1][i] = point.deviationCentre();
-                deviations[2][i] = point.deviationLower();
-                deviations[3][i] = point.deviationUpper();
-            }
             String unit = charts.unit().isEmpty() ? "" : " (" + charts.unit() + ")";
             html.append("<h2>Measurements: means and standard deviations</h2>\n")
-                    .append(svg(Charts.control("Means of " + what(charts), names, means, "Mean" + unit), 900, 320))
-                    .append('\n')
-                    .append(svg(Charts.control("Standard deviations of " + what(charts), names, deviations, "s" + unit),
-                            900, 320)).append('\n');
+                    .append(svg(Charts.control("Means of " + what(charts), meanPoints(audit), "Mean" + unit), 900,
+                            360)).append('\n')
+                    .append(svg(Charts.control("Standard deviations of " + what(charts), deviationPoints(audit),
+                            "s" + unit), 900, 360)).append('\n');
         }
         html.append("<h2>Rejected lots</h2>\n<table><tr><th>Record</th><th>Lot</th><th>Part</th><th>Received</th>"
                 + "<th>Found</th><th>Evidence</th></tr>\n");
