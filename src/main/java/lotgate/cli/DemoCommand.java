@@ -210,7 +210,7 @@ final class DemoCommand implements Runnable {
     /** Runs a step whose output the demo does not show (its report is the point). */
     private void quietly(String... args) {
         PrintWriter nowhere = new PrintWriter(java.io.Writer.nullWriter());
-        CommandLine cli = Main.commandLine();
+        CommandLine cli = Main.commandLine(args);
         cli.setOut(nowhere);
         cli.setErr(spec.commandLine().getErr());
         int code = cli.execute(args);
@@ -233,7 +233,7 @@ final class DemoCommand implements Runnable {
         }
         out.println("$ lotgate " + String.join(" ", shown));
         out.println();
-        CommandLine cli = Main.commandLine();
+        CommandLine cli = Main.commandLine(args);
         cli.setOut(out);
         cli.setErr(new PrintWriter(new java.io.Writer() {
             @Override

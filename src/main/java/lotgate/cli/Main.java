@@ -1,6 +1,8 @@
 package lotgate.cli;
 
 import java.io.PrintWriter;
+import java.util.LinkedHashMap;
+import java.util.Map;
 import lotgate.files.InputFileException;
 import lotgate.files.OutputFileException;
 import lotgate.jobs.JobException;
@@ -11,15 +13,11 @@ import picocli.CommandLine.Option;
 /** The lotgate command: acceptance sampling plans for lots, from design to lot sentencing. */
 @Command(name = "lotgate",
         mixinStandardHelpOptions = true,
-        versionProvider = Version.class,
+        versionProvider = Version.Provider.class,
         usageHelpAutoWidth = true,
         description = {"Acceptance sampling of manufacturing lots: design exact sampling plans from the producer's"
                 + " and consumer's risks, study their OC, AOQ, ATI and ASN curves, and save them under plans/ so that"
                 + " every inspector applies the same plan.", ""},
-        subcommands = {DesignCommand.class, CurveCommand.class, CompareCommand.class, ShowCommand.class,
-                SentenceCommand.class, InspectCommand.class, HistoryCommand.class, SupplierCommand.class, SuppliersCommand.class,
-                VerifyCommand.class, ActionCommand.class, ImportCommand.class, FamilyCommand.class,
-                DemoCommand.class, WorkbenchCommand.class, CommandLine.HelpCommand.class},
         footerHeading = "%nExit codes:%n",
         footer = {
                 "   0  done (sentencing: lot accepted)",
@@ -34,6 +32,32 @@ import picocli.CommandLine.Option;
                 "   9  no decision yet: inspect more units (double, multiple and sequential plans)",
                 "  70  internal fault (rerun with --debug)"})
 public final class Main implements Runnable {
+    /**
+     * The commands by name, in the order the help lists them. Picocli builds a command's model by
+     * reflection, which costs more than most commands' work, so a run builds only the command it
+     * invokes; the help and an unknown command get them all.
+     */
+    private static final Map<String, Class<?>> COMMANDS = new LinkedHashMap<>();
+
+    static {
+        COMMANDS.put("design", DesignCommand.class);
+        COMMANDS.put("curve", CurveCommand.class);
+        COMMANDS.put("compare", CompareCommand.class);
+        COMMANDS.put("show", ShowCommand.class);
+        COMMANDS.put("sentence", SentenceCommand.class);
+        COMMANDS.put("inspect", InspectCommand.class);
+        COMMANDS.put("history", HistoryCommand.class);
+        COMMANDS.put("supplier", SupplierCommand.class);
+        COMMANDS.put("suppliers", SuppliersCommand.class);
+        COMMANDS.put("verify", VerifyCommand.class);
+        COMMANDS.put("corrective-action", ActionCommand.class);
+        COMMANDS.put("import", ImportCommand.class);
+        COMMANDS.put("family", FamilyCommand.class);
+        COMMANDS.put("demo", DemoCommand.class);
+        COMMANDS.put("workbench", WorkbenchCommand.class);
+        COMMANDS.put("help", CommandLine.HelpCommand.class);
+    }
+
     static {
         // POI logs through the Log4j API; lotgate has no log, so route it to the API's silent simple logger.
         System.setProperty("log4j.provider", "org.apache.logging.log4j.simple.internal.SimpleProvider");
@@ -59,7 +83,13 @@ public final class Main implements Runnable {
 
     /** Runs lotgate with the given streams and returns its exit code. */
     public static int run(PrintWriter out, PrintWriter err, String... args) {
-        CommandLine cli = commandLine();
+        if (args.length == 1 && (args[0].equals("--version") || args[0].equals("-V"))) {
+            // Answered before picocli loads: scripts ask for the version to pin it in their logs.
+            out.println(Version.line());
+            out.flush();
+            return ExitCode.OK;
+        }
+        CommandLine cli = commandLine(args);
         cli.setOut(new PrintWriter(new EscapingWriter(out), true));
         cli.setErr(new PrintWriter(new EscapingWriter(err), true));
         int code = cli.execute(args);
@@ -68,8 +98,34 @@ public final class Main implements Runnable {
         return code;
     }
 
+    /** The names of the commands, in the order the help lists them. */
+    static Map<String, Class<?>> commands() {
+        return java.util.Collections.unmodifiableMap(COMMANDS);
+    }
+
+    /** The command line with every command, as the help shows it. */
     static CommandLine commandLine() {
+        return commandLine(new String[0]);
+    }
+
+    /**
+     * The command line for these arguments: the root and the one command they invoke (the first
+     * argument that is not an option), or every command when they name none or an unknown one.
+     */
+    static CommandLine commandLine(String... args) {
         CommandLine cli = new CommandLine(new Main());
+        String invoked = null;
+        for (String arg : args) {
+            if (!arg.startsWith("-")) {
+                invoked = arg;
+                break;
+            }
+        }
+        if (invoked != null && COMMANDS.containsKey(invoked) && !invoked.equals("help")) {
+            cli.addSubcommand(invoked, COMMANDS.get(invoked));
+        } else {
+            COMMANDS.forEach(cli::addSubcommand);
+        }
         cli.setParameterExceptionHandler(Main::usageError);
         cli.setExecutionExceptionHandler(Main::failure);
         cli.setCaseInsensitiveEnumValuesAllowed(true);

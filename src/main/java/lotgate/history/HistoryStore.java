@@ -119,6 +119,7 @@ public final class HistoryStore implements AutoCloseable {
             if (location.postgres()) {
                 connection = DriverManager.getConnection(location.url(), location.postgresProperties(environment));
             } else {
+                SqliteLibrary.prepare();
                 Properties properties = new Properties();
                 properties.setProperty("journal_mode", "WAL");
                 properties.setProperty("synchronous", "FULL");

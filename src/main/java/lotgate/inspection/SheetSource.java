@@ -44,6 +44,14 @@ public interface SheetSource {
         if (!Files.isRegularFile(file)) {
             throw new SheetException(file, Files.exists(file) ? "not a file" : "no such file");
         }
+        if (name.endsWith(".csv")) {
+            // Checked without POI: its file-type sniffing starts a logging framework, a tenth of a second.
+            if (isWorkbook(file)) {
+                throw new SheetException(file, "this is a spreadsheet workbook, not CSV text; give it the"
+                        + " extension .xlsx or .xls");
+            }
+            return new CsvSheets(file);
+        }
         FileMagic magic;
         try (InputStream in = FileMagic.prepareToCheckMagic(Files.newInputStream(file))) {
             magic = FileMagic.valueOf(in);
@@ -72,14 +80,26 @@ public interface SheetSource {
             }
             return new XlsSheets(file);
         }
-        if (name.endsWith(".csv")) {
-            if (magic == FileMagic.OOXML || magic == FileMagic.OLE2) {
-                throw new SheetException(file, "this is a spreadsheet workbook, not CSV text; give it the"
-                        + " extension .xlsx or .xls");
-            }
-            return new CsvSheets(file);
-        }
         throw new SheetException(file, "unknown kind of inspection sheet; use .xlsx, .xls or .csv");
+    }
+
+    /** Whether the file starts as a zip package (.xlsx) or an OLE2 compound file (.xls) does. */
+    private static boolean isWorkbook(Path file) {
+        byte[] head = new byte[8];
+        int read = 0;
+        try (InputStream in = Files.newInputStream(file)) {
+            for (int n = 0; read < head.length && n >= 0; read += n) {
+                n = in.read(head, read, head.length - read);
+                if (n < 0) {
+                    break;
+                }
+            }
+        } catch (IOException e) {
+            throw new SheetException(file, "cannot be read (" + e.getMessage() + ")", e);
+        }
+        boolean zip = read >= 4 && head[0] == 'P' && head[1] == 'K' && head[2] == 3 && head[3] == 4;
+        byte[] ole2 = {(byte) 0xD0, (byte) 0xCF, 0x11, (byte) 0xE0, (byte) 0xA1, (byte) 0xB1, 0x1A, (byte) 0xE1};
+        return zip || read == head.length && java.util.Arrays.equals(head, ole2);
     }
 
     private static String describe(FileMagic magic) {

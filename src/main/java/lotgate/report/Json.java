@@ -9,7 +9,10 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 
 /** JSON output: one indented object per command. */
 public final class Json {
-    private static final ObjectMapper MAPPER = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT).build();
+    /** Built on first printing only: a command may assemble its JSON object and then print text. */
+    private static final class Printer {
+        static final ObjectMapper MAPPER = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT).build();
+    }
 
     private Json() {
     }
@@ -20,7 +23,7 @@ public final class Json {
 
     public static String text(ObjectNode node) {
         try {
-            return MAPPER.writeValueAsString(node);
+            return Printer.MAPPER.writeValueAsString(node);
         } catch (JsonProcessingException e) {
             throw new IllegalStateException(e);
         }

@@ -1,0 +1,59 @@
+package lotgate.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.Test;
+import picocli.CommandLine;
+
+/** The root command: one command built per run, the help and errors that still know them all. */
+class MainTest {
+
+    @Test
+    void everyCommandIsRegisteredUnderItsOwnName() {
+        for (Map.Entry<String, Class<?>> command : Main.commands().entrySet()) {
+            CommandLine.Command annotation = command.getValue().getAnnotation(CommandLine.Command.class);
+            assertEquals(command.getKey(), annotation.name(), command.getValue().getName());
+        }
+    }
+
+    @Test
+    void aRunBuildsOnlyTheCommandItInvokes() {
+        assertEquals(List.of("design"),
+                List.copyOf(Main.commandLine("--debug", "design", "--aql", "1%").getSubcommands().keySet()));
+        assertEquals(List.copyOf(Main.commands().keySet()),
+                List.copyOf(Main.commandLine("--help").getSubcommands().keySet()));
+        assertEquals(List.copyOf(Main.commands().keySet()),
+                List.copyOf(Main.commandLine("help", "design").getSubcommands().keySet()));
+    }
+
+    @Test
+    void theHelpListsEveryCommand() {
+        Cli.Result result = Cli.run("--help");
+        assertEquals(0, result.exitCode());
+        for (String name : Main.commands().keySet()) {
+            assertTrue(result.out().contains("\n  " + name + " "), name);
+        }
+    }
+
+    @Test
+    void anUnknownCommandIsToldTheCommandsThereAre() {
+        Cli.Result result = Cli.run("desing", "--aql", "1%");
+        assertEquals(2, result.exitCode());
+        assertEquals("lotgate: unknown command 'desing'; the commands are design, curve, compare, show, sentence,"
+                + " inspect, history, supplier, suppliers, verify, corrective-action, import, family, demo, workbench,"
+                + " help"
+                + " (see 'lotgate --help')\n", result.err());
+    }
+
+    @Test
+    void versionAloneAndWithTheHelpOfACommand() {
+        Cli.Result alone = Cli.run("--version");
+        assertEquals(0, alone.exitCode());
+        assertTrue(alone.out().matches("lotgate \\S+\n"), alone.out());
+        Cli.Result viaPicocli = Cli.run("--debug", "--version");
+        assertEquals(alone.out(), viaPicocli.out());
+    }
+}
