@@ -51,7 +51,8 @@ final class CurveCommand implements Runnable {
     Double ltpd;
 
     @Option(names = "--up-to", paramLabel = "LEVEL", converter = Values.Quality.class,
-            description = "Highest incoming quality in the table and charts (default: where P(accept) is 1%%).")
+            description = "Highest incoming quality in the table and charts (default: a round level just past"
+                    + " where P(accept) falls to 1%% and past 1.25 times the LTPD, at most 100%%).")
     Double upTo;
 
     @Option(names = "--steps", paramLabel = "K", defaultValue = "20", converter = Values.Count.class,

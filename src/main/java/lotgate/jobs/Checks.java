@@ -20,6 +20,15 @@ public final class Checks {
         }
     }
 
+    /** The top of a curve's range may reach 100% nonconforming (every unit bad), never beyond. */
+    public static void curveTop(OcModel model, String field, double level) {
+        if (model.countsUnits() && level > 1) {
+            throw JobException.invalid(field, "option '" + field + "': a fraction nonconforming"
+                    + " cannot exceed 100%, got " + Percent.level(level) + " (use --model poisson for"
+                    + " nonconformities per unit)");
+        }
+    }
+
     /** The risk points of a plan, checked value by value; {@code missing} says what to give when a level is absent. */
     static RiskPoints points(OcModel model, Double aql, double alpha, Double ltpd, double beta, String missing) {
         if (aql == null || ltpd == null) {

@@ -78,7 +78,7 @@ public final class EvaluatePlan {
         Double markLtpd = request.ltpd() != null ? request.ltpd() : design == null ? null : (Double) design.ltpd();
         OperatingCharacteristic oc = new OperatingCharacteristic(choice.plan(), choice.model(), choice.lotSize());
         double range = request.upTo() != null ? request.upTo() : oc.suggestedRange(markLtpd == null ? 0 : markLtpd);
-        Checks.level(choice.model(), "--up-to", range);
+        Checks.curveTop(choice.model(), "--up-to", range);
         List<CurvePoint> table = oc.curve(range, request.steps());
         KeyLevels keys = KeyLevels.of(oc);
         if (charts.any()) {

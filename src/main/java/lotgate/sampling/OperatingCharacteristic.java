@@ -210,19 +210,24 @@ public record OperatingCharacteristic(Plan plan, OcModel model, int lotSize) {
         return points;
     }
 
+    private static final double[] ROUND_STEPS = {1, 1.2, 1.5, 2, 2.5, 3, 4, 5, 6, 8, 10};
+
     /**
      * A range for the curves that shows where P(accept) falls to 1%, and the LTPD if given (0 for none),
-     * rounded up to 1, 2, 2.5 or 5 times a power of ten.
+     * rounded up to the next of 1, 1.2, 1.5, 2, 2.5, 3, 4, 5, 6 or 8 times a power of ten, and never past
+     * the largest level the model allows (100% for a fraction nonconforming).
      */
     public double suggestedRange(double ltpd) {
         double top = Math.max(qualityAt(0.01), 1.25 * ltpd);
         double power = Math.pow(10, Math.floor(Math.log10(top)));
-        for (double step : new double[] {1, 2, 2.5, 5, 10}) {
+        double rounded = 10 * power;
+        for (double step : ROUND_STEPS) {
             if (step * power >= top * (1 - 1e-12)) {
-                return Math.min(step * power, model.maxQuality());
+                rounded = step * power;
+                break;
             }
         }
-        return Math.min(10 * power, model.maxQuality());
+        return Math.min(rounded, model.maxQuality());
     }
 
     /** The AOQL and the incoming quality level at which it occurs. */

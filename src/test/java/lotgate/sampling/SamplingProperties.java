@@ -101,4 +101,27 @@ class SamplingProperties {
         }
         assertTrue(Math.abs(binomial - new OcModel.Hypergeometric(10_000_000).atMost(n, c, p)) < 0.01);
     }
+
+    @Property(tries = 300)
+    void defaultCurveRangeIsValidForEveryPlanAndEndsSoonAfterOnePercentAcceptance(
+            @ForAll @IntRange(min = 1, max = 2000) int n, @ForAll @IntRange(min = 0, max = 40) int c,
+            @ForAll("models") String modelName) {
+        if (c >= n) {
+            return;
+        }
+        int lotSize = Math.max(n, 3000);
+        OcModel model = OcModel.of(modelName, lotSize);
+        OperatingCharacteristic oc = new OperatingCharacteristic(new SinglePlan(n, c), model,
+                model instanceof OcModel.Hypergeometric ? lotSize : 0);
+        double range = oc.suggestedRange(0);
+        double onePercent = oc.qualityAt(0.01);
+        assertTrue(range > 0 && range <= model.maxQuality(), "range " + range + " outside the model's levels");
+        if (range < model.maxQuality()) {
+            // For a finite lot the 1% level is the largest D/N still accepted that often: one unit more falls below.
+            double beyond = model instanceof OcModel.Hypergeometric h ? range + 1.0 / h.lotSize() : range;
+            assertTrue(oc.acceptance(Math.min(beyond, model.maxQuality())) <= 0.01 + 1e-12, "the range must reach P(accept) = 1%");
+            // Round steps 1, 1.2, 1.5, 2, 2.5, 3, 4, 5, 6, 8, 10: no step is more than 4/3 of the one before.
+            assertTrue(range <= onePercent * 4.0 / 3.0 * (1 + 1e-9), "range " + range + " runs far past " + onePercent);
+        }
+    }
 }

@@ -1,0 +1,64 @@
+package lotgate.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.nio.file.Path;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+/** What lotgate says around its numbers is true: defaults, diagnoses and labels agree with the values. */
+class TruthfulWordsTest {
+    private static final ObjectMapper JSON = new ObjectMapper();
+
+    @TempDir
+    Path folder;
+
+    // The smallest single plans of the published attribute tables (n = 2, 3, 5, 8, 13 with their usual
+    // acceptance numbers, from memory): P(accept) is still above 1% beyond 50% nonconforming.
+    @ParameterizedTest
+    @CsvSource({"2, 0", "3, 0", "5, 1", "8, 1", "13, 2"})
+    void curveOfASmallPlanHasAValidDefaultRangeThatReachesOnePercentAcceptance(int n, int c) throws Exception {
+        Cli.Result result = Cli.run("curve", "--sample-size", Integer.toString(n), "--acceptance",
+                Integer.toString(c), "--aql", "6.5%", "--format", "json");
+        assertEquals(0, result.exitCode(), result.err());
+        JsonNode points = JSON.readTree(result.out()).get("points");
+        JsonNode last = points.get(points.size() - 1);
+        assertTrue(last.get("quality").asDouble() <= 1.0, "at most every unit nonconforming");
+        assertTrue(last.get("acceptance").asDouble() <= 0.01, "the default range reaches P(accept) = 1%");
+        assertTrue(last.get("quality").asDouble() > 0.5, "these plans still accept 1% of lots past 50%");
+    }
+
+    @ParameterizedTest
+    @CsvSource({"2, 0", "13, 2"})
+    void curveOfASmallSavedPlanAndItsChartUseTheDefaultRange(int n, int c) {
+        Path plan = folder.resolve("small.json");
+        Cli.Result saved = Cli.run("design", "--aql", "6.5%", "--ltpd", "60%", "--sample-size", Integer.toString(n),
+                "--acceptance", Integer.toString(c), "--save", plan.toString());
+        assertEquals(0, saved.exitCode(), saved.err());
+        Cli.Result curve = Cli.run("curve", plan.toString(), "--chart", folder.resolve("oc.svg").toString());
+        assertEquals(0, curve.exitCode(), curve.err());
+        assertTrue(curve.out().contains("        100%"), curve.out());
+    }
+
+    @ParameterizedTest
+    @CsvSource({"101%, 'option ''--up-to'': a fraction nonconforming cannot exceed 100%, got 101%'"})
+    void anUpToBeyondEveryUnitIsRefused(String upTo, String message) {
+        Cli.Result result = Cli.run("curve", "--sample-size", "2", "--acceptance", "0", "--up-to", upTo);
+        assertEquals(ExitCode.USAGE, result.exitCode());
+        assertTrue(result.err().contains(message), result.err());
+    }
+
+    @ParameterizedTest
+    @CsvSource({"80, 2, 0.12"})
+    void curveRangeEndsJustPastWhereAcceptanceFallsToOnePercent(int n, int c, double top) throws Exception {
+        // P(accept) of n = 80, c = 2 falls to 1% near 10.1% nonconforming (SciPy 1.17.1: brentq on
+        // binom.cdf(2, 80, p) = 0.01 gives p = 0.10095); the next round level is 12%, not 20%.
+        JsonNode points = JSON.readTree(Cli.run("curve", "-n", Integer.toString(n), "-c", Integer.toString(c),
+                "--format", "json").out()).get("points");
+        assertEquals(top, points.get(points.size() - 1).get("quality").asDouble(), 1e-12);
+    }
+}
