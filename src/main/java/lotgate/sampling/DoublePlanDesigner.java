@@ -27,6 +27,8 @@ public final class DoublePlanDesigner {
     private final long budget;
     private long candidates;
     private long work;
+    private int highestC1;
+    private int highestC2;
 
     /**
      * @param lotSize the lot size N that bounds n1 + n2, or 0 for none
@@ -70,35 +72,114 @@ public final class DoublePlanDesigner {
     public DoubleDesign design(RiskPoints points, Space space, double asnLevel) {
         candidates = 0;
         work = 0;
+        highestC1 = 0;
+        highestC2 = 0;
         double aqlPoint = model.producerPoint(points.aql());
         double ltpdPoint = model.consumerPoint(points.ltpd());
         if (aqlPoint >= ltpdPoint) {
             return new DoubleDesign.NotFound("the lot is too small to tell the AQL from the LTPD: both stand for "
                     + Math.round(aqlPoint * largest) + " nonconforming units");
         }
+        Space equal = space.ratio() != null ? space : new Space(1.0, space.firstRejection());
+        int firstMost = largestFirst(equal);
+        if (space.firstRejection() != null) {
+            firstMost = firstSampleBound(space.firstRejection(), aqlPoint, points.alpha(), firstMost);
+            String none = fixedRejectionBound(points, equal, ltpdPoint, firstMost);
+            if (none != null && space.ratio() != null) {
+                return new DoubleDesign.NotFound(none);
+            }
+        }
         Best best = new Best();
         try {
             if (space.ratio() != null) {
-                searchWithRatio(points, space, aqlPoint, ltpdPoint, asnLevel, best);
+                searchWithRatio(points, space, aqlPoint, ltpdPoint, asnLevel, best, firstMost);
             } else {
                 // The plans with n2 = n1 are in the free space too: their best is a first bound to prune with.
-                searchWithRatio(points, new Space(1.0, space.firstRejection()), aqlPoint, ltpdPoint, asnLevel, best);
+                searchWithRatio(points, equal, aqlPoint, ltpdPoint, asnLevel, best, firstMost);
                 if (best.plan != null) {
                     searchFree(points, space, aqlPoint, ltpdPoint, asnLevel, best);
                 }
             }
         } catch (OverBudget e) {
             return new DoubleDesign.NotFound("the search stopped after " + candidates + " plans without proving one"
-                    + " the smallest: AQL and LTPD this close need very large acceptance numbers; widen the gap between"
-                    + " them" + (space.ratio() == null ? ", search with a fixed second-sample ratio," : "")
+                    + " the smallest: it reached its work limit having tried first-sample acceptance numbers 0 to "
+                    + highestC1 + " and second-sample ones up to " + highestC2 + ", and "
+                    + (best.plan == null ? "had found no plan that meets both risks"
+                            : "the best plan it had found may not be the smallest")
+                    + "; larger acceptance numbers were not tried. Widen the gap between the AQL and the LTPD"
+                    + (space.ratio() == null ? ", search with a fixed second-sample ratio," : "")
                     + " or use the single plan");
         }
+        if (best.plan == null && space.firstRejection() != null && firstMost < largestFirst(equal)) {
+            return new DoubleDesign.NotFound(noPlanWith(equal) + ": " + producerSide(points, space.firstRejection(),
+                    firstMost) + ", and none with n1 up to " + firstMost + " meets both risks"
+                    + (space.ratio() == null ? "; the search with a free second sample starts from such a plan" : ""));
+        }
         if (best.plan == null) {
-            return new DoubleDesign.NotFound(largest < SinglePlanDesigner.MAX_SAMPLE_SIZE
-                    ? "no double plan with n1 + n2 at most the lot size " + largest + " meets both risks"
-                    : "no double plan with n1 + n2 at most " + largest + " units meets both risks");
+            String bound = largest < SinglePlanDesigner.MAX_SAMPLE_SIZE ? "at most the lot size " + largest
+                    : "at most " + largest + " units";
+            return new DoubleDesign.NotFound(space.ratio() != null
+                    ? "no double plan with n1 + n2 " + bound + " meets both risks"
+                    : "no double plan with n2 = n1 and n1 + n2 " + bound + " meets both risks, and the search with"
+                            + " a free second sample starts from such a plan: try a fixed second-sample ratio");
         }
         return new DoubleDesign.Found(best.plan, PlanRisks.of(best.plan, model, points), best.asn, candidates);
+    }
+
+    /**
+     * With the first rejection number fixed at r1, the first sample alone rejects when it finds r1 or more, and
+     * that chance grows with n1: the largest n1 whose first sample alone keeps P(reject | AQL) within alpha
+     * bounds every plan of the space.
+     */
+    private int firstSampleBound(int r1, double aqlPoint, double alpha, int top) {
+        if (top < 1 || model.moreThan(1, r1 - 1, aqlPoint) > alpha) {
+            return 0;
+        }
+        if (model.moreThan(top, r1 - 1, aqlPoint) <= alpha) {
+            return top;
+        }
+        return boundary(top, 1, n1 -> model.moreThan(n1, r1 - 1, aqlPoint) <= alpha);
+    }
+
+    /**
+     * Why no plan with a fixed first rejection number and ratio exists, or null when one may. Within the
+     * producer's bound on n1, the plan strictest at the LTPD has the largest samples and the smallest acceptance
+     * numbers (c1 = 0, c2 = r1 - 1): if even it accepts more than beta of lots at the LTPD, none meets both risks.
+     */
+    private String fixedRejectionBound(RiskPoints points, Space space, double ltpdPoint, int firstMost) {
+        int r1 = space.firstRejection();
+        String producerSide = producerSide(points, r1, firstMost);
+        if (firstMost < 1) {
+            return noPlanWith(space) + ": " + producerSide;
+        }
+        DoublePlan strictest = new DoublePlan(firstMost, 0, r1, space.secondSample(firstMost), r1 - 1);
+        double accepted = strictest.acceptance(model, ltpdPoint);
+        if (accepted <= points.beta()) {
+            return null;
+        }
+        return noPlanWith(space) + ": " + producerSide + ", and every plan with n1 up to " + firstMost
+                + " accepts more than " + percent(points.beta()) + " of lots at the LTPD (the strictest, n1 = "
+                + strictest.n1() + ", c1 = 0, r1 = " + r1 + ", n2 = " + strictest.n2() + ", c2 = " + strictest.c2()
+                + ", accepts " + percent(accepted) + ")";
+    }
+
+    private static String noPlanWith(Space space) {
+        return "no double plan with r1 = " + space.firstRejection() + " and n2 = "
+                + new java.math.BigDecimal(Double.toString(space.ratio())).stripTrailingZeros().toPlainString()
+                + " x n1 meets both risks";
+    }
+
+    /** Why n1 cannot exceed its bound when the first rejection number is fixed. */
+    private String producerSide(RiskPoints points, int r1, int firstMost) {
+        return "a first sample larger than " + firstMost + " alone rejects more than " + percent(points.alpha())
+                + " of lots at the AQL (P(reject) = " + percent(model.moreThan(firstMost + 1, r1 - 1,
+                        model.producerPoint(points.aql()))) + " at n1 = " + (firstMost + 1) + ")";
+    }
+
+    /** A probability as percent with four significant digits, for the reasons given when no plan is found. */
+    private static String percent(double fraction) {
+        return new java.math.BigDecimal(fraction * 100).round(new java.math.MathContext(4)).stripTrailingZeros()
+                .toPlainString() + "%";
     }
 
     /** The best plan so far, compared by ASN, then the largest sample, then n1, c1 and c2. */
@@ -133,7 +214,7 @@ public final class DoublePlanDesigner {
     }
 
     private void searchWithRatio(RiskPoints points, Space space, double aqlPoint, double ltpdPoint, double asnLevel,
-            Best best) {
+            Best best, int firstMost) {
         for (int c1 = 0; ; c1++) {
             int c2First = firstC2(space, c1);
             if (c2First < 0) {
@@ -142,9 +223,14 @@ public final class DoublePlanDesigner {
             int floor = 1;
             boolean any = false;
             for (int c2 = c2First; ; c2++) {
+                highestC2 = Math.max(highestC2, c2);
+                if ((long) c2 > (long) firstMost + space.secondSample(firstMost)) {
+                    break; // past the whole sample, c2 accepts every second sample: nothing new beyond
+                }
                 int r1 = space.firstRejection() != null ? space.firstRejection() : c2 + 1;
                 int n1 = smallestFirstSample(c1, r1, c2, space, ltpdPoint, points.beta(), floor);
-                if (n1 < 0 || !best.open(n1)) {
+                // A larger c2 needs a larger n1 still, so past the producer's bound on n1 nothing is left.
+                if (n1 < 0 || n1 > firstMost || !best.open(n1)) {
                     break;
                 }
                 any = true;
@@ -217,6 +303,7 @@ public final class DoublePlanDesigner {
     /** Counts one plan evaluated with its first-sample counts c1 < d1 < r1, and stops once the budget is spent. */
     private void count(int c1, int r1) {
         candidates++;
+        highestC1 = Math.max(highestC1, c1);
         work += r1 - c1 + 2L;
         if (work > budget) {
             throw new OverBudget();
@@ -250,6 +337,7 @@ public final class DoublePlanDesigner {
                 return;
             }
             for (int c2 = c2First; ; c2++) {
+                highestC2 = Math.max(highestC2, c2);
                 int r1 = space.firstRejection() != null ? space.firstRejection() : c2 + 1;
                 int totalLeast = single.smallestSampleFor(Math.min(c2, r1 - 1), ltpdPoint, points.beta(), c1, 1);
                 if (totalLeast < 0) {

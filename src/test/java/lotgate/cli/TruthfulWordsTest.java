@@ -61,4 +61,31 @@ class TruthfulWordsTest {
                 "--format", "json").out()).get("points");
         assertEquals(top, points.get(points.size() - 1).get("quality").asDouble(), 1e-12);
     }
+
+    @org.junit.jupiter.api.Test
+    void aDoublePlanThatCannotExistIsDiagnosedWithItsBoundNotAsAStoppedSearch() {
+        Cli.Result result = Cli.run("design", "--scheme", "double", "--aql", "1%", "--ltpd", "5%",
+                "--first-rejection", "3");
+        assertEquals(ExitCode.NO_PLAN, result.exitCode());
+        // SciPy 1.10.1: binom.sf(2, 83, 0.01) = 0.050947 and binom.sf(2, 82, 0.01) = 0.049461, so with r1 = 3
+        // no first sample above 82 keeps the producer's risk within 5%.
+        assertTrue(result.out().startsWith("No sampling plan meets the request: no double plan with r1 = 3 and"
+                + " n2 = 1 x n1 meets both risks: a first sample larger than 82 alone rejects more than 5% of lots"
+                + " at the AQL (P(reject) = 5.095% at n1 = 83), and none with n1 up to 82 meets both risks."),
+                result.out());
+        assertTrue(!result.out().contains("stopped"), result.out());
+    }
+
+    @org.junit.jupiter.api.Test
+    void aDoublePlanRuledOutAtTheLtpdNamesTheStrictestPlanAndItsAcceptance() {
+        Cli.Result result = Cli.run("design", "--scheme", "double", "--aql", "1%", "--ltpd", "5%",
+                "--first-rejection", "2");
+        assertEquals(ExitCode.NO_PLAN, result.exitCode());
+        // SciPy 1.10.1: binom.sf(1, 36, 0.01) = 0.050346; the plan (35, 0, 2, 35, 1) accepts at p = 5% with
+        // binom.pmf(0, 35, 0.05) + binom.pmf(1, 35, 0.05) * binom.pmf(0, 35, 0.05) = 0.216895.
+        assertTrue(result.out().contains("a first sample larger than 35 alone rejects more than 5% of lots at the"
+                + " AQL (P(reject) = 5.035% at n1 = 36), and every plan with n1 up to 35 accepts more than 10% of"
+                + " lots at the LTPD (the strictest, n1 = 35, c1 = 0, r1 = 2, n2 = 35, c2 = 1, accepts 21.69%)"),
+                result.out());
+    }
 }

@@ -260,6 +260,16 @@ class StagedPlanProperties {
         DoubleDesign.NotFound stopped = (DoubleDesign.NotFound) design;
         assertTrue(stopped.reason().startsWith("the search stopped after "), stopped.reason());
         assertTrue(stopped.reason().contains("without proving one the smallest"), stopped.reason());
+        assertTrue(stopped.reason().contains("larger acceptance numbers were not tried"), stopped.reason());
+    }
+
+    @org.junit.jupiter.api.Test
+    void aFixedFirstRejectionNumberBoundsTheSearchSoThatNoPlanIsProvedNotGuessed() {
+        // A budget far below what the unbounded search spent: the bound on n1 ends the search long before.
+        DoubleDesign design = new DoublePlanDesigner(new OcModel.Binomial(), 0, 2_000_000).design(
+                new RiskPoints(0.01, 0.05, 0.05, 0.10), new DoublePlanDesigner.Space(1.0, 3), 0.01);
+        DoubleDesign.NotFound none = (DoubleDesign.NotFound) design;
+        assertTrue(none.reason().contains("a first sample larger than 82 alone rejects"), none.reason());
     }
 
     @Property(tries = 100)
