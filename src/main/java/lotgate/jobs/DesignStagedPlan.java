@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.function.Supplier;
 import lotgate.plan.PlanFormat;
 import lotgate.plan.SavedPlan;
+import lotgate.report.Percent;
 import lotgate.sampling.DoubleDesign;
 import lotgate.sampling.DoublePlan;
 import lotgate.sampling.DoublePlanDesigner;
@@ -109,8 +110,17 @@ public final class DesignStagedPlan {
             }
             default -> {
                 int truncation = truncation(request, single);
-                plan = request.plainWald() ? SequentialPlan.wald(WaldSequential.of(points, model), truncation)
-                        : new SequentialPlanDesigner(model).design(points, truncation).plan();
+                if (request.plainWald()) {
+                    plan = SequentialPlan.wald(WaldSequential.of(points, model), truncation);
+                } else {
+                    SequentialPlanDesigner designer = new SequentialPlanDesigner(model);
+                    SequentialPlanDesigner.Design design = designer.design(points, truncation);
+                    if (!design.met()) {
+                        return new Result(request, points, null, null, null, 0, single, asnLevel, null,
+                                unmetTruncation(designer, points, truncation, single, lotSize));
+                    }
+                    plan = design.plan();
+                }
                 method = SavedPlan.WALD;
             }
         }
@@ -135,6 +145,29 @@ public final class DesignStagedPlan {
         } catch (IllegalArgumentException e) {
             throw JobException.invalid("stages", "--stage: " + e.getMessage());
         }
+    }
+
+    /** Why the redrawn lines cannot meet both risks at this truncation, and the smallest one at which they do. */
+    private static String unmetTruncation(SequentialPlanDesigner designer, RiskPoints points, int truncation,
+            SinglePlan single, int lotSize) {
+        String asked = "producer's risk " + Percent.level(points.alpha()) + " and consumer's risk "
+                + Percent.level(points.beta());
+        double least = designer.leastConsumerRisk(points, truncation);
+        String why = least > points.beta()
+                ? "no sequential plan truncated at " + truncation + " units can meet " + asked + ": even the best"
+                        + " test of any kind on " + truncation + " units (Neyman-Pearson on the count) has a"
+                        + " consumer's risk of " + Percent.probability(least) + " when its producer's risk is "
+                        + Percent.level(points.alpha())
+                : "Wald's lines, redrawn for smaller nominal risks, do not meet " + asked + " when truncated at "
+                        + truncation + " units";
+        int limit = Math.max(2 * truncation, single == null ? 0 : 3 * single.n());
+        if (lotSize > 0) {
+            limit = Math.min(limit, lotSize);
+        }
+        int smallest = designer.smallestTruncation(points, limit);
+        return why + (smallest > 0 ? "; the smallest truncation at which lotgate's redrawn lines meet both is "
+                + smallest + " units (--truncate-at " + smallest + ")"
+                : "; no truncation up to " + limit + " units meets both");
     }
 
     private static int truncation(Request request, SinglePlan single) {

@@ -41,4 +41,48 @@ public final class SequentialPlanDesigner {
             lines = new WaldSequential(points.aql(), alpha, points.ltpd(), beta, !model.countsUnits());
         }
     }
+
+    /**
+     * The least consumer's risk that any test on {@code units} units can have while its producer's risk stays
+     * at most alpha: the Neyman-Pearson test on the count (the count is sufficient for every model here),
+     * randomised at its boundary. A sequential plan truncated there is one such test, so it cannot do better.
+     */
+    public double leastConsumerRisk(RiskPoints points, int units) {
+        double aqlPoint = model.producerPoint(points.aql());
+        double ltpdPoint = model.consumerPoint(points.ltpd());
+        int k = 0;
+        while (model.moreThan(units, k, aqlPoint) > points.alpha()) {
+            k++;
+        }
+        double atBoundary = model.exactly(units, k, aqlPoint);
+        double spare = points.alpha() - model.moreThan(units, k, aqlPoint);
+        double rejectAtBoundary = atBoundary > 0 ? Math.min(1, spare / atBoundary) : 0;
+        return Math.max(0, model.atMost(units, k, ltpdPoint) - rejectAtBoundary * model.exactly(units, k, ltpdPoint));
+    }
+
+    /**
+     * The smallest truncation point, at most {@code limit}, at which {@link #design} meets both risks, or -1:
+     * every point below the Neyman-Pearson bound is skipped, every one from there on is tried in turn.
+     */
+    public int smallestTruncation(RiskPoints points, int limit) {
+        if (limit < 1 || leastConsumerRisk(points, limit) > points.beta()) {
+            return -1;
+        }
+        int bad = 0;
+        int good = limit;
+        while (good - bad > 1) {
+            int mid = bad + (good - bad) / 2;
+            if (leastConsumerRisk(points, mid) <= points.beta()) {
+                good = mid;
+            } else {
+                bad = mid;
+            }
+        }
+        for (int truncation = good; truncation <= limit; truncation++) {
+            if (design(points, truncation).met()) {
+                return truncation;
+            }
+        }
+        return -1;
+    }
 }

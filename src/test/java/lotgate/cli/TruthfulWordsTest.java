@@ -88,4 +88,26 @@ class TruthfulWordsTest {
                 + " lots at the LTPD (the strictest, n1 = 35, c1 = 0, r1 = 2, n2 = 35, c2 = 1, accepts 21.69%)"),
                 result.out());
     }
+
+    @org.junit.jupiter.api.Test
+    void aSequentialTruncationTooEarlyForTheRequestIsRefusedUpFrontWithTheSmallestThatWorks() throws Exception {
+        Cli.Result result = Cli.run("design", "--scheme", "sequential", "--aql", "1%", "--ltpd", "4%", "--model",
+                "poisson", "--truncate-at", "200", "--alpha", "2.5%");
+        assertEquals(ExitCode.NO_PLAN, result.exitCode());
+        // SciPy 1.10.1, Neyman-Pearson on a Poisson count with means 2 (AQL) and 8 (LTPD) over 200 units: reject
+        // above 5, and at 5 with chance (0.025 - poisson.sf(5, 2)) / poisson.pmf(5, 2) = 0.23376; the consumer's
+        // risk is then poisson.cdf(5, 8) - 0.23376 * poisson.pmf(5, 8) = 0.169822.
+        assertTrue(result.out().startsWith("No sampling plan meets the request: no sequential plan truncated at 200"
+                + " units can meet producer's risk 2.5% and consumer's risk 10%: even the best test of any kind on 200"
+                + " units (Neyman-Pearson on the count) has a consumer's risk of 16.98% when its producer's risk is"
+                + " 2.5%; the smallest truncation at which lotgate's redrawn lines meet both is 278 units"
+                + " (--truncate-at 278)."), result.out());
+        assertTrue(!result.out().contains("exactly"), "no claim that the numbers contradict");
+        JsonNode at = JSON.readTree(Cli.run("design", "--scheme", "sequential", "--aql", "1%", "--ltpd", "4%",
+                "--model", "poisson", "--truncate-at", "278", "--alpha", "2.5%", "--format", "json").out());
+        assertTrue(at.get("producerRisk").asDouble() <= 0.025 && at.get("consumerRisk").asDouble() <= 0.10,
+                at.toString());
+        assertEquals(ExitCode.NO_PLAN, Cli.run("design", "--scheme", "sequential", "--aql", "1%", "--ltpd", "4%",
+                "--model", "poisson", "--truncate-at", "277", "--alpha", "2.5%").exitCode());
+    }
 }

@@ -103,4 +103,17 @@ class SequentialPlanTest {
         assertTrue(plan.rejection(BINOMIAL, 0.01) < 0.05, "the exact producer's risk here is below alpha");
         assertTrue(plan.acceptance(BINOMIAL, 0.06) < 0.11, "the exact consumer's risk is close to beta");
     }
+
+    @Test
+    void noTestOnTwoHundredUnitsBeatsTheRandomisedNeymanPearsonBound() {
+        // SciPy 1.10.1: binomial counts of 200 units at 1% and 4%, producer's risk 2.5%: reject above 5 and at 5
+        // with chance 0.251295, leaving binom.cdf(5, 200, 0.04) - 0.251295 * binom.pmf(5, 200, 0.04) = 0.162874.
+        SequentialPlanDesigner designer = new SequentialPlanDesigner(new OcModel.Binomial());
+        RiskPoints points = new RiskPoints(0.01, 0.025, 0.04, 0.10);
+        assertEquals(0.16287444332899084, designer.leastConsumerRisk(points, 200), 1e-12);
+        int smallest = designer.smallestTruncation(points, 600);
+        assertTrue(designer.design(points, smallest).met());
+        assertTrue(!designer.design(points, smallest - 1).met());
+        assertTrue(designer.leastConsumerRisk(points, smallest) <= 0.10, "the bound never contradicts a met design");
+    }
 }

@@ -105,11 +105,14 @@ public final class StagedDesignRendering {
         WaldSequential lines = result.lines();
         boolean adjusted = Math.abs(lines.alpha() - points.alpha()) > 1e-9 * points.alpha()
                 || Math.abs(lines.beta() - points.beta()) > 1e-9 * points.beta();
-        out.println(adjusted ? "  Lines drawn for nominal risks alpha = " + Percent.probability(lines.alpha())
-                + " and beta = " + Percent.probability(lines.beta()) + ", so that the truncated plan meets "
-                + Percent.level(points.alpha()) + " and " + Percent.level(points.beta()) + " exactly."
-                : "  Lines drawn for alpha = " + Percent.level(points.alpha()) + " and beta = "
-                        + Percent.level(points.beta()) + " (Wald).");
+        String nominal = "  Lines drawn for nominal risks alpha = " + Percent.probability(lines.alpha()) + " and beta = "
+                + Percent.probability(lines.beta());
+        out.println(!adjusted ? "  Lines drawn for alpha = " + Percent.level(points.alpha()) + " and beta = "
+                + Percent.level(points.beta()) + " (Wald)."
+                : result.risks().meets(points) ? nominal + ", so that the truncated plan meets "
+                        + Percent.level(points.alpha()) + " and " + Percent.level(points.beta()) + " exactly."
+                        : nominal + "; the truncated plan does not meet " + Percent.level(points.alpha()) + " and "
+                                + Percent.level(points.beta()) + " (see its risks below).");
         out.printf(Locale.ROOT, "  After each unit m: accept the lot when the count is at most -%.4f + %.6f m,%n"
                 + "  reject it when the count is at least %.4f + %.6f m, otherwise inspect the next unit.%n", plan.h1(),
                 plan.slope(), plan.h2(), plan.slope());
