@@ -124,6 +124,9 @@ final class SupplierCommand implements Runnable {
             return "imported lot: " + content.path("nonconforming").asInt() + " nonconforming in "
                     + content.path("inspected").asInt() + " (no evidence recorded)";
         }
+        if (decision.has("measurement")) {
+            return SupplierReport.measuredEvidence(decision);
+        }
         List<String> parts = new ArrayList<>();
         for (JsonNode verdict : decision.path("classes")) {
             if (!"reject".equals(verdict.path("verdict").asText())) {
@@ -179,8 +182,7 @@ final class SupplierCommand implements Runnable {
             out.println("  Rejected lots");
             for (int i = 0; i < audit.rejectedLots().size(); i++) {
                 LotRow lot = audit.rejectedLots().get(i);
-                out.println("    #" + lot.seq() + " " + lot.lot() + " (" + lot.part() + ", received " + lot.received()
-                        + "): " + evidence.get(i));
+                out.println("    " + SupplierReport.heading(lot) + ": " + evidence.get(i));
             }
         }
     }

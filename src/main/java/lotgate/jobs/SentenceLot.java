@@ -37,6 +37,7 @@ import lotgate.sampling.Plan;
 import lotgate.sampling.RiskPoints;
 import lotgate.sampling.SequentialPlan;
 import lotgate.sampling.VariablesPlan;
+import lotgate.sentencing.BoundMethod;
 import lotgate.sentencing.ClassVerdict;
 import lotgate.sentencing.Evidence;
 import lotgate.sentencing.LotDecision;
@@ -267,7 +268,8 @@ public final class SentenceLot {
         double pValue = Double.isFinite(nearest)
                 ? new VariablesPlan(variables.n(), nearest, variables.sigmaKnown()).rejection(model, points.aql())
                 : (nearest > 0 ? 0.0 : 1.0);
-        Evidence evidence = new Evidence(pValue, confidence, 0.0, judged.upperBound(), -1,
+        Evidence evidence = new Evidence(pValue, confidence, 0.0, judged.upperBound(),
+                BoundMethod.measured(variables.sigmaKnown()), -1,
                 Math.min(1, Math.max(0, judged.estimate())), judged.acceptanceAtEstimate(),
                 variables.acceptance(model, points.aql()), variables.acceptance(model, points.ltpd()));
         ClassVerdict verdict = new ClassVerdict(DefectClass.ANY, variables, wanted, judged.outside().size(),

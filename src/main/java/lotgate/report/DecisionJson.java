@@ -128,9 +128,14 @@ public final class DecisionJson {
             ObjectNode proof = entry.putObject("evidence");
             proof.put("observed", evidence.observed());
             proof.put("pValueAtAql", evidence.pValue());
-            proof.put("lowerBound", evidence.lower());
+            if (evidence.bounds().twoSided()) {
+                proof.put("lowerBound", evidence.lower());
+            } else {
+                proof.putNull("lowerBound");
+            }
             proof.put("upperBound", evidence.upper());
-            proof.put("interval", decision.countsUnits() ? "Clopper-Pearson" : "Garwood");
+            proof.put("interval", evidence.bounds().label());
+            proof.put("intervalSides", evidence.bounds().twoSided() ? "two-sided" : "one-sided upper");
             if (evidence.lotUpperBound() >= 0) {
                 proof.put("lotUpperBound", evidence.lotUpperBound());
             }

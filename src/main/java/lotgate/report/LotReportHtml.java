@@ -97,8 +97,8 @@ final class LotReportHtml {
                     .append("</td><td>").append(verdict.accepted() ? "accept"
                             : "<b>reject</b>").append("</td><td class=\"n\">")
                     .append(SentenceText.percent(evidence.pValue())).append("</td><td>")
-                    .append(SentenceText.percent(evidence.lower())).append(" to ")
-                    .append(SentenceText.percent(evidence.upper())).append("</td></tr>\n");
+                    .append(escape(SentenceText.boundsCell(evidence)) + " (" + escape(evidence.bounds().label()) + ")")
+                    .append("</td></tr>\n");
         }
         html.append("</table>\n<pre>");
         for (String line : SentenceText.evidenceLines(decision)) {

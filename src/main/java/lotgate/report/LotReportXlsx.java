@@ -170,7 +170,9 @@ final class LotReportXlsx {
             }
             put(r, 5, verdict.accepted() ? "accept" : "reject", verdict.accepted() ? null : bold);
             put(r, 6, evidence.pValue(), percent);
-            put(r, 7, evidence.lower(), percent);
+            if (evidence.bounds().twoSided()) {
+                put(r, 7, evidence.lower(), percent);
+            }
             put(r, 8, evidence.upper(), percent);
         }
         row++;

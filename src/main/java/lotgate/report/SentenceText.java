@@ -35,6 +35,12 @@ public final class SentenceText {
         return verdict.rejectionNumber() >= 0 ? String.valueOf(verdict.rejectionNumber()) : "below k";
     }
 
+    /** The bounds of a verdict's evidence as a cell: "a to b" for an interval, "at most b" for an upper bound. */
+    public static String boundsCell(Evidence evidence) {
+        return evidence.bounds().twoSided() ? percent(evidence.lower()) + " to " + percent(evidence.upper())
+                : "at most " + percent(evidence.upper());
+    }
+
     /** A measured value in at most six significant digits, as people write them. */
     public static String number(double value) {
         if (!Double.isFinite(value)) {
@@ -100,7 +106,8 @@ public final class SentenceText {
                 + (spec.limits().equals(Measurement.COMBINED) ? ", M = " + percent(measured.maxEstimate()) : ""));
         lines.add("estimated fraction beyond the limit" + (spec.twoLimits() ? "s" : "") + ": " + percent(measured
                 .estimate()) + " (minimum variance unbiased estimate under normality); at most " + percent(measured
-                .upperBound()) + " (" + level + " one-sided upper bound, exact" + (spec.twoLimits()
+                .upperBound()) + " (" + level + " one-sided upper bound, exact, "
+                + decision.sentence().classes().get(0).evidence().bounds().label() + (spec.twoLimits()
                 ? ", summed over both limits" : "") + ")");
         ClassVerdict verdict = decision.sentence().classes().get(0);
         lines.add("on the OC curve: a lot at the estimate is accepted " + percent(verdict.evidence()
@@ -197,7 +204,7 @@ public final class SentenceText {
             }
             lines.add("  " + (decision.countsUnits() ? "fraction nonconforming" : "nonconformities per unit")
                     + " between " + percent(evidence.lower()) + " and " + percent(evidence.upper()) + " ("
-                    + (decision.countsUnits() ? "Clopper-Pearson" : "Garwood") + ", " + level + " confidence)");
+                    + evidence.bounds().label() + ", " + level + " confidence)");
             if (evidence.lotUpperBound() >= 0) {
                 lines.add("  nonconforming units in the lot: at most " + evidence.lotUpperBound() + " of "
                         + decision.lot().lotSize() + " (" + level + " one-sided upper bound)");

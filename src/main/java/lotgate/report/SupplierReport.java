@@ -1,7 +1,9 @@
 package lotgate.report;
 
+import com.fasterxml.jackson.databind.JsonNode;
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import lotgate.files.AtomicWrite;
@@ -10,6 +12,7 @@ import lotgate.history.MeasurementCharts;
 import lotgate.history.QualityStatistics;
 import lotgate.history.SeverityTracker;
 import lotgate.history.SupplierAudit;
+import lotgate.sentencing.BoundMethod;
 import org.apache.poi.ss.usermodel.CellStyle;
 import org.apache.poi.ss.usermodel.Font;
 import org.apache.poi.xddf.usermodel.PresetLineDash;
@@ -160,8 +163,7 @@ public final class SupplierReport {
             }
             for (int i = 0; i < audit.rejectedLots().size(); i++) {
                 LotRow lot = audit.rejectedLots().get(i);
-                cells.line(summary.createRow(r++), "record " + lot.seq() + ", lot " + lot.lot() + " (" + lot.part()
-                        + ", received " + lot.received() + "): " + evidence.get(i), wrapped, lineWidth, 13);
+                cells.line(summary.createRow(r++), heading(lot) + ": " + evidence.get(i), wrapped, lineWidth, 13);
             }
             WorkbookLayout.print(workbook, summary, false, 0, r, 0, false, title, subject, generated);
 
@@ -544,11 +546,51 @@ public final class SupplierReport {
             LotRow lot = audit.rejectedLots().get(i);
             html.append("<tr><td class=\"n\">").append(lot.seq()).append("</td><td>").append(LotReportHtml.escape(lot.lot()))
                     .append("</td><td>").append(LotReportHtml.escape(lot.part())).append("</td><td>")
-                    .append(lot.received() == null ? "" : lot.received()).append("</td><td class=\"n\">")
+                    .append(lot.received() == null ? "not recorded" : lot.received()).append("</td><td class=\"n\">")
                     .append(lot.nonconforming()).append(" of ").append(lot.inspected()).append("</td><td>")
                     .append(LotReportHtml.escape(evidence.get(i))).append("</td></tr>\n");
         }
         html.append("</table>\n</body></html>\n");
         return html.toString();
+    }
+
+    /** A rejected lot named for the audit: record, lot, part and receipt date, or that the date is missing. */
+    public static String heading(LotRow lot) {
+        return "#" + lot.seq() + " " + lot.lot() + " (" + lot.part() + ", "
+                + (lot.received() == null ? "receipt date not recorded" : "received " + lot.received()) + ")";
+    }
+
+    /**
+     * A lot judged on measurements, described by its own criterion from its decision record: the statistic
+     * against k (or the estimate against M), and the upper bound on the fraction beyond the limits by its method.
+     */
+    public static String measuredEvidence(JsonNode decision) {
+        JsonNode measured = decision.path("measurement");
+        String unit = measured.path("unit").asText("").isEmpty() ? "" : " " + measured.path("unit").asText();
+        boolean sigmaKnown = measured.path("sigmaKnown").asBoolean();
+        String deviation = sigmaKnown ? "sigma" : "s";
+        List<String> criterion = new ArrayList<>();
+        if (measured.hasNonNull("maxEstimate")) {
+            criterion.add("estimated fraction beyond the limits " + SentenceText.percent(measured.path("estimate")
+                    .asDouble()) + " against M = " + SentenceText.percent(measured.path("maxEstimate").asDouble()));
+        } else {
+            if (measured.hasNonNull("statisticLower")) {
+                criterion.add("(mean - L)/" + deviation + " = " + SentenceText.number(measured.path("statisticLower")
+                        .asDouble()));
+            }
+            if (measured.hasNonNull("statisticUpper")) {
+                criterion.add("(U - mean)/" + deviation + " = " + SentenceText.number(measured.path("statisticUpper")
+                        .asDouble()));
+            }
+            criterion.add("k = " + SentenceText.number(measured.path("k").asDouble()));
+        }
+        return "measured " + measured.path("characteristic").asText() + ": mean "
+                + SentenceText.number(measured.path("mean").asDouble()) + unit + ", " + deviation + " "
+                + SentenceText.number(measured.path("standardDeviation").asDouble()) + unit + "; "
+                + String.join(", ", criterion) + "; estimated " + SentenceText.percent(measured.path("estimate")
+                        .asDouble()) + " beyond the limits, at most " + SentenceText.percent(measured.path("upperBound")
+                        .asDouble()) + " (" + BoundMethod.measured(sigmaKnown).label() + ", "
+                + SentenceText.percent(decision.path("confidence").asDouble()) + " one-sided upper bound); plan "
+                + decision.path("plan").path("name").asText();
     }
 }

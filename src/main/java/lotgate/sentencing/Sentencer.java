@@ -66,7 +66,8 @@ public final class Sentencer {
         int lotBound = model.countsUnits() && lot > 0
                 ? ConfidenceBounds.lotUpperBound(count, inspected, lot, confidence) : -1;
         double observed = (double) count / inspected;
-        return new Evidence(pValue, confidence, interval.lower(), interval.upper(), lotBound, observed,
+        return new Evidence(pValue, confidence, interval.lower(), interval.upper(), model.countsUnits()
+                ? BoundMethod.CLOPPER_PEARSON : BoundMethod.GARWOOD, lotBound, observed,
                 plan.acceptance(model, observed), plan.acceptance(model, aqlPoint), plan.acceptance(model, ltpdPoint));
     }
 }

@@ -246,4 +246,28 @@ class VariablesCommandsTest {
             assertEquals(10.004, sheet.getRow(2).getCell(3).getNumericCellValue(), 1e-9);
         }
     }
+
+    @Test
+    void aMeasuredLotsBoundIsNamedByItsMethodAndTheAuditDescribesItByItsOwnCriterion() throws Exception {
+        Path file = plan("--upper", "10.05");
+        Path store = folder.resolve("history.sqlite");
+        Cli.Result rejected = Cli.run("sentence", "--store", store.toString(), file.toString(),
+                sheet("shifted.csv", normalSample(42, 10.035, 0.01)).toString(), "--lot", "S1", "--supplier",
+                "Invented Supplier", "--part", "P-1", "--format", "json");
+        assertEquals(ExitCode.REJECTED, rejected.exitCode(), rejected.err());
+        JsonNode evidence = JSON.readTree(rejected.out()).get("classes").get(0).get("evidence");
+        // The bound on a measured lot's fraction beyond the limit comes from the noncentral t (sigma unknown), and
+        // it is one-sided: no lower bound, and never the Clopper-Pearson name of a count's interval.
+        assertEquals("noncentral t", evidence.get("interval").asText());
+        assertEquals("one-sided upper", evidence.get("intervalSides").asText());
+        assertTrue(evidence.get("lowerBound").isNull());
+        String audit = Cli.run("supplier", "Invented Supplier", "--store", store.toString()).out();
+        String line = audit.lines().filter(l -> l.contains(" S1 ")).findFirst().orElseThrow();
+        assertTrue(line.contains("(P-1, receipt date not recorded): measured bore diameter: mean "), line);
+        assertTrue(line.contains("(noncentral t, 95% one-sided upper bound)"), line);
+        assertFalse(line.contains("Clopper-Pearson") || line.contains("reject at") || line.contains("null"), line);
+        String text = Cli.run("sentence", "--no-record", file.toString(), sheet("shifted.csv", normalSample(42,
+                10.035, 0.01)).toString(), "--lot", "S2").out();
+        assertTrue(text.contains("one-sided upper bound, exact, noncentral t)"), text);
+    }
 }
