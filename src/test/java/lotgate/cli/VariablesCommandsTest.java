@@ -251,7 +251,7 @@ class VariablesCommandsTest {
     void aMeasuredLotsBoundIsNamedByItsMethodAndTheAuditDescribesItByItsOwnCriterion() throws Exception {
         Path file = plan("--upper", "10.05");
         Path store = folder.resolve("history.sqlite");
-        Cli.Result rejected = Cli.run("sentence", "--store", store.toString(), file.toString(),
+        Cli.Result rejected = Cli.run("sentence", "--store", store.toString(), "--create-store", file.toString(),
                 sheet("shifted.csv", normalSample(42, 10.035, 0.01)).toString(), "--lot", "S1", "--supplier",
                 "Invented Supplier", "--part", "P-1", "--format", "json");
         assertEquals(ExitCode.REJECTED, rejected.exitCode(), rejected.err());
