@@ -204,8 +204,7 @@
         dots[i].setAttribute("cy", py(s.y[k]));
         dots[i].setAttribute("visibility", "visible");
         var value = s.labels && s.labels[k] !== undefined ? s.labels[k] : fy(s.y[k]);
-        var where = s.xLabels && s.xLabels[k] !== undefined ? s.xLabels[k] : fx(s.x[k]);
-        parts.push((s.name ? s.name + ": " : "") + value + (series.length > 1 || s.xLabels ? " at " + where : ""));
+        parts.push(value + (series.length > 1 && s.name ? " (" + s.name + ")" : ""));
       });
       if (at === null) { return; }
       var s0 = series[0];
@@ -213,8 +212,8 @@
       guide.setAttribute("x1", px(s0.x[k0]));
       guide.setAttribute("x2", px(s0.x[k0]));
       guide.setAttribute("visibility", "visible");
-      var head = s0.xLabels ? "" : (spec.xLabel || "x") + " " + fx(s0.x[k0]) + "  ";
-      readout.textContent = head + (spec.yLabel ? spec.yLabel + ": " : "") + parts.join("; ");
+      var head = s0.xLabels ? s0.xLabels[k0] : (spec.xShort || spec.xLabel || "x") + " " + fx(s0.x[k0]);
+      readout.textContent = head + ": " + (spec.yLabel ? spec.yLabel + " " : "") + parts.join("; ");
     }
     root.addEventListener("pointermove", read);
     root.addEventListener("pointerdown", read);

@@ -44,6 +44,7 @@
     }
     LG.chart(curveHost, {
       id: curve, title: look.yLabel + " against incoming quality", xLabel: current.curves.xLabel || "incoming quality",
+      xShort: "quality", yLabel: look.yLabel,
       xFormat: "percent", yFormat: look.yFormat, yMin: look.yMin, yMax: look.yMax,
       series: series, marks: current.marks || []
     });
@@ -62,7 +63,7 @@
       tiles.appendChild(LG.el("div", { "class": "tile", "data-key": tile.k }, [
         LG.el("div", { "class": "k", text: tile.k }), LG.el("div", { "class": "v", text: tile.v })]));
     });
-    answer.textContent = reply.text || "";
+    answer.textContent = (reply.text || "").replace(/^\n+/, "");
     status.textContent = note || "";
     drawCurve();
   }

@@ -1,6 +1,6 @@
 package lotgate.cli;
 
-import java.math.BigDecimal;
+import lotgate.jobs.TypedValues;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.TypeConversionException;
 
@@ -14,26 +14,11 @@ final class Values {
 
     /** A fraction from "1%" or "0.01"; a bare value of 1 or more is refused with a hint. */
     static double fraction(String text) {
-        String trimmed = text.trim();
-        boolean percent = trimmed.endsWith("%");
-        String number = percent ? trimmed.substring(0, trimmed.length() - 1).trim() : trimmed;
-        BigDecimal value;
         try {
-            value = new BigDecimal(number);
-        } catch (NumberFormatException e) {
-            throw new TypeConversionException("'" + text + "' is not a number; write a percent such as 1% or a"
-                    + " fraction such as 0.01");
+            return TypedValues.fraction(text);
+        } catch (IllegalArgumentException e) {
+            throw new TypeConversionException(e.getMessage());
         }
-        if (percent) {
-            value = value.movePointLeft(2);
-        } else if (value.compareTo(BigDecimal.ONE) >= 0) {
-            throw new TypeConversionException("'" + text + "' is not a fraction below 1; did you mean "
-                    + value.stripTrailingZeros().toPlainString() + "%?");
-        }
-        if (value.signum() <= 0) {
-            throw new TypeConversionException("'" + text + "' must be above 0");
-        }
-        return value.doubleValue();
     }
 
     /** Quality levels: fractions nonconforming, or nonconformities per unit for the Poisson model. */
@@ -48,12 +33,11 @@ final class Values {
     static final class Risk implements ITypeConverter<Double> {
         @Override
         public Double convert(String text) {
-            double value = fraction(text);
-            if (value >= 1) {
-                throw new TypeConversionException("'" + text + "' is not a risk; give a value between 0% and 100%,"
-                        + " such as 5%");
+            try {
+                return TypedValues.risk(text);
+            } catch (IllegalArgumentException e) {
+                throw new TypeConversionException(e.getMessage());
             }
-            return value;
         }
     }
 
@@ -87,13 +71,9 @@ final class Values {
 
     private static int wholeNumber(String text, int least) {
         try {
-            int value = Integer.parseInt(text.trim().replace("_", ""));
-            if (value < least) {
-                throw new TypeConversionException("'" + text + "' must be a whole number of " + least + " or more");
-            }
-            return value;
-        } catch (NumberFormatException e) {
-            throw new TypeConversionException("'" + text + "' is not a whole number of " + least + " or more");
+            return TypedValues.wholeNumber(text, least);
+        } catch (IllegalArgumentException e) {
+            throw new TypeConversionException(e.getMessage());
         }
     }
 }

@@ -32,6 +32,8 @@ final class Dispatch extends Handler.Abstract {
             if (reply == null) {
                 reply = site.answer(exchange);
             }
+        } catch (FieldError error) {
+            reply = error.reply();
         } catch (Exchange.Refusal refusal) {
             reply = Reply.text(refusal.status(), refusal.getMessage());
         } catch (Exception | Error e) {
@@ -64,7 +66,7 @@ final class Dispatch extends Handler.Abstract {
         if (!reply.headers().containsKey("Cache-Control")) {
             response.getHeaders().put(HttpHeader.CACHE_CONTROL, "no-store");
         }
-        reply.headers().forEach((name, value) -> response.getHeaders().add(name, value));
+        reply.headers().forEach((name, value) -> response.getHeaders().put(name, value));
         byte[] body = request.getMethod().equals("HEAD") ? new byte[0] : reply.body();
         response.getHeaders().put(HttpHeader.CONTENT_LENGTH, reply.body().length);
         response.write(true, ByteBuffer.wrap(body), callback);

@@ -44,8 +44,8 @@ final class Pages {
                 + "<div class=\"pair\"><div>" + field("alpha", "Producer's risk alpha", "5%", "") + "</div><div>"
                 + field("beta", "Consumer's risk beta", "10%", "") + "</div></div>"
                 + "<div class=\"pair\"><div>"
-                + select("model", "Model", "binomial|binomial (type B)", "hypergeometric|hypergeometric (type A)",
-                        "poisson|Poisson (defects per unit)")
+                + select("model", "Model", "binomial|binomial", "hypergeometric|hypergeometric",
+                        "poisson|Poisson")
                 + "</div><div>" + field("lot-size", "Lot size N", "", "(optional)") + "</div></div>"
                 + "<div class=\"pair\" data-for-scheme=\"single\"><div>" + field("acceptance", "Acceptance number c", "", "(fix it)")
                 + "</div><div>" + field("sample-size", "Sample size n", "", "(evaluate)") + "</div></div>"

@@ -1,28 +1,241 @@
 package lotgate.web;
 
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.SecureRandom;
+import java.time.LocalDate;
+import java.time.format.DateTimeParseException;
+import java.util.ArrayList;
+import java.util.HexFormat;
+import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
+import lotgate.files.InputFileException;
+import lotgate.history.StoreException;
+import lotgate.inspection.Columns;
+import lotgate.inspection.LotDetails;
+import lotgate.jobs.JobException;
+import lotgate.jobs.SentenceLot;
+import lotgate.jobs.TypedValues;
+import lotgate.report.results.SentenceRendering;
 
-/** Sentencing answers: a lot from an uploaded sheet, and unit-by-unit bench entry. */
+/**
+ * Sentencing answers: a lot from an uploaded sheet, recorded in the history store unless the user says
+ * not to, with its lot reports; and unit-by-unit bench entry, judged after each unit by the same job.
+ */
 final class SentenceApi {
+    private static final SecureRandom RANDOM = new SecureRandom();
     private final Workbench.Settings settings;
     private final Uploads uploads;
+    /** Reports written this session, by the random id their links carry. */
+    private final Map<String, Path> reports = new ConcurrentHashMap<>();
 
     SentenceApi(Workbench.Settings settings, Uploads uploads) {
         this.settings = settings;
         this.uploads = uploads;
     }
 
-    Reply sentence(Exchange exchange) throws java.io.IOException {
-        try (Uploads.Sheet sheet = uploads.receive(exchange, exchange.query("file"))) {
-            return Reply.text(503, "not ready " + settings.store() + sheet.file().getFileName());
+    Reply sentence(Exchange exchange) throws IOException {
+        Map<String, String> fields = exchange.queryParameters();
+        Path plan;
+        try {
+            plan = DesignApi.planFile(settings.plans(), fields.get("plan"));
+        } catch (FieldError e) {
+            return JsonText.refused(400, "plan", e.getMessage().replace("plan name", "plan"));
+        }
+        String browserName = fields.get("file");
+        try (Uploads.Sheet sheet = uploads.receive(exchange, browserName)) {
+            boolean record = "yes".equals(fields.get("record"));
+            String id = newId();
+            Files.createDirectories(settings.work());
+            Path xlsx = settings.work().resolve("lot-" + id + ".xlsx");
+            Path html = settings.work().resolve("lot-" + id + ".html");
+            SentenceLot.Result result;
+            try {
+                result = SentenceLot.run(new SentenceLot.Request(plan, sheet.file(), null, Columns.standard(), 0, 0,
+                        details(fields), null, 0.95, record, null, null, "steady", settings.store(),
+                        new SentenceLot.Outputs(null, null, List.of(xlsx, html))));
+            } catch (JobException e) {
+                return JsonText.refused(400, field(e.field()), shown(e.getMessage(), sheet, browserName));
+            } catch (InputFileException e) {
+                boolean aboutPlan = e.getMessage().startsWith(plan.toString());
+                return JsonText.refused(400, aboutPlan ? "plan" : "sheet", shown(e.getMessage(), sheet, browserName));
+            } catch (StoreException e) {
+                return JsonText.refused(503, null, e.getMessage());
+            }
+            Map<String, Object> members = new LinkedHashMap<>();
+            if (result instanceof SentenceLot.Undecided undecided) {
+                members.put("decision", "pending");
+                members.put("headline", "No decision yet");
+                members.put("facts", List.of(List.of("next", SentenceRendering.instruction(undecided))));
+            } else {
+                SentenceLot.Decided decided = (SentenceLot.Decided) result;
+                String lot = decided.decision().lot().lot();
+                members.put("decision", decided.accepted() ? "accept" : "reject");
+                members.put("headline", (lot == null ? "Lot" : "Lot " + lot) + ": "
+                        + (decided.accepted() ? "ACCEPT" : "REJECT"));
+                List<List<String>> facts = new ArrayList<>();
+                facts.add(List.of("plan", decided.decision().plan().name() + " (fingerprint "
+                        + decided.decision().plan().shortFingerprint() + ")"));
+                facts.add(List.of("supplier", orEmpty(decided.decision().lot().supplier())));
+                facts.add(List.of("part", orEmpty(decided.decision().lot().part())));
+                facts.add(List.of("sheet", safeName(browserName) + " (SHA-256 "
+                        + decided.decision().sheetSha256().substring(0, 12) + ")"));
+                if (decided.recording() != null) {
+                    facts.add(List.of("inspection severity", decided.recording().applied().label()));
+                }
+                members.put("facts", facts);
+                members.put("notices", decided.decision().notices());
+                if (decided.recording() != null && decided.recording().recorded()) {
+                    members.put("record", Map.of("sequence", Long.toString(decided.recording().record().seq()),
+                            "chain", decided.recording().record().hash()));
+                }
+                reports.put(id, settings.work().resolve("lot-" + id));
+                members.put("reports", List.of(
+                        Map.of("label", "Lot report (xlsx)", "href", "/download/lot?id=" + id + "&as=xlsx"),
+                        Map.of("label", "Lot report (HTML, printable)", "href", "/download/lot?id=" + id + "&as=html")));
+            }
+            members.put("text", shown(SentenceRendering.text(result), sheet, browserName));
+            return JsonText.ok(members);
         }
     }
 
-    Reply bench(Map<String, String> fields) {
-        return Reply.text(503, "not ready");
+    /** Bench entry: the units said so far, judged by the plan as a sheet of that many units would be. */
+    Reply bench(Map<String, String> fields) throws IOException {
+        Path plan;
+        try {
+            plan = DesignApi.planFile(settings.plans(), fields.get("plan"));
+        } catch (FieldError e) {
+            return JsonText.refused(400, "plan", e.getMessage().replace("plan name", "plan"));
+        }
+        List<Integer> counts = new ArrayList<>();
+        String units = fields.get("units");
+        for (String unit : units == null || units.isBlank() ? new String[0] : units.split(",")) {
+            try {
+                counts.add(TypedValues.wholeNumber(unit, 0));
+            } catch (IllegalArgumentException e) {
+                return JsonText.refused(400, "units", "unit " + (counts.size() + 1) + ": " + e.getMessage());
+            }
+        }
+        if (counts.isEmpty()) {
+            return JsonText.refused(400, "units", "say the first unit: conforming or nonconforming");
+        }
+        boolean byCount = counts.stream().anyMatch(c -> c > 1);
+        StringBuilder sheetText = new StringBuilder(byCount ? "unit,major\n" : "unit,result\n");
+        for (int i = 0; i < counts.size(); i++) {
+            sheetText.append("U").append(i + 1).append(',');
+            sheetText.append(byCount ? Integer.toString(counts.get(i)) : counts.get(i) > 0 ? "fail" : "pass").append('\n');
+        }
+        Path folder = Files.createTempDirectory("lotgate-bench-");
+        Path sheet = folder.resolve("bench.csv");
+        try {
+            Files.writeString(sheet, sheetText);
+            LotDetails lot = new LotDetails("bench", blankToNull(fields.get("supplier")), blankToNull(fields.get("part")),
+                    0, null, null);
+            SentenceLot.Result result;
+            try {
+                result = SentenceLot.run(new SentenceLot.Request(plan, sheet, null, Columns.standard(), 0, 0, lot, null,
+                        0.95, false, null, null, "steady", settings.store(), SentenceLot.Outputs.NONE));
+            } catch (JobException e) {
+                if (e.kind() == JobException.Kind.INCOMPLETE_SAMPLE) {
+                    return JsonText.ok(Map.of("decision", "pending", "headline", "Go on",
+                            "say", counts.size() + " units so far: " + e.getMessage().replace(sheet.toString(),
+                                    "the bench").replaceFirst("^the bench: ", "")));
+                }
+                return JsonText.refused(400, "units", e.getMessage().replace(sheet.toString(), "the bench"));
+            } catch (InputFileException e) {
+                return JsonText.refused(400, "plan", e.getMessage().replace(sheet.toString(), "the bench"));
+            }
+            if (result instanceof SentenceLot.Undecided undecided) {
+                return JsonText.ok(Map.of("decision", "pending", "headline", "Go on",
+                        "say", SentenceRendering.instruction(undecided)));
+            }
+            SentenceLot.Decided decided = (SentenceLot.Decided) result;
+            return JsonText.ok(Map.of("decision", decided.accepted() ? "accept" : "reject",
+                    "headline", decided.accepted() ? "ACCEPT the lot" : "REJECT the lot",
+                    "say", "After " + counts.size() + " units: " + decided.decision().sentence().verdict()
+                            + ". Sentence the lot with its sheet to record it."));
+        } finally {
+            Files.deleteIfExists(sheet);
+            Files.deleteIfExists(folder);
+        }
     }
 
-    Reply report(String id, String as) {
-        return Reply.text(404, "no such report");
+    /** A lot report written this session, by id and kind. */
+    Reply report(String id, String as) throws IOException {
+        Path base = id == null ? null : reports.get(id);
+        if (base == null || !("xlsx".equals(as) || "html".equals(as))) {
+            return Reply.text(404, "no such report in this session of the workbench");
+        }
+        Path file = base.resolveSibling(base.getFileName() + "." + as);
+        if (!Files.isRegularFile(file)) {
+            return Reply.text(404, "the report was removed from " + settings.work());
+        }
+        if (as.equals("html")) {
+            // The report is a page of its own with its style inside: it may use that style, and nothing else.
+            return new Reply(200, Reply.HTML, Files.readAllBytes(file), Map.of("Content-Security-Policy",
+                    "default-src 'none'; style-src 'unsafe-inline'; img-src data:; base-uri 'none'; form-action 'none'"));
+        }
+        return Reply.download("application/vnd.openxmlformats-officedocument.spreadsheetml.sheet",
+                Files.readAllBytes(file), file.getFileName().toString());
+    }
+
+    private static LotDetails details(Map<String, String> fields) {
+        LocalDate day = null;
+        String received = blankToNull(fields.get("received"));
+        if (received != null) {
+            try {
+                day = LocalDate.parse(received);
+            } catch (DateTimeParseException e) {
+                throw new FieldError("received", "--received " + received + ": give a date such as 2026-03-14");
+            }
+        }
+        Integer lotSize = null;
+        String size = blankToNull(fields.get("lot-size"));
+        if (size != null) {
+            try {
+                lotSize = TypedValues.wholeNumber(size, 1);
+            } catch (IllegalArgumentException e) {
+                throw new FieldError("lot-size", "Invalid value for option '--lot-size': " + e.getMessage());
+            }
+        }
+        return new LotDetails(blankToNull(fields.get("lot")), blankToNull(fields.get("supplier")),
+                blankToNull(fields.get("part")), lotSize == null ? 0 : lotSize, day, blankToNull(fields.get("inspector")));
+    }
+
+    /** A message with the temporary sheet's path put back to the name the user knows it by. */
+    private static String shown(String message, Uploads.Sheet sheet, String browserName) {
+        return message.replace(sheet.file().toString(), safeName(browserName));
+    }
+
+    private static String safeName(String browserName) {
+        String name = browserName == null ? "sheet" : browserName;
+        int slash = Math.max(name.lastIndexOf('/'), name.lastIndexOf('\\'));
+        return name.substring(slash + 1);
+    }
+
+    private static String field(String jobField) {
+        String field = DesignApi.fieldOf(jobField);
+        return field == null ? null : switch (field) {
+            case "plan-file" -> "plan";
+            case "sheet-file" -> "sheet";
+            default -> field;
+        };
+    }
+
+    private static String orEmpty(String text) {
+        return text == null ? "" : text;
+    }
+
+    private static String blankToNull(String text) {
+        return text == null || text.isBlank() ? null : text.trim();
+    }
+
+    private static String newId() {
+        byte[] bytes = new byte[8];
+        RANDOM.nextBytes(bytes);
+        return HexFormat.of().formatHex(bytes);
     }
 }

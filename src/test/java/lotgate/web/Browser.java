@@ -79,6 +79,7 @@ final class Browser implements AutoCloseable {
         if (pageHeight > size.getHeight()) {
             driver.manage().window().setSize(new Dimension(size.getWidth(), Math.min(pageHeight + 20, 4000)));
         }
+        driver.executeScript("window.scrollTo(0, 0);");
         File shot = driver.getScreenshotAs(OutputType.FILE);
         Files.createDirectories(file.getParent());
         Files.copy(shot.toPath(), file, java.nio.file.StandardCopyOption.REPLACE_EXISTING);

@@ -3,10 +3,14 @@ package lotgate.web;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.openqa.selenium.By;
+import org.openqa.selenium.Keys;
+import org.openqa.selenium.WebElement;
+import org.openqa.selenium.interactions.Actions;
 
 /** The workbench in a real browser: what a person at the screen sees and does. */
 class WorkbenchBrowserTest {
@@ -15,14 +19,58 @@ class WorkbenchBrowserTest {
     @TempDir
     Path folder;
 
+    private static String tile(Browser browser, String key) {
+        return browser.driver.findElement(By.cssSelector("#tiles [data-key='" + key + "'] .v")).getText();
+    }
+
     @Test
-    void theDesignPageOpensWithItsForm() throws Exception {
+    void designAPlanChangeTheAqlAndSaveIt() throws Exception {
         try (Served served = Served.start(folder); Browser browser = Browser.open(1280, 800)) {
             browser.driver.get(served.uri("/").toString());
-            browser.waiting().until(d -> d.findElement(By.id("f-aql")).isDisplayed());
-            assertEquals("1%", browser.driver.findElement(By.id("f-aql")).getAttribute("value"));
-            assertTrue(browser.driver.getTitle().startsWith("Plan design"));
-            browser.screenshot(SHOTS.resolve("smoke.png"));
+            // The page designs the plan for its first values: AQL 1%, LTPD 5%, alpha 5%, beta 10%.
+            browser.waiting().until(d -> !d.findElements(By.cssSelector("#tiles [data-key='n']")).isEmpty());
+            // n = 132, c = 3 for AQL 1%, LTPD 5% (the README's worked example, checked against SciPy 1.10.1 in
+            // SinglePlanDesignerTest).
+            assertEquals("132", tile(browser, "n"));
+            assertEquals("3", tile(browser, "c"));
+            assertTrue(browser.driver.findElement(By.id("answer")).getText().contains("Inspect n = 132 units"));
+            browser.waiting().until(d -> !d.findElements(By.cssSelector("#curve svg[data-chart='oc'] path")).isEmpty());
+
+            // Hovering over the OC curve reads P(accept) at that quality.
+            WebElement chart = browser.driver.findElement(By.cssSelector("#curve svg"));
+            new Actions(browser.driver).moveToElement(chart, -100, 0).perform();
+            browser.waiting().until(d -> d.findElement(By.cssSelector("#curve .readout")).getText().contains("P(accept)"));
+
+            WebElement aql = browser.driver.findElement(By.id("f-aql"));
+            aql.sendKeys(Keys.chord(Keys.CONTROL, "a"), "0.5%");
+            // AQL 0.5%, LTPD 5%: n = 105, c = 2 (SciPy 1.10.1, brute force over every n and c of binom.sf and
+            // binom.cdf: the smallest n with a c that meets both risks).
+            browser.waiting().until(d -> tile(browser, "n").equals("105"));
+            assertEquals("2", tile(browser, "c"));
+
+            aql.sendKeys(Keys.chord(Keys.CONTROL, "a"), "1");
+            browser.waiting().until(d -> !d.findElement(By.cssSelector("[data-error-for='aql']")).getText().isEmpty());
+            assertEquals("Invalid value for option '--aql': '1' is not a fraction below 1; did you mean 1%?",
+                    browser.driver.findElement(By.cssSelector("[data-error-for='aql']")).getText());
+            aql.sendKeys(Keys.chord(Keys.CONTROL, "a"), "0.5%");
+            browser.waiting().until(d -> d.findElement(By.cssSelector("[data-error-for='aql']")).getText().isEmpty());
+
+            browser.driver.findElement(By.id("pin")).click();
+            aql.sendKeys(Keys.chord(Keys.CONTROL, "a"), "1%");
+            browser.waiting().until(d -> tile(browser, "n").equals("132"));
+            browser.waiting().until(d -> d.findElements(By.cssSelector("#curve svg path[data-series]")).size() == 2);
+
+            browser.driver.findElement(By.id("f-name")).sendKeys("m8-bolts");
+            browser.driver.findElement(By.id("f-description")).sendKeys("M8 flange bolts (invented)");
+            browser.driver.findElement(By.id("save-button")).click();
+            browser.waiting().until(d -> d.findElement(By.id("save-status")).getText().startsWith("Saved"));
+            assertTrue(Files.exists(served.plans.resolve("m8-bolts.json")));
+            browser.waiting().until(d -> !d.findElements(By.cssSelector("[data-open='m8-bolts']")).isEmpty());
+            browser.screenshot(SHOTS.resolve("design.png"));
+
+            browser.driver.findElement(By.cssSelector("[data-open='m8-bolts']")).click();
+            browser.waiting().until(d -> d.findElement(By.id("design-status")).getText().startsWith("Opened"));
+            assertTrue(browser.driver.findElement(By.id("answer")).getText().contains("fingerprint"));
         }
     }
 }

@@ -1,0 +1,61 @@
+package lotgate.jobs;
+
+import java.math.BigDecimal;
+
+/**
+ * The values a quality engineer types, read the same way by every face (command options, workbench
+ * fields): quality levels and risks as "1%", "0.5%" or a fraction such as "0.01", and whole numbers.
+ * A value that cannot be read is refused with an IllegalArgumentException whose message the face shows
+ * after the option or field it came from.
+ */
+public final class TypedValues {
+    private TypedValues() {
+    }
+
+    /** A fraction from "1%" or "0.01"; a bare value of 1 or more is refused with a hint. */
+    public static double fraction(String text) {
+        String trimmed = text.trim();
+        boolean percent = trimmed.endsWith("%");
+        String number = percent ? trimmed.substring(0, trimmed.length() - 1).trim() : trimmed;
+        BigDecimal value;
+        try {
+            value = new BigDecimal(number);
+        } catch (NumberFormatException e) {
+            throw new IllegalArgumentException("'" + text + "' is not a number; write a percent such as 1% or a"
+                    + " fraction such as 0.01");
+        }
+        if (percent) {
+            value = value.movePointLeft(2);
+        } else if (value.compareTo(BigDecimal.ONE) >= 0) {
+            throw new IllegalArgumentException("'" + text + "' is not a fraction below 1; did you mean "
+                    + value.stripTrailingZeros().toPlainString() + "%?");
+        }
+        if (value.signum() <= 0) {
+            throw new IllegalArgumentException("'" + text + "' must be above 0");
+        }
+        return value.doubleValue();
+    }
+
+    /** A risk (alpha, beta, a confidence level): a fraction strictly between 0% and 100%. */
+    public static double risk(String text) {
+        double value = fraction(text);
+        if (value >= 1) {
+            throw new IllegalArgumentException("'" + text + "' is not a risk; give a value between 0% and 100%,"
+                    + " such as 5%");
+        }
+        return value;
+    }
+
+    /** A whole number of {@code least} or more (1 for sample and lot sizes, 0 for acceptance numbers). */
+    public static int wholeNumber(String text, int least) {
+        try {
+            int value = Integer.parseInt(text.trim().replace("_", ""));
+            if (value < least) {
+                throw new IllegalArgumentException("'" + text + "' must be a whole number of " + least + " or more");
+            }
+            return value;
+        } catch (NumberFormatException e) {
+            throw new IllegalArgumentException("'" + text + "' is not a whole number of " + least + " or more");
+        }
+    }
+}
