@@ -86,7 +86,7 @@
   function drawUnits() {
     var strip = LG.clear(document.getElementById("bench-units"));
     units.forEach(function (count, i) {
-      strip.appendChild(LG.el("span", { "class": count > 0 ? "bad" : "", title: "unit " + (i + 1), text: count > 0 ? String(count) : "\u2713" }));
+      strip.appendChild(LG.el("span", { "class": count > 0 ? "nc" : "", title: "unit " + (i + 1), text: count > 0 ? String(count) : "\u2713" }));
     });
   }
 

@@ -50,7 +50,7 @@ final class WorkbenchCommand implements Runnable {
     int uploadLimit;
 
     @Mixin
-    StoreOption storeOption;
+    RecordingStoreOption storeOption;
 
     @Spec
     CommandSpec spec;
@@ -69,6 +69,8 @@ final class WorkbenchCommand implements Runnable {
                     + " must be between 1 and 4096 MiB");
         }
         InetAddress host = address();
+        // The pages record lots: the store must exist, or be created where the other recording commands would.
+        storeOption.prepareForRecording();
         String token = null;
         PrintWriter err = spec.commandLine().getErr();
         if (!host.isLoopbackAddress()) {

@@ -141,8 +141,8 @@ final class SentenceApi {
             } catch (JobException e) {
                 if (e.kind() == JobException.Kind.INCOMPLETE_SAMPLE) {
                     return JsonText.ok(Map.of("decision", "pending", "headline", "Go on",
-                            "say", counts.size() + " units so far: " + e.getMessage().replace(sheet.toString(),
-                                    "the bench").replaceFirst("^the bench: ", "")));
+                            "say", e.getMessage().replace(sheet.toString(), "the bench")
+                                    .replaceFirst("^the bench: ", "").replaceFirst(", rows \\d+ to \\d+", "")));
                 }
                 return JsonText.refused(400, "units", e.getMessage().replace(sheet.toString(), "the bench"));
             } catch (InputFileException e) {

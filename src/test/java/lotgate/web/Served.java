@@ -36,6 +36,9 @@ final class Served implements AutoCloseable {
 
     static Served start(Path folder, String token, long uploadLimit, String store) throws Exception {
         Path plans = Files.createDirectories(folder.resolve("plans"));
+        if (!store.startsWith("jdbc:")) {
+            lotgate.history.HistoryStore.open(store, true).close();
+        }
         Path reports = folder.resolve("reports");
         Workbench workbench = Workbench.start(new Workbench.Settings(InetAddress.getLoopbackAddress(), 0, token,
                 store, plans, uploadLimit, reports));

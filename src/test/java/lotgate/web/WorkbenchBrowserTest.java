@@ -73,4 +73,33 @@ class WorkbenchBrowserTest {
             assertTrue(browser.driver.findElement(By.id("answer")).getText().contains("fingerprint"));
         }
     }
+
+    @Test
+    void sentenceADemoLotByUploadingItsSheet() throws Exception {
+        try (Served served = Served.start(folder); Browser browser = Browser.open(1280, 800)) {
+            assertEquals(200, served.post("/api/plans", "scheme=single&aql=1%25&ltpd=5%25&alpha=5%25&beta=10%25"
+                    + "&model=binomial&name=arnwick-m8&description=M8+flange+bolts+(invented)").statusCode());
+            browser.driver.get(served.uri("/sentence").toString());
+            browser.waiting().until(d -> !d.findElements(By.cssSelector("#f-plan option[value='arnwick-m8']")).isEmpty());
+            Path sheet = Path.of("demo-data", "arnwick-af2611.xlsx").toAbsolutePath();
+            browser.driver.findElement(By.id("f-sheet")).sendKeys(sheet.toString());
+            browser.driver.findElement(By.id("sentence-button")).click();
+            browser.waiting().until(d -> !d.findElements(By.id("decision")).isEmpty());
+            // The demo's lot AF-2611: 2 nonconforming units in 132, within c = 3 (DemoDataTest checks the same).
+            assertEquals("Lot AF-2611: ACCEPT", browser.driver.findElement(By.id("decision")).getText());
+            String verdict = browser.driver.findElement(By.id("verdict")).getText();
+            assertTrue(verdict.contains("sequence number\n1"), verdict);
+            assertTrue(verdict.contains("chain hash"), verdict);
+            assertTrue(browser.driver.findElement(By.id("evidence")).getText()
+                    .contains("2 nonconforming units found in 132 units"));
+            assertEquals(2, browser.driver.findElements(By.cssSelector("#reports a")).size());
+
+            browser.driver.findElement(By.id("unit-good")).click();
+            browser.waiting().until(d -> !d.findElements(By.id("bench-decision")).isEmpty());
+            assertEquals("Go on", browser.driver.findElement(By.id("bench-decision")).getText());
+            browser.driver.findElement(By.id("unit-bad")).click();
+            browser.waiting().until(d -> d.findElements(By.cssSelector("#bench-units span")).size() == 2);
+            browser.screenshot(SHOTS.resolve("sentence.png"));
+        }
+    }
 }
