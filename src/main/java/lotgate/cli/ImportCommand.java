@@ -5,7 +5,6 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.time.LocalDate;
-import java.time.format.DateTimeParseException;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -20,9 +19,10 @@ import lotgate.history.Severity;
 import lotgate.history.SupplierHistory;
 import lotgate.history.SwitchingRules;
 import lotgate.inspection.Cell;
+import lotgate.inspection.Days;
+import lotgate.inspection.SampleReader;
 import lotgate.inspection.SheetException;
 import lotgate.inspection.SheetSource;
-import org.apache.poi.ss.usermodel.DateUtil;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -171,8 +171,12 @@ final class ImportCommand implements Runnable {
         Cell sizeCell = cell.apply("lot size");
         int lotSize = sizeCell == null ? 0 : whole(sizeCell, inspected, () -> bad.apply("lot size", "lot size '"
                 + sizeCell.text() + "' is not a whole number of at least the sample size " + inspected));
-        LocalDate received = date(cell.apply("received"), () -> bad.apply("received", "received '"
-                + cell.apply("received").text() + "' is not a date such as 2026-03-14"));
+        LocalDate received;
+        try {
+            received = Days.of(cell.apply("received"), "received");
+        } catch (IllegalArgumentException e) {
+            throw bad.apply("received", e.getMessage());
+        }
         Map<String, Integer> defects = new LinkedHashMap<>();
         Cell defectCell = cell.apply("defects");
         if (defectCell != null) {
@@ -182,11 +186,16 @@ final class ImportCommand implements Runnable {
                 }
                 int colon = item.lastIndexOf(':');
                 try {
-                    int count = Integer.parseInt(item.substring(colon + 1).trim());
+                    long count = Long.parseLong(item.substring(colon + 1).trim());
                     if (colon < 1 || count < 0) {
                         throw new NumberFormatException();
                     }
-                    defects.merge(item.substring(0, colon).trim(), count, Integer::sum);
+                    long sum = count + defects.getOrDefault(item.substring(0, colon).trim(), 0);
+                    if (sum > SampleReader.MAX_COUNT) {
+                        throw bad.apply("defects", "defects '" + item.trim() + "': more than "
+                                + String.format(Locale.ROOT, "%,d", SampleReader.MAX_COUNT) + " of one type in a lot");
+                    }
+                    defects.put(item.substring(0, colon).trim(), (int) sum);
                 } catch (NumberFormatException | StringIndexOutOfBoundsException e) {
                     throw bad.apply("defects", "defects '" + item.trim() + "' is not type:count, as in burr:2");
                 }
@@ -211,7 +220,8 @@ final class ImportCommand implements Runnable {
     }
 
     private static int whole(Cell cell, int least, java.util.function.Supplier<SheetException> bad) {
-        double value = cell.kind() == Cell.Kind.NUMBER ? cell.number() : parse(cell.text());
+        double value = cell.kind() == Cell.Kind.NUMBER ? cell.number()
+                : cell.kind() == Cell.Kind.TEXT ? parse(cell.text()) : Double.NaN;
         if (!(value >= least) || value != Math.rint(value) || value > Integer.MAX_VALUE) {
             throw bad.get();
         }
@@ -223,17 +233,6 @@ final class ImportCommand implements Runnable {
             return Double.parseDouble(text.trim());
         } catch (NumberFormatException e) {
             return Double.NaN;
-        }
-    }
-
-    private static LocalDate date(Cell cell, java.util.function.Supplier<SheetException> bad) {
-        if (cell.kind() == Cell.Kind.NUMBER) {
-            return DateUtil.getLocalDateTime(cell.number()).toLocalDate();
-        }
-        try {
-            return LocalDate.parse(cell.text().trim());
-        } catch (DateTimeParseException e) {
-            throw bad.get();
         }
     }
 }

@@ -61,6 +61,23 @@ final class SentenceCommand implements Runnable {
                     + " defect, note, value (measurements); e.g. --columns unit=Serial,result=Outcome.")
     String columnMapping;
 
+    @Option(names = "--header-row", paramLabel = "ROW", converter = Values.SheetRow.class,
+            description = "The sheet row that holds the column names (default: the first of the top 50 rows that"
+                    + " names a result, defect class or value column; rows above it, such as a title block, are"
+                    + " passed over). 1 to 1048576.")
+    Integer headerRow;
+
+    @Option(names = "--result-words", paramLabel = "MAPPING",
+            description = "Your site's own result words, added to the standard ones (pass, p, ok, good; fail, f, nc,"
+                    + " ng, bad; any case), e.g. --result-words \"pass=GO,Passed;fail=NOGO,Scrap\". The same words"
+                    + " may be set for a whole site in the LOTGATE_RESULT_WORDS environment variable.")
+    String resultWords;
+
+    @Option(names = "--delimiter", paramLabel = "CHAR",
+            description = "How a CSV sheet separates its values: comma, semicolon or tab (default: decided from the"
+                    + " header row).")
+    String delimiter;
+
     @Option(names = "--rows", paramLabel = "FIRST-LAST",
             description = "The sheet rows that form the sample, when the sheet holds more units (e.g. 2-126).")
     String rows;
@@ -153,18 +170,18 @@ final class SentenceCommand implements Runnable {
         if (rows == null) {
             return new int[] {0, 0};
         }
-        String[] parts = rows.split("-");
+        String[] parts = rows.trim().split("-", -1);
         try {
             int first = Integer.parseInt(parts[0].trim());
             int last = Integer.parseInt(parts[1].trim());
-            if (parts.length == 2 && first >= 1 && last >= first) {
+            if (parts.length == 2 && first >= 1 && last >= first && last <= 1_048_576) {
                 return new int[] {first, last};
             }
         } catch (NumberFormatException | ArrayIndexOutOfBoundsException e) {
             // Falls through to the message below.
         }
         throw new ParameterException(spec.commandLine(), "--rows " + rows + ": give the first and last sheet row of"
-                + " the sample, as in 2-126");
+                + " the sample, as in 2-126 (rows 1 to 1048576, the first no later than the last)");
     }
 
     private LotDetails givenDetails() {
@@ -193,14 +210,7 @@ final class SentenceCommand implements Runnable {
     }
 
     private Columns columns() {
-        if (columnMapping == null) {
-            return Columns.standard();
-        }
-        try {
-            return Columns.mapped(columnMapping);
-        } catch (IllegalArgumentException e) {
-            throw new ParameterException(spec.commandLine(), "--columns: " + e.getMessage());
-        }
+        return SheetOptions.columns(spec, columnMapping, headerRow, delimiter, resultWords);
     }
 
 }

@@ -69,6 +69,18 @@ final class Values {
         }
     }
 
+    /** Sheet rows: 1 to 1,048,576, the rows a spreadsheet has. */
+    static final class SheetRow implements ITypeConverter<Integer> {
+        @Override
+        public Integer convert(String text) {
+            int row = wholeNumber(text, 1);
+            if (row > 1_048_576) {
+                throw new TypeConversionException("'" + text + "' is past the last row a sheet has, 1048576");
+            }
+            return row;
+        }
+    }
+
     private static int wholeNumber(String text, int least) {
         try {
             return TypedValues.wholeNumber(text, least);

@@ -6,10 +6,20 @@ package lotgate.inspection;
  * @param column 0-based column index
  * @param text   the cell's text as shown (numbers in their shortest form), or the formula for
  *               {@link Kind#FORMULA_WITHOUT_VALUE}
+ * @param number the number of a {@link Kind#NUMBER} or {@link Kind#DATE} cell (a date as the spreadsheet's day
+ *               number), else NaN
  */
 public record Cell(int column, Kind kind, String text, double number) {
 
-    public enum Kind { TEXT, NUMBER, BOOLEAN, ERROR, FORMULA_WITHOUT_VALUE }
+    /** DATE: a number shown in a date or time format. */
+    public enum Kind { TEXT, NUMBER, DATE, BOOLEAN, ERROR, FORMULA_WITHOUT_VALUE }
+
+    /** The most characters a spreadsheet cell holds (32,767 in the common spreadsheet programs). */
+    public static final int MAX_TEXT = 32_767;
+    /** The last column a spreadsheet has (XFD), 0-based. */
+    public static final int MAX_COLUMN = 16_383;
+    /** The last row a spreadsheet has. */
+    public static final int MAX_ROW = 1_048_576;
 
     static Cell text(int column, String text) {
         return new Cell(column, Kind.TEXT, text, Double.NaN);
@@ -17,6 +27,10 @@ public record Cell(int column, Kind kind, String text, double number) {
 
     static Cell number(int column, double value) {
         return new Cell(column, Kind.NUMBER, shortest(value), value);
+    }
+
+    static Cell date(int column, double value) {
+        return new Cell(column, Kind.DATE, shortest(value), value);
     }
 
     /** 3.0 as "3", 2.5 as "2.5": how a spreadsheet shows a general number. */

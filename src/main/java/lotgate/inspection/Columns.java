@@ -5,8 +5,10 @@ import java.util.Locale;
 import java.util.Map;
 
 /**
- * Which header names stand for which column of an inspection sheet. The default names are the
- * roles' own (unit, result, critical, major, minor, defect, note, value); a site may map its own.
+ * How an inspection sheet's table is laid out: which header names stand for which column (the default names
+ * are the roles' own: unit, result, critical, major, minor, defect, note, value; a site may map its own), which
+ * row holds them (searched for, or given), how a CSV sheet separates its values (decided, or given), and which
+ * words a result column holds.
  */
 public final class Columns {
 
@@ -20,11 +22,62 @@ public final class Columns {
     }
 
     private final Map<Role, String> names = new EnumMap<>(Role.class);
+    private int headerRow;
+    private Character delimiter;
+    private ResultWords words = ResultWords.standard();
 
     private Columns() {
         for (Role role : Role.values()) {
             names.put(role, role.label());
         }
+    }
+
+    private Columns copy() {
+        Columns copy = new Columns();
+        copy.names.putAll(names);
+        copy.headerRow = headerRow;
+        copy.delimiter = delimiter;
+        copy.words = words;
+        return copy;
+    }
+
+    /** These columns with the header on the given sheet row (1 for the first; 0: searched for). */
+    public Columns withHeaderRow(int row) {
+        if (row < 0 || row > Cell.MAX_ROW) {
+            throw new IllegalArgumentException("header row " + row + " is not a row of a sheet (1 to " + Cell.MAX_ROW
+                    + ")");
+        }
+        Columns copy = copy();
+        copy.headerRow = row;
+        return copy;
+    }
+
+    /** These columns, a CSV sheet's values separated by the character given rather than a decided one. */
+    public Columns withDelimiter(char given) {
+        Columns copy = copy();
+        copy.delimiter = given;
+        return copy;
+    }
+
+    /** These columns with the result words given. */
+    public Columns withResultWords(ResultWords given) {
+        Columns copy = copy();
+        copy.words = given;
+        return copy;
+    }
+
+    /** The header's sheet row, or 0 when it is searched for. */
+    public int headerRow() {
+        return headerRow;
+    }
+
+    /** The CSV separator given, or null when it is decided from the header row. */
+    public Character delimiter() {
+        return delimiter;
+    }
+
+    public ResultWords resultWords() {
+        return words;
     }
 
     public static Columns standard() {

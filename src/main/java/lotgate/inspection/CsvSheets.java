@@ -16,11 +16,17 @@ import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 
 /**
- * Streams the rows of a CSV file through Commons CSV: UTF-8 with or without a byte-order mark, comma
- * or semicolon separated (whichever the first non-empty line uses more of, outside quotes).
+ * Streams the rows of a CSV file through Commons CSV: UTF-8 with or without a byte-order mark, separated by
+ * commas, semicolons or tabs. The separator is given, or decided from the header row alone: the one that
+ * splits a row of the first {@link SheetSource#HEADER_SEARCH} into the header a reader looks for (failing
+ * that, whichever of comma and semicolon the first non-empty line uses more of, outside quotes). A record
+ * longer than {@link #MAX_RECORD} characters is refused, so that memory stays bounded.
  */
 final class CsvSheets implements SheetSource {
+    /** The longest record read, in characters: far more than a row of an inspection sheet. */
+    static final int MAX_RECORD = 1 << 20;
     private final Path file;
+    private Character delimiter;
 
     CsvSheets(Path file) {
         this.file = file;
@@ -40,6 +46,46 @@ final class CsvSheets implements SheetSource {
         return file.getFileName().toString();
     }
 
+    @Override
+    public void useDelimiter(char given) {
+        delimiter = given;
+    }
+
+    @Override
+    public void findHeader(java.util.function.Predicate<List<String>> isHeader) {
+        if (delimiter != null) {
+            return;
+        }
+        int bestLine = Integer.MAX_VALUE;
+        for (char candidate : new char[] {',', ';', '\t'}) {
+            int line = headerLine(candidate, isHeader);
+            if (line < bestLine) {
+                bestLine = line;
+                delimiter = candidate;
+            }
+        }
+    }
+
+    /** The line of the first of the first rows that, split by the candidate, is a header; else MAX_VALUE. */
+    private int headerLine(char candidate, java.util.function.Predicate<List<String>> isHeader) {
+        CSVFormat format = CSVFormat.RFC4180.builder().setDelimiter(candidate).setIgnoreEmptyLines(false).get();
+        try (Reader reader = reader(); CSVParser parser = CSVParser.builder().setReader(reader).setFormat(format).get()) {
+            int line = 0;
+            for (CSVRecord record : parser) {
+                line++;
+                if (line > HEADER_SEARCH) {
+                    break;
+                }
+                if (isHeader.test(record.toList())) {
+                    return line;
+                }
+            }
+        } catch (IOException | RuntimeException e) {
+            // The full read reports what is wrong with the file.
+        }
+        return Integer.MAX_VALUE;
+    }
+
     private Reader reader() throws IOException {
         var decoder = StandardCharsets.UTF_8.newDecoder()
                 .onMalformedInput(CodingErrorAction.REPORT)
@@ -49,10 +95,13 @@ final class CsvSheets implements SheetSource {
         if (reader.read() != '\uFEFF') {
             reader.reset();
         }
-        return reader;
+        return new BoundedRecords(reader);
     }
 
     private char delimiter() throws IOException {
+        if (delimiter != null) {
+            return delimiter;
+        }
         try (BufferedReader reader = new BufferedReader(reader())) {
             for (String line = reader.readLine(); line != null; line = reader.readLine()) {
                 if (line.indexOf('\0') >= 0) {
@@ -101,7 +150,11 @@ final class CsvSheets implements SheetSource {
                         }
                     }
                     if (!cells.isEmpty()) {
-                        handler.row(line, cells);
+                        try {
+                            handler.row(line, cells);
+                        } catch (RowHandler.Stop e) {
+                            return;
+                        }
                     }
                 }
             }
@@ -116,6 +169,40 @@ final class CsvSheets implements SheetSource {
             throw new SheetException(file, "cannot be read (" + e.getMessage() + ")", e);
         } catch (IllegalStateException e) {
             throw new SheetException(file, "malformed CSV (" + e.getMessage() + ")", e);
+        }
+    }
+
+    /** Counts the characters of each record (up to a line end outside quotes) and refuses an overlong one. */
+    private final class BoundedRecords extends java.io.FilterReader {
+        private boolean quoted;
+        private int length;
+
+        BoundedRecords(Reader in) {
+            super(in);
+        }
+
+        @Override
+        public int read() throws IOException {
+            char[] one = new char[1];
+            return read(one, 0, 1) < 0 ? -1 : one[0];
+        }
+
+        @Override
+        public int read(char[] buffer, int offset, int count) throws IOException {
+            int n = super.read(buffer, offset, count);
+            for (int i = offset; i < offset + n; i++) {
+                char ch = buffer[i];
+                if (ch == '"') {
+                    quoted = !quoted;
+                }
+                if (ch == '\n' && !quoted) {
+                    length = 0;
+                } else if (++length > MAX_RECORD) {
+                    throw new SheetException(file, "refused: a record longer than " + MAX_RECORD + " characters, far"
+                            + " beyond a row of a real inspection sheet");
+                }
+            }
+            return n;
         }
     }
 

@@ -3,10 +3,8 @@ package lotgate.inspection;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
-import java.time.format.DateTimeParseException;
 import java.util.List;
 import java.util.Locale;
-import org.apache.poi.ss.usermodel.DateUtil;
 
 /**
  * What identifies a lot: its id, supplier, part, size, the day it was received and who inspected it.
@@ -68,7 +66,7 @@ public record LotDetails(String lot, String supplier, String part, int lotSize, 
 
     private static LotDetails parse(SheetSource source, String sheet) {
         String[] values = new String[6];
-        double[] received = {Double.NaN};
+        LocalDate[] received = {null};
         String sheetName = sheet == null ? source.sheetNames().get(0) : sheet;
         source.read(sheet, (row, cells) -> {
             Cell key = cells.get(0);
@@ -93,28 +91,23 @@ public record LotDetails(String lot, String supplier, String part, int lotSize, 
             }
             Cell value = cells.get(1);
             values[index] = value.text().trim();
-            if (index == 4 && value.kind() == Cell.Kind.NUMBER) {
-                received[0] = value.number();
+            if (index == 4) {
+                try {
+                    received[0] = Days.of(value, "received");
+                } catch (IllegalArgumentException e) {
+                    throw new SheetException(source.file(), source.where(sheetName, row, value.column()) + ": "
+                            + e.getMessage());
+                }
             }
-            if (index == 3 && !values[3].matches("\\d{1,10}")) {
+            if (index == 3 && (value.kind() == Cell.Kind.DATE || !values[3].matches("\\d{1,10}"))) {
                 throw new SheetException(source.file(), source.where(sheetName, row, value.column())
                         + ": lot size '" + values[3] + "' is not a whole number of 1 or more");
             }
         });
-        LocalDate day = null;
-        if (!Double.isNaN(received[0])) {
-            day = DateUtil.getLocalDateTime(received[0]).toLocalDate();
-        } else if (values[4] != null) {
-            try {
-                day = LocalDate.parse(values[4]);
-            } catch (DateTimeParseException e) {
-                throw new SheetException(source.file(), "received '" + values[4] + "' is not a date such as"
-                        + " 2026-03-14");
-            }
-        }
+        LocalDate day = received[0];
         long size = values[3] == null ? 0 : Long.parseLong(values[3]);
         if (size > Integer.MAX_VALUE || (values[3] != null && size < 1)) {
-            throw new SheetException(source.file(), "lot size " + values[3] + " is out of range");
+            throw new SheetException(source.file(), "lot size " + values[3] + " is outside 1 to " + Integer.MAX_VALUE);
         }
         return new LotDetails(values[0], values[1], values[2], (int) size, day, values[5]);
     }

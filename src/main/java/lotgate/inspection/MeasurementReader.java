@@ -8,8 +8,10 @@ import java.util.Map;
 
 /**
  * Reads a sheet of measurements, one measured unit per row under a header with a value column (and
- * optionally unit and note columns): the values in sheet order with their rows. Every bad value is refused
- * by its cell; a repeated unit identifier is refused with both rows.
+ * optionally unit and note columns): the values in sheet order with their rows. The header is the first of the
+ * top {@link SheetSource#HEADER_SEARCH} rows that names the value column, or the row given. Every bad value is
+ * refused by its cell; a repeated unit identifier is refused with both rows; a merged cell that would hide a
+ * value is refused with its range.
  */
 public final class MeasurementReader implements RowHandler {
     private final SheetSource source;
@@ -18,7 +20,10 @@ public final class MeasurementReader implements RowHandler {
     private final int fromRow;
     private final int toRow;
 
+    private final int givenHeaderRow;
     private int headerRow = -1;
+    private int lastRowSeen;
+    private final List<String> looked = new ArrayList<>();
     private int valueColumn = -1;
     private int unitColumn = -1;
     private final List<String> headers = new ArrayList<>();
@@ -85,6 +90,10 @@ public final class MeasurementReader implements RowHandler {
         this.columns = columns;
         this.fromRow = fromRow;
         this.toRow = toRow;
+        this.givenHeaderRow = columns.headerRow();
+        if (columns.delimiter() != null) {
+            source.useDelimiter(columns.delimiter());
+        }
     }
 
     public Measurements read() {
@@ -92,23 +101,80 @@ public final class MeasurementReader implements RowHandler {
             throw new SheetException(source.file(), "no sheet named '" + sheet + "'; the sheets are "
                     + SheetSource.quoted(source.sheetNames()));
         }
+        source.findHeader(this::isHeader);
         source.read(sheet, this);
         if (headerRow < 0) {
-            throw new SheetException(source.file(), "sheet '" + sheet + "' is empty: there is no header row");
+            if (looked.isEmpty()) {
+                throw new SheetException(source.file(), "sheet '" + sheet + "' is empty: there is no header row");
+            }
+            throw noHeader();
         }
         confirmRepeats();
         return new Measurements(source.file(), sheet, headerRow, Arrays.copyOf(values, count),
                 Arrays.copyOf(rows, count), Map.copyOf(units), List.copyOf(headers));
     }
 
+    private boolean isHeader(List<String> texts) {
+        return texts.stream().anyMatch(t -> columns.roleOf(t) == Columns.Role.VALUE);
+    }
+
+    private SheetException noHeader() {
+        if (givenHeaderRow > 0) {
+            return new SheetException(source.file(), source.whereRow(sheet, givenHeaderRow) + ", given as the header"
+                    + " row, is empty");
+        }
+        List<String> shown = looked.subList(0, Math.min(6, looked.size()));
+        return new SheetException(source.file(), "no header row: none of rows 1 to "
+                + Math.min(lastRowSeen, SheetSource.HEADER_SEARCH) + " of sheet '" + sheet + "' has a '"
+                + columns.nameOf(Columns.Role.VALUE) + "' column; the rows looked at are " + String.join("; ", shown)
+                + (looked.size() > shown.size() ? "; and " + (looked.size() - shown.size()) + " more" : "")
+                + " (name your own headers with --columns, e.g. value=Diameter, or give the header row with --header-row)");
+    }
+
     @Override
-    public void row(int row, List<Cell> cells) {
+    public void merged(List<MergedRange> ranges) {
         if (headerRow < 0) {
-            header(row, cells);
             return;
         }
-        if ((fromRow > 0 && row < fromRow) || (toRow > 0 && row > toRow)) {
+        int last = toRow > 0 ? Math.min(toRow, lastRowSeen) : lastRowSeen;
+        for (MergedRange range : ranges) {
+            int row = Math.max(Math.max(headerRow + 1, fromRow), range.firstRow());
+            if (!range.hides(row, valueColumn)) {
+                row++;
+            }
+            if (row <= last && range.hides(row, valueColumn)) {
+                throw new SheetException(source.file(), source.where(sheet, row, valueColumn) + " is part of the"
+                        + " merged range " + range.text() + ", so it holds no " + columns.nameOf(Columns.Role.VALUE)
+                        + " of its own; unmerge the cells and give every unit its own value on its own row");
+            }
+        }
+    }
+
+    @Override
+    public void row(int row, List<Cell> cells) {
+        lastRowSeen = row;
+        if (headerRow < 0) {
+            List<String> texts = cells.stream().map(Cell::text).toList();
+            if (givenHeaderRow > 0 ? row > givenHeaderRow : row > SheetSource.HEADER_SEARCH) {
+                throw noHeader();
+            }
+            if (givenHeaderRow > 0 ? row == givenHeaderRow : isHeader(texts)) {
+                header(row, cells);
+            } else if (givenHeaderRow == 0) {
+                looked.add("row " + row + ": " + String.join(", ", texts.subList(0, Math.min(4, texts.size())))
+                        + (texts.size() > 4 ? ", …" : ""));
+            }
             return;
+        }
+        if (toRow > 0 && row > toRow) {
+            throw new RowHandler.Stop();
+        }
+        if (fromRow > 0 && row < fromRow) {
+            return;
+        }
+        if (count >= Cell.MAX_ROW) {
+            throw new SheetException(source.file(), "sheet '" + sheet + "' holds more than " + Cell.MAX_ROW
+                    + " measurements, more rows than a spreadsheet has; name the sample's rows");
         }
         Cell value = null;
         String unit = "";
@@ -125,6 +191,8 @@ public final class MeasurementReader implements RowHandler {
         }
         double number = switch (value.kind()) {
             case NUMBER -> value.number();
+            case DATE -> throw bad(row, value, columns.nameOf(Columns.Role.VALUE) + " cell is formatted as a date (it"
+                    + " holds " + value.text() + "); format it as a number");
             case TEXT -> parse(value.text());
             case FORMULA_WITHOUT_VALUE -> throw bad(row, value, "the formula " + value.text() + " has no saved value;"
                     + " open the sheet in a spreadsheet program, let it calculate, and save it");
@@ -178,7 +246,7 @@ public final class MeasurementReader implements RowHandler {
         }
         if (valueColumn < 0) {
             throw new SheetException(source.file(), "no '" + columns.nameOf(Columns.Role.VALUE) + "' column in the"
-                    + " header, " + source.whereRow(sheet, row) + ", so the sheet holds no measurements; the headers"
+                    + " header row, " + source.whereRow(sheet, row) + ", so the sheet holds no measurements; the headers"
                     + " found are " + String.join(", ", headers) + " (name your own with --columns, e.g."
                     + " value=Diameter)");
         }

@@ -12,14 +12,19 @@ import java.util.TreeMap;
 import lotgate.plan.DefectClass;
 
 /**
- * Reads an inspection sheet into an {@link InspectionSample}: the first non-empty row is the header,
- * each later non-blank row one inspected unit. Every bad value is refused with the cell it stands in.
+ * Reads an inspection sheet into an {@link InspectionSample}: the header is the first of the top
+ * {@link SheetSource#HEADER_SEARCH} rows that names a result column or defect class count columns (rows above it,
+ * such as a form's title block, are passed over), or the row given; each later non-blank row is one inspected unit.
+ * Every bad value is refused with the cell it stands in; a merged cell that would hide a unit's value is refused
+ * with its range.
  */
 public final class SampleReader implements RowHandler {
     /** Nonconforming units kept for reports; the counts cover all of them. */
     public static final int KEPT_UNITS = 1000;
     /** Distinct defect types kept; more are counted under "(other types)". */
     private static final int KEPT_TYPES = 1000;
+    /** The most nonconformities one unit may have of a class: far more than any real unit, and sums stay exact. */
+    public static final int MAX_COUNT = 1_000_000;
 
     private final SheetSource source;
     private final String sheet;
@@ -27,8 +32,13 @@ public final class SampleReader implements RowHandler {
     private final int[] cutoffs;
     private final int fromRow;
     private final int toRow;
+    private final int givenHeaderRow;
+    private final ResultWords words;
 
     private int headerRow = -1;
+    private int lastRowSeen;
+    private final List<String> looked = new ArrayList<>();
+    private int lookedRows;
     private final List<String> headers = new ArrayList<>();
     private Columns.Role[] roleByColumn = new Columns.Role[0];
     private final Map<Columns.Role, Integer> columnByRole = new HashMap<>();
@@ -51,6 +61,7 @@ public final class SampleReader implements RowHandler {
 
     /**
      * @param sheet   the sheet to read, or null for the first sheet not named "lot"
+     * @param columns the column names, the header row (or 0 to search), the CSV separator and the result words
      * @param cutoffs the sample prefixes to count separately (each class's n)
      * @param fromRow the first sheet row of the sample, or 0 for all rows after the header
      * @param toRow   the last sheet row of the sample, or 0 for the end of the sheet
@@ -62,6 +73,11 @@ public final class SampleReader implements RowHandler {
         this.cutoffs = cutoffs.clone();
         this.fromRow = fromRow;
         this.toRow = toRow;
+        this.givenHeaderRow = columns.headerRow();
+        this.words = columns.resultWords();
+        if (columns.delimiter() != null) {
+            source.useDelimiter(columns.delimiter());
+        }
     }
 
     private static String defaultSheet(SheetSource source) {
@@ -87,9 +103,13 @@ public final class SampleReader implements RowHandler {
             throw new SheetException(source.file(), "no sheet named '" + sheet + "'; the sheets are "
                     + SheetSource.quoted(source.sheetNames()));
         }
+        source.findHeader(this::isHeader);
         source.read(sheet, this);
         if (headerRow < 0) {
-            throw new SheetException(source.file(), where() + " is empty: there is no header row");
+            if (lookedRows == 0) {
+                throw new SheetException(source.file(), where() + " is empty: there is no header row");
+            }
+            throw noHeader();
         }
         confirmRepeats();
         return new InspectionSample(source.file(), sheet, headerRow, List.copyOf(headers), passFail,
@@ -103,16 +123,76 @@ public final class SampleReader implements RowHandler {
         return source.sheetNames().size() == 1 && source instanceof CsvSheets ? "the file" : "sheet '" + sheet + "'";
     }
 
+    /** Whether a row's cell texts name a result column or a defect class count column. */
+    private boolean isHeader(List<String> texts) {
+        for (String text : texts) {
+            Columns.Role role = columns.roleOf(text);
+            if (role == Columns.Role.RESULT || role == Columns.Role.CRITICAL || role == Columns.Role.MAJOR
+                    || role == Columns.Role.MINOR) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     @Override
     public void row(int row, List<Cell> cells) {
+        lastRowSeen = row;
         if (headerRow < 0) {
-            header(row, cells);
+            List<String> texts = cells.stream().map(Cell::text).toList();
+            if (givenHeaderRow > 0 ? row > givenHeaderRow : row > SheetSource.HEADER_SEARCH) {
+                throw noHeader();
+            }
+            if (givenHeaderRow > 0 ? row == givenHeaderRow : isHeader(texts)) {
+                header(row, cells);
+            } else {
+                look(row, texts);
+            }
             return;
         }
-        if ((fromRow > 0 && row < fromRow) || (toRow > 0 && row > toRow)) {
+        if (toRow > 0 && row > toRow) {
+            throw new RowHandler.Stop();
+        }
+        if (fromRow > 0 && row < fromRow) {
             return;
+        }
+        if (units >= Cell.MAX_ROW) {
+            throw new SheetException(source.file(), where() + " holds more than " + Cell.MAX_ROW + " units, more"
+                    + " rows than a spreadsheet has; name the sample's rows");
         }
         unit(row, cells);
+    }
+
+    /** Notes a row passed over in the search for the header, for the message that no header was found. */
+    private void look(int row, List<String> texts) {
+        lookedRows++;
+        if (givenHeaderRow > 0 || looked.size() >= 6) {
+            return;
+        }
+        List<String> shown = new ArrayList<>();
+        for (String text : texts.subList(0, Math.min(4, texts.size()))) {
+            String trimmed = text.trim().replaceAll("\\s+", " ");
+            shown.add(trimmed.length() > 24 ? trimmed.substring(0, 23) + "…" : trimmed);
+        }
+        looked.add("row " + row + ": " + String.join(", ", shown) + (texts.size() > 4 ? ", …" : ""));
+    }
+
+    private String wanted() {
+        return "a '" + columns.nameOf(Columns.Role.RESULT) + "' column or defect class count columns ("
+                + columns.nameOf(Columns.Role.CRITICAL) + ", " + columns.nameOf(Columns.Role.MAJOR) + ", "
+                + columns.nameOf(Columns.Role.MINOR) + ")";
+    }
+
+    private SheetException noHeader() {
+        if (givenHeaderRow > 0) {
+            return new SheetException(source.file(), source.whereRow(sheet, givenHeaderRow) + ", given as the header"
+                    + " row, is empty");
+        }
+        int last = Math.min(lastRowSeen, SheetSource.HEADER_SEARCH);
+        return new SheetException(source.file(), "no header row: none of rows 1 to " + last + " of " + where()
+                + " has " + wanted() + "; the rows looked at are " + String.join("; ", looked)
+                + (lookedRows > looked.size() ? "; and " + (lookedRows - looked.size()) + " more" : "")
+                + " (name your own headers with --columns, e.g. result=Outcome, or give the header row with --header-row)");
     }
 
     private void header(int row, List<Cell> cells) {
@@ -143,11 +223,9 @@ public final class SampleReader implements RowHandler {
             }
         }
         if (!result && classColumns.isEmpty()) {
-            throw new SheetException(source.file(), "no '" + columns.nameOf(Columns.Role.RESULT) + "' column and no"
-                    + " defect class count columns (" + columns.nameOf(Columns.Role.CRITICAL) + ", "
-                    + columns.nameOf(Columns.Role.MAJOR) + ", " + columns.nameOf(Columns.Role.MINOR)
-                    + ") in the header, " + source.whereRow(sheet, row) + "; the headers found are "
-                    + String.join(", ", headers) + " (name your own with --columns, e.g. result=Outcome)");
+            throw new SheetException(source.file(), "the header row, " + source.whereRow(sheet, row) + ", has no "
+                    + wanted().substring(2) + "; the headers found are " + String.join(", ", headers)
+                    + " (name your own with --columns, e.g. result=Outcome)");
         }
         if (result && !classColumns.isEmpty()) {
             throw new SheetException(source.file(), "the header, " + source.whereRow(sheet, row) + ", has both a '"
@@ -155,6 +233,37 @@ public final class SampleReader implements RowHandler {
                     + " recording");
         }
         passFail = result;
+    }
+
+    /**
+     * Refuses a merged range that covers a unit's unit, result, count or defect cell other than the range's
+     * top-left cell: such a cell holds no value of its own, and a sheet read row by row would take it as blank.
+     */
+    @Override
+    public void merged(List<MergedRange> ranges) {
+        if (headerRow < 0) {
+            return;
+        }
+        int first = Math.max(headerRow + 1, fromRow);
+        int last = toRow > 0 ? Math.min(toRow, lastRowSeen) : lastRowSeen;
+        for (MergedRange range : ranges) {
+            for (int column = range.firstColumn(); column <= range.lastColumn() && column < roleByColumn.length;
+                    column++) {
+                Columns.Role role = roleByColumn[column];
+                if (role == null || role == Columns.Role.NOTE) {
+                    continue;
+                }
+                int row = Math.max(first, range.firstRow());
+                if (!range.hides(row, column)) {
+                    row++;
+                }
+                if (row <= last && range.hides(row, column)) {
+                    throw new SheetException(source.file(), source.where(sheet, row, column) + " is part of the"
+                            + " merged range " + range.text() + ", so it holds no " + columns.nameOf(role) + " of its"
+                            + " own; unmerge the cells and give every unit its own value on its own row");
+                }
+            }
+        }
     }
 
     private void unit(int row, List<Cell> cells) {
@@ -171,6 +280,10 @@ public final class SampleReader implements RowHandler {
             if (role == null) {
                 continue;
             }
+            if (cell.kind() == Cell.Kind.FORMULA_WITHOUT_VALUE && (role == Columns.Role.DEFECT
+                    || role == Columns.Role.NOTE)) {
+                continue;
+            }
             if (cell.kind() == Cell.Kind.FORMULA_WITHOUT_VALUE) {
                 throw bad(row, cell, "the formula " + cell.text() + " has no saved value; open the sheet in a"
                         + " spreadsheet program, let it calculate, and save it");
@@ -181,15 +294,12 @@ public final class SampleReader implements RowHandler {
             switch (role) {
                 case UNIT -> unit = cell.text().trim();
                 case RESULT -> {
-                    String text = cell.text().trim().toLowerCase(Locale.ROOT);
-                    if (text.equals("pass")) {
-                        failed = false;
-                    } else if (text.equals("fail")) {
-                        failed = true;
-                    } else {
-                        throw bad(row, cell, columns.nameOf(role) + " '" + cell.text().trim()
-                                + "' is neither pass nor fail");
+                    Boolean word = cell.kind() == Cell.Kind.TEXT ? words.failed(cell.text()) : null;
+                    if (word == null) {
+                        throw bad(row, cell, columns.nameOf(role) + " '" + cell.text().trim() + "' is not a result"
+                                + " word; the words are " + words.accepted() + " (add your own with --result-words)");
                     }
+                    failed = word;
                     hasResult = true;
                 }
                 case CRITICAL -> critical = count(row, cell, role);
@@ -267,6 +377,10 @@ public final class SampleReader implements RowHandler {
     }
 
     private int count(int row, Cell cell, Columns.Role role) {
+        if (cell.kind() == Cell.Kind.DATE) {
+            throw bad(row, cell, columns.nameOf(role) + " count cell is formatted as a date (it holds " + cell.text()
+                    + "); a count is a plain whole number: format the cell as a number");
+        }
         double value = cell.number();
         if (cell.kind() == Cell.Kind.TEXT) {
             try {
@@ -275,7 +389,11 @@ public final class SampleReader implements RowHandler {
                 value = Double.NaN;
             }
         }
-        if (cell.kind() == Cell.Kind.BOOLEAN || !(value >= 0) || value != Math.rint(value) || value > 1_000_000) {
+        if (value > MAX_COUNT && value == Math.rint(value)) {
+            throw bad(row, cell, columns.nameOf(role) + " count '" + cell.text().trim() + "' is more than "
+                    + String.format(Locale.ROOT, "%,d", MAX_COUNT) + " nonconformities in one unit");
+        }
+        if (cell.kind() == Cell.Kind.BOOLEAN || !(value >= 0) || value != Math.rint(value)) {
             throw bad(row, cell, columns.nameOf(role) + " count '" + cell.text().trim()
                     + "' is not a whole number of 0 or more");
         }

@@ -14,6 +14,9 @@ import org.apache.poi.poifs.filesystem.FileMagic;
  */
 public interface SheetSource {
 
+    /** How many rows from the top a reader searches for its header row. */
+    int HEADER_SEARCH = 50;
+
     /** The file read. */
     Path file();
 
@@ -22,6 +25,17 @@ public interface SheetSource {
 
     /** Streams the rows of a sheet (null: the first) to the handler. */
     void read(String sheet, RowHandler handler);
+
+    /** Splits a CSV file's records at this character instead of deciding; other kinds ignore it. */
+    default void useDelimiter(char delimiter) {
+    }
+
+    /**
+     * Tells a source that must decide how to split its rows (CSV) what a header row looks like: a row whose
+     * cell texts pass the test. Other kinds ignore it.
+     */
+    default void findHeader(java.util.function.Predicate<List<String>> isHeader) {
+    }
 
     /** A position for messages: "sheet 'Sample' cell C17" ("row 17, column C" for CSV). */
     default String where(String sheet, int row, int column) {
@@ -44,6 +58,13 @@ public interface SheetSource {
         if (!Files.isRegularFile(file)) {
             throw new SheetException(file, Files.exists(file) ? "not a file" : "no such file");
         }
+        try {
+            if (Files.size(file) == 0) {
+                throw new SheetException(file, "the file is empty");
+            }
+        } catch (IOException e) {
+            throw new SheetException(file, "cannot be read (" + e.getMessage() + ")", e);
+        }
         if (name.endsWith(".csv")) {
             // Checked without POI: its file-type sniffing starts a logging framework, a tenth of a second.
             if (isWorkbook(file)) {
@@ -55,7 +76,7 @@ public interface SheetSource {
         FileMagic magic;
         try (InputStream in = FileMagic.prepareToCheckMagic(Files.newInputStream(file))) {
             magic = FileMagic.valueOf(in);
-        } catch (IOException e) {
+        } catch (IOException | RuntimeException e) {
             throw new SheetException(file, "cannot be read (" + e.getMessage() + ")", e);
         }
         if (name.endsWith(".xlsx") || name.endsWith(".xlsm")) {

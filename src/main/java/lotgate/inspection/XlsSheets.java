@@ -8,6 +8,8 @@ import org.apache.poi.EncryptedDocumentException;
 import org.apache.poi.hssf.usermodel.HSSFWorkbook;
 import org.apache.poi.poifs.filesystem.POIFSFileSystem;
 import org.apache.poi.ss.usermodel.CellType;
+import org.apache.poi.ss.usermodel.DateUtil;
+import org.apache.poi.ss.util.CellRangeAddress;
 import org.apache.poi.ss.usermodel.Row;
 import org.apache.poi.ss.usermodel.Sheet;
 
@@ -25,12 +27,21 @@ final class XlsSheets implements SheetSource {
         return file;
     }
 
+    /** An old-style workbook is read whole; 32 MB is many times a full sheet of 65,536 units. */
+    static final long MAX_BYTES = 32L << 20;
+
     private HSSFWorkbook open() {
         try {
+            if (java.nio.file.Files.size(file) > MAX_BYTES) {
+                throw new SheetException(file, "refused: an .xls workbook of more than " + (MAX_BYTES >> 20) + " MB,"
+                        + " far beyond a real inspection sheet; save it as .xlsx");
+            }
             return new HSSFWorkbook(new POIFSFileSystem(file.toFile(), true).getRoot(), true);
         } catch (EncryptedDocumentException e) {
             throw new SheetException(file, "the workbook is password-protected; save a copy without a password and"
                     + " sentence that", e);
+        } catch (SheetException e) {
+            throw e;
         } catch (IOException | RuntimeException e) {
             throw new SheetException(file, "corrupt .xls workbook (" + e.getMessage() + ")", e);
         }
@@ -68,6 +79,7 @@ final class XlsSheets implements SheetSource {
                 throw new SheetException(file, "no sheet named '" + sheetName + "'; the sheets are "
                         + SheetSource.quoted(sheetNames()));
             }
+            SheetException refusal = null;
             for (Row row : sheet) {
                 List<Cell> cells = new ArrayList<>();
                 for (org.apache.poi.ss.usermodel.Cell cell : row) {
@@ -77,8 +89,24 @@ final class XlsSheets implements SheetSource {
                     }
                 }
                 if (!cells.isEmpty()) {
-                    handler.row(row.getRowNum() + 1, cells);
+                    try {
+                        handler.row(row.getRowNum() + 1, cells);
+                    } catch (SheetException e) {
+                        refusal = e;
+                        break;
+                    } catch (RowHandler.Stop e) {
+                        break;
+                    }
                 }
+            }
+            List<MergedRange> merged = new ArrayList<>();
+            for (CellRangeAddress range : sheet.getMergedRegions()) {
+                merged.add(new MergedRange(range.getFirstRow() + 1, range.getLastRow() + 1, range.getFirstColumn(),
+                        range.getLastColumn()));
+            }
+            handler.merged(List.copyOf(merged));
+            if (refusal != null) {
+                throw refusal;
             }
         } catch (IOException e) {
             throw new SheetException(file, "cannot be read (" + e.getMessage() + ")", e);
@@ -89,7 +117,8 @@ final class XlsSheets implements SheetSource {
         int column = cell.getColumnIndex();
         CellType type = cell.getCellType() == CellType.FORMULA ? cell.getCachedFormulaResultType() : cell.getCellType();
         return switch (type) {
-            case NUMERIC -> Cell.number(column, cell.getNumericCellValue());
+            case NUMERIC -> DateUtil.isCellDateFormatted(cell) ? Cell.date(column, cell.getNumericCellValue())
+                    : Cell.number(column, cell.getNumericCellValue());
             case STRING -> Cell.text(column, cell.getStringCellValue());
             case BOOLEAN -> new Cell(column, Cell.Kind.BOOLEAN, cell.getBooleanCellValue() ? "TRUE" : "FALSE", Double.NaN);
             case ERROR -> new Cell(column, Cell.Kind.ERROR, "#ERROR", Double.NaN);

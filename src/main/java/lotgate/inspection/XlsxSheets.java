@@ -12,10 +12,11 @@ import org.apache.poi.openxml4j.exceptions.NotOfficeXmlFileException;
 import org.apache.poi.openxml4j.exceptions.OpenXML4JException;
 import org.apache.poi.openxml4j.opc.OPCPackage;
 import org.apache.poi.openxml4j.opc.PackageAccess;
+import org.apache.poi.openxml4j.opc.PackagePart;
 import org.apache.poi.poifs.filesystem.POIFSFileSystem;
 import org.apache.poi.util.XMLHelper;
-import org.apache.poi.xssf.eventusermodel.ReadOnlySharedStringsTable;
 import org.apache.poi.xssf.eventusermodel.XSSFReader;
+import org.apache.poi.xssf.usermodel.XSSFRelation;
 import org.xml.sax.Attributes;
 import org.xml.sax.InputSource;
 import org.xml.sax.SAXException;
@@ -25,7 +26,8 @@ import org.xml.sax.helpers.DefaultHandler;
 /**
  * Streams the rows of an .xlsx workbook with POI's event (SAX) API, so that memory does not grow
  * with the number of rows. Formulas give their cached values; macros and external links are never
- * run or fetched; POI's guards against zip bombs stay on.
+ * run or fetched; POI's guards against zip bombs stay on, and the shared strings, cell formats and cell
+ * texts are held within caps of their own (see {@link SharedText}, {@link DateStyles}).
  */
 final class XlsxSheets implements SheetSource {
     private final Path file;
@@ -111,7 +113,6 @@ final class XlsxSheets implements SheetSource {
     public void read(String sheet, RowHandler handler) {
         withPackage(pkg -> {
             XSSFReader reader = new XSSFReader(pkg);
-            ReadOnlySharedStringsTable strings = new ReadOnlySharedStringsTable(pkg, false);
             XSSFReader.SheetIterator sheets = (XSSFReader.SheetIterator) reader.getSheetsData();
             List<String> seen = new ArrayList<>();
             while (sheets.hasNext()) {
@@ -119,9 +120,11 @@ final class XlsxSheets implements SheetSource {
                     String name = sheets.getSheetName();
                     seen.add(name);
                     if (sheet == null || sheet.equals(name)) {
+                        SheetHandler rows = new SheetHandler(file, name, sharedText(pkg), dateStyles(pkg), handler);
                         XMLReader xml = XMLHelper.newXMLReader();
-                        xml.setContentHandler(new SheetHandler(strings, handler));
+                        xml.setContentHandler(rows);
                         xml.parse(new InputSource(in));
+                        rows.finish();
                         return null;
                     }
                 }
@@ -131,41 +134,98 @@ final class XlsxSheets implements SheetSource {
         });
     }
 
-    /** SAX handler for one worksheet part: rows, cells, values, inline strings and formulas. */
+    private SharedText sharedText(OPCPackage pkg) throws IOException, SAXException, ParserConfigurationException {
+        List<PackagePart> parts = pkg.getPartsByContentType(XSSFRelation.SHARED_STRINGS.getContentType());
+        if (parts.isEmpty()) {
+            return SharedText.empty();
+        }
+        try (InputStream in = parts.get(0).getInputStream()) {
+            return SharedText.read(file, in);
+        }
+    }
+
+    private DateStyles dateStyles(OPCPackage pkg) throws IOException, SAXException, ParserConfigurationException {
+        List<PackagePart> parts = pkg.getPartsByContentType(XSSFRelation.STYLES.getContentType());
+        if (parts.isEmpty()) {
+            return DateStyles.none();
+        }
+        try (InputStream in = parts.get(0).getInputStream()) {
+            return DateStyles.read(file, in);
+        }
+    }
+
+    /**
+     * SAX handler for one worksheet part: rows, cells, values, inline strings, formulas, date styles and merged
+     * cells. Rows past the last a spreadsheet has, columns past XFD and text longer than a cell holds are refused,
+     * so that memory stays bounded whatever the part holds. After the handler refuses a row or stops, the rest of
+     * the part is only scanned for its merged cells.
+     */
     private static final class SheetHandler extends DefaultHandler {
-        private final ReadOnlySharedStringsTable strings;
+        /** Merged ranges kept; a real sheet has a handful. */
+        private static final int MAX_MERGED = 100_000;
+        private final Path file;
+        private final String sheet;
+        private final SharedText strings;
+        private final DateStyles styles;
         private final RowHandler handler;
         private final StringBuilder value = new StringBuilder();
         private final StringBuilder formula = new StringBuilder();
+        private final List<MergedRange> merged = new ArrayList<>();
         private List<Cell> cells = new ArrayList<>();
         private int row;
         private int column;
         private String type;
+        private int style;
         private boolean inValue;
         private boolean inFormula;
         private boolean inInline;
         private boolean inInlineText;
         private boolean hasValue;
         private boolean hasFormula;
+        private boolean skipping;
+        private SheetException refusal;
 
-        SheetHandler(ReadOnlySharedStringsTable strings, RowHandler handler) {
+        SheetHandler(Path file, String sheet, SharedText strings, DateStyles styles, RowHandler handler) {
+            this.file = file;
+            this.sheet = sheet;
             this.strings = strings;
+            this.styles = styles;
             this.handler = handler;
         }
 
         @Override
         public void startElement(String uri, String localName, String qName, Attributes attributes) {
+            if (localName.equals("mergeCell")) {
+                MergedRange range = MergedRange.parse(attributes.getValue("ref"));
+                if (range != null && merged.size() < MAX_MERGED) {
+                    merged.add(range);
+                }
+                return;
+            }
+            if (skipping) {
+                return;
+            }
             switch (localName) {
                 case "row" -> {
                     String r = attributes.getValue("r");
-                    row = r == null ? row + 1 : Integer.parseInt(r);
+                    row = r == null ? row + 1 : parseRow(r);
+                    if (row < 1 || row > Cell.MAX_ROW) {
+                        throw new SheetException(file, "refused: sheet '" + sheet + "' has a row numbered " + r
+                                + ", beyond the " + Cell.MAX_ROW + " rows a sheet has");
+                    }
                     column = -1;
                     cells = new ArrayList<>();
                 }
                 case "c" -> {
                     String reference = attributes.getValue("r");
                     column = reference == null ? column + 1 : columnOf(reference);
+                    if (column < 0 || column > Cell.MAX_COLUMN || cells.size() > Cell.MAX_COLUMN) {
+                        throw new SheetException(file, "refused: sheet '" + sheet + "' row " + row + " has cells beyond column "
+                                + Cell.columnName(Cell.MAX_COLUMN) + ", the last a sheet has");
+                    }
                     type = attributes.getValue("t");
+                    String s = attributes.getValue("s");
+                    style = s == null ? 0 : parseRow(s);
                     value.setLength(0);
                     formula.setLength(0);
                     hasValue = false;
@@ -189,17 +249,35 @@ final class XlsxSheets implements SheetSource {
             }
         }
 
-        @Override
-        public void characters(char[] ch, int start, int length) {
-            if (inValue || inInlineText) {
-                value.append(ch, start, length);
-            } else if (inFormula) {
-                formula.append(ch, start, length);
+        private static int parseRow(String text) {
+            try {
+                return Integer.parseInt(text.trim());
+            } catch (NumberFormatException e) {
+                return -1;
             }
         }
 
         @Override
+        public void characters(char[] ch, int start, int length) {
+            if (skipping) {
+                return;
+            }
+            StringBuilder target = inValue || inInlineText ? value : inFormula ? formula : null;
+            if (target == null) {
+                return;
+            }
+            if (target.length() + length > Cell.MAX_TEXT) {
+                throw new SheetException(file, "refused: sheet '" + sheet + "' cell " + Cell.columnName(column) + row
+                        + " holds more than " + String.format(java.util.Locale.ROOT, "%,d", Cell.MAX_TEXT) + " characters, more than a spreadsheet cell holds");
+            }
+            target.append(ch, start, length);
+        }
+
+        @Override
         public void endElement(String uri, String localName, String qName) {
+            if (skipping) {
+                return;
+            }
             switch (localName) {
                 case "v" -> inValue = false;
                 case "f" -> inFormula = false;
@@ -213,7 +291,7 @@ final class XlsxSheets implements SheetSource {
                 }
                 case "row" -> {
                     if (!cells.isEmpty()) {
-                        handler.row(row, cells);
+                        deliver();
                     }
                 }
                 default -> {
@@ -221,9 +299,31 @@ final class XlsxSheets implements SheetSource {
             }
         }
 
+        private void deliver() {
+            try {
+                handler.row(row, cells);
+            } catch (SheetException e) {
+                refusal = e;
+                skipping = true;
+            } catch (RowHandler.Stop e) {
+                skipping = true;
+            }
+        }
+
+        /** Passes on the merged cells, then the handler's refusal of a row, if any. */
+        void finish() {
+            handler.merged(List.copyOf(merged));
+            if (refusal != null) {
+                throw refusal;
+            }
+        }
+
         private Cell cell() {
+            if (hasFormula && (!hasValue || value.length() == 0)) {
+                return new Cell(column, Cell.Kind.FORMULA_WITHOUT_VALUE, "=" + formula, Double.NaN);
+            }
             if (!hasValue) {
-                return hasFormula ? new Cell(column, Cell.Kind.FORMULA_WITHOUT_VALUE, "=" + formula, Double.NaN) : null;
+                return null;
             }
             String text = value.toString();
             if (type == null || type.equals("n")) {
@@ -231,13 +331,21 @@ final class XlsxSheets implements SheetSource {
                     return null;
                 }
                 try {
-                    return Cell.number(column, Double.parseDouble(text));
+                    double number = Double.parseDouble(text);
+                    return styles.isDate(style) ? Cell.date(column, number) : Cell.number(column, number);
                 } catch (NumberFormatException e) {
                     return Cell.text(column, text);
                 }
             }
             return switch (type) {
-                case "s" -> Cell.text(column, strings.getItemAt(Integer.parseInt(text.trim())).getString());
+                case "s" -> {
+                    String shared = strings.get(parseRow(text));
+                    if (shared == null) {
+                        throw new SheetException(file, "corrupt .xlsx workbook (cell " + Cell.columnName(column) + row
+                                + " refers to shared string " + text.trim() + ", which does not exist)");
+                    }
+                    yield Cell.text(column, shared);
+                }
                 case "b" -> new Cell(column, Cell.Kind.BOOLEAN, text.equals("1") ? "TRUE" : "FALSE", Double.NaN);
                 case "e" -> new Cell(column, Cell.Kind.ERROR, text, Double.NaN);
                 default -> Cell.text(column, text);
@@ -246,7 +354,7 @@ final class XlsxSheets implements SheetSource {
 
         private static int columnOf(String reference) {
             int column = 0;
-            for (int i = 0; i < reference.length(); i++) {
+            for (int i = 0; i < reference.length() && i < 4; i++) {
                 char ch = reference.charAt(i);
                 if (ch < 'A' || ch > 'Z') {
                     break;

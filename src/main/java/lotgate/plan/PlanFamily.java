@@ -36,7 +36,7 @@ public record PlanFamily(Path file, Map<String, SavedPlan> variants, Map<String,
             if (!Files.isRegularFile(file) || Files.size(file) > (1 << 20)) {
                 return false;
             }
-            return FORMAT.equals(JSON.readTree(Files.readString(file)).path("format").asText());
+            return FORMAT.equals(JSON.readTree(PlanFormat.withoutByteOrderMark(Files.readString(file))).path("format").asText());
         } catch (IOException e) {
             return false;
         }
@@ -70,7 +70,7 @@ public record PlanFamily(Path file, Map<String, SavedPlan> variants, Map<String,
     public static PlanFamily read(Path file) {
         JsonNode root;
         try {
-            root = JSON.readTree(Files.readString(file));
+            root = JSON.readTree(PlanFormat.withoutByteOrderMark(Files.readString(file)));
         } catch (NoSuchFileException e) {
             throw new InputFileException(file, "no such plan family file");
         } catch (IOException e) {

@@ -241,7 +241,7 @@ public final class PlanFormat {
             if (Files.size(file) > LARGEST_FILE) {
                 throw new InputFileException(file, "too large to be a plan file (over 1 MiB)");
             }
-            root = JSON.readTree(Files.readString(file, StandardCharsets.UTF_8));
+            root = JSON.readTree(withoutByteOrderMark(Files.readString(file, StandardCharsets.UTF_8)));
         } catch (NoSuchFileException e) {
             throw new InputFileException(file, "no such plan file");
         } catch (JsonProcessingException e) {
@@ -613,5 +613,10 @@ public final class PlanFormat {
             }
             return value.asInt();
         }
+    }
+
+    /** Text saved by some editors starts with a byte-order mark, which JSON does not allow; it is dropped. */
+    static String withoutByteOrderMark(String text) {
+        return text.startsWith("\uFEFF") ? text.substring(1) : text;
     }
 }

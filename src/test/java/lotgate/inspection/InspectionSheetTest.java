@@ -16,7 +16,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.zip.ZipEntry;
 import java.util.zip.ZipFile;
-import java.util.zip.ZipOutputStream;
 import lotgate.demo.DemoData;
 import lotgate.plan.DefectClass;
 import org.apache.poi.poifs.crypt.EncryptionInfo;
@@ -133,8 +132,9 @@ class InspectionSheetTest {
     void anUnknownResultIsRefusedByItsCell() throws IOException {
         List<List<Object>> rows = passFail(3);
         rows.set(2, row("U2", "maybe", null));
-        assertTrue(refused(xlsx("h.xlsx", rows)).endsWith("sheet 'Sample' cell B3: result 'maybe' is neither pass nor"
-                + " fail"));
+        assertTrue(refused(xlsx("h.xlsx", rows)).endsWith("sheet 'Sample' cell B3: result 'maybe' is not a result word;"
+                + " the words are pass, p, ok, good (pass) or fail, f, nc, ng, bad (fail) (add your own with"
+                + " --result-words)"), refused(xlsx("h2.xlsx", rows)));
     }
 
     @Test
@@ -148,9 +148,10 @@ class InspectionSheetTest {
     @Test
     void missingColumnsListTheHeadersFound() throws IOException {
         Path file = xlsx("j.xlsx", List.of(row("Serial", "Outcome", "Remarks"), row("A", "pass", null)));
-        assertTrue(refused(file).endsWith("no 'result' column and no defect class count columns (critical, major,"
-                + " minor) in the header, sheet 'Sample' row 1; the headers found are Serial, Outcome, Remarks (name"
-                + " your own with --columns, e.g. result=Outcome)"), refused(file));
+        assertTrue(refused(file).endsWith("j.xlsx: no header row: none of rows 1 to 2 of sheet 'Sample' has a 'result'"
+                + " column or defect class count columns (critical, major, minor); the rows looked at are row 1:"
+                + " Serial, Outcome, Remarks; row 2: A, pass (name your own headers with --columns, e.g."
+                + " result=Outcome, or give the header row with --header-row)"), refused(file));
         InspectionSample mapped = new SampleReader(SheetSource.open(file), null,
                 Columns.mapped("unit=Serial,result=Outcome"), new int[] {1}, 0, 0).read();
         assertEquals(1, mapped.units());
@@ -235,26 +236,7 @@ class InspectionSheetTest {
 
     /** Rewrites one entry of an .xlsx package (or adds it), keeping the others. */
     private Path withEntry(Path xlsx, String entry, byte[] content, String name) throws IOException {
-        Path out = folder.resolve(name);
-        try (ZipFile zip = new ZipFile(xlsx.toFile());
-                ZipOutputStream target = new ZipOutputStream(Files.newOutputStream(out))) {
-            for (var e = zip.entries(); e.hasMoreElements();) {
-                ZipEntry item = e.nextElement();
-                target.putNextEntry(new ZipEntry(item.getName()));
-                if (item.getName().equals(entry)) {
-                    target.write(content);
-                } else {
-                    zip.getInputStream(item).transferTo(target);
-                }
-                target.closeEntry();
-            }
-            if (zip.getEntry(entry) == null) {
-                target.putNextEntry(new ZipEntry(entry));
-                target.write(content);
-                target.closeEntry();
-            }
-        }
-        return out;
+        return Packages.withEntry(xlsx, entry, content, folder.resolve(name));
     }
 
     private static byte[] sheetXml(String rows) {
