@@ -114,6 +114,10 @@ public final class MeasurementReader implements RowHandler {
                 Arrays.copyOf(rows, count), Map.copyOf(units), List.copyOf(headers));
     }
 
+    private String where() {
+        return source instanceof CsvSheets ? "the file" : "sheet '" + sheet + "'";
+    }
+
     private boolean isHeader(List<String> texts) {
         return texts.stream().anyMatch(t -> columns.roleOf(t) == Columns.Role.VALUE);
     }
@@ -125,7 +129,7 @@ public final class MeasurementReader implements RowHandler {
         }
         List<String> shown = looked.subList(0, Math.min(6, looked.size()));
         return new SheetException(source.file(), "no header row: none of rows 1 to "
-                + Math.min(lastRowSeen, SheetSource.HEADER_SEARCH) + " of sheet '" + sheet + "' has a '"
+                + Math.min(lastRowSeen, SheetSource.HEADER_SEARCH) + " of " + where() + " has a '"
                 + columns.nameOf(Columns.Role.VALUE) + "' column; the rows looked at are " + String.join("; ", shown)
                 + (looked.size() > shown.size() ? "; and " + (looked.size() - shown.size()) + " more" : "")
                 + " (name your own headers with --columns, e.g. value=Diameter, or give the header row with --header-row)");

@@ -219,7 +219,9 @@ class VariablesCommandsTest {
         Files.writeString(none, "unit,result\nB-1,pass\n");
         Cli.Result noValue = Cli.run("sentence", "--no-record", file.toString(), none.toString(), "--lot", "F3");
         assertEquals(ExitCode.BAD_INPUT, noValue.exitCode());
-        assertTrue(noValue.err().contains("no 'value' column in the header"), noValue.err());
+        assertEquals("lotgate: " + none + ": no header row: none of rows 1 to 2 of the file has a 'value' column; the"
+                + " rows looked at are row 1: unit, result; row 2: B-1, pass (name your own headers with --columns,"
+                + " e.g. value=Diameter, or give the header row with --header-row)", noValue.err().strip());
     }
 
     @Test
