@@ -416,6 +416,46 @@ public final class Charts {
         return finish(new JFreeChart(title, ChartStyle.TITLE, plot, true));
     }
 
+    /**
+     * An interval chart: one row per name (the first at the top), its estimate as a dot and its confidence interval
+     * as a bar, on a percent axis.
+     */
+    public static JFreeChart intervals(String title, List<String> names, double[] estimate, double[] lower,
+            double[] upper, String valueLabel, String estimateLabel) {
+        org.jfree.data.xy.XYIntervalSeries series = new org.jfree.data.xy.XYIntervalSeries(estimateLabel);
+        for (int i = 0; i < names.size(); i++) {
+            series.add(estimate[i], lower[i], upper[i], i, i, i);
+        }
+        org.jfree.data.xy.XYIntervalSeriesCollection data = new org.jfree.data.xy.XYIntervalSeriesCollection();
+        data.addSeries(series);
+        org.jfree.chart.renderer.xy.XYErrorRenderer renderer = new org.jfree.chart.renderer.xy.XYErrorRenderer();
+        renderer.setDrawYError(false);
+        renderer.setDrawXError(true);
+        renderer.setErrorPaint(ChartStyle.DATA);
+        renderer.setErrorStroke(new BasicStroke(3f));
+        renderer.setCapLength(10);
+        renderer.setDefaultLinesVisible(false);
+        renderer.setSeriesShape(0, ChartStyle.observed());
+        renderer.setSeriesPaint(0, ChartStyle.INK);
+        NumberAxis value = percentAxis(valueLabel);
+        double widest = 0;
+        for (double bound : upper) {
+            widest = Math.max(widest, bound);
+        }
+        value.setRange(0, widest > 0 ? widest * 1.1 : 1);
+        org.jfree.chart.axis.SymbolAxis rows = new org.jfree.chart.axis.SymbolAxis(null,
+                names.stream().map(n -> n.length() > 36 ? n.substring(0, 35) + "~" : n).toArray(String[]::new));
+        rows.setInverted(true);
+        rows.setGridBandsVisible(false);
+        rows.setRange(-0.6, names.size() - 0.4);
+        XYPlot plot = new XYPlot(data, value, rows, renderer);
+        LegendItemCollection legend = new LegendItemCollection();
+        legend.add(legendMark(estimateLabel, ChartStyle.INK, ChartStyle.observed(), true));
+        legend.add(legendLine("Confidence interval", ChartStyle.DATA, new BasicStroke(3f), null, false));
+        plot.setFixedLegendItems(legend);
+        return finish(new JFreeChart(title, ChartStyle.TITLE, style(plot), true));
+    }
+
     /** Adds a line under the title, such as the model and lot size. */
     public static JFreeChart withSubtitle(JFreeChart chart, String subtitle) {
         TextTitle line = new TextTitle(subtitle, ChartStyle.SUBTITLE, ChartStyle.INK,

@@ -32,8 +32,13 @@ public final class LotReport {
         }
     }
 
-    /** The OC curve of each class's plan with the point the observed count puts the lot at. */
-    static JFreeChart ocChart(LotDecision decision) {
+    /** What the lot's OC chart shows, for the picture and for the workbook's native chart alike. */
+    record OcView(String title, boolean perUnit, List<ChartCurve> curves, List<Charts.RiskMark> design,
+            List<Charts.RiskMark> observed, String observedLabel) {
+    }
+
+    /** The OC curve of each class's plan, the design points with their risks, and where the lot's count puts it. */
+    static OcView ocView(LotDecision decision) {
         OcModel model = decision.plan().model() instanceof OcModel.Hypergeometric && decision.lot().lotSize() > 0
                 ? new OcModel.Hypergeometric(decision.lot().lotSize()) : decision.plan().model();
         int lotSize = model.lotSize();
@@ -69,9 +74,103 @@ public final class LotReport {
                     evidence.acceptanceAtObserved()));
         }
         String title = measured ? "OC curve and the lot's estimated quality" : "OC curve and the lot's observed quality";
-        JFreeChart chart = Charts.oc(title, !model.countsUnits(), curves, design, "Design points and their risks",
-                marks, measured ? "This lot's estimated fraction beyond the limits" : "Observed in this lot's sample");
+        return new OcView(title, !model.countsUnits(), curves, design, marks,
+                measured ? "This lot's estimated fraction beyond the limits" : "Observed in this lot's sample");
+    }
+
+    static JFreeChart ocChart(LotDecision decision) {
+        OcView view = ocView(decision);
+        JFreeChart chart = Charts.oc(view.title(), view.perUnit(), view.curves(), view.design(),
+                "Design points and their risks", view.observed(), view.observedLabel());
         return Charts.withSubtitle(chart, "lot " + decision.lot().lot() + ", plan " + decision.plan().name());
+    }
+
+    /** A row of a variables lot's criteria: what is judged, its value, what it is held against, how it fares. */
+    record Criterion(String what, String value, String against, String outcome) {
+    }
+
+    /** The variables criterion in the method's own words: mean, s, the quality statistics or M-method estimate. */
+    static List<Criterion> criteria(LotDecision decision) {
+        lotgate.sentencing.MeasuredLot measured = decision.measured();
+        lotgate.plan.Measurement spec = decision.plan().measurement();
+        String unit = spec.unit().isEmpty() ? "" : " " + spec.unit();
+        String deviation = measured.sigmaKnown() ? "sigma" : "s";
+        List<Criterion> rows = new ArrayList<>();
+        rows.add(new Criterion("Sample mean (n = " + measured.n() + ")", SentenceText.number(measured.mean()) + unit,
+                "", ""));
+        rows.add(new Criterion(measured.sigmaKnown() ? "Known process sigma" : "Sample standard deviation s",
+                SentenceText.number(measured.deviation()) + unit, "", ""));
+        boolean combined = spec.limits().equals(lotgate.plan.Measurement.COMBINED);
+        double lowerK = spec.lowerK(measured.k());
+        if (!Double.isNaN(measured.statisticLower())) {
+            rows.add(new Criterion("(mean - L) / " + deviation + ", L = " + SentenceText.number(spec.lower()) + unit,
+                    SentenceText.number(measured.statisticLower()), combined ? "" : "at least k = "
+                            + SentenceText.number(lowerK), combined ? "" : measured.statisticLower() >= lowerK
+                                    ? "meets" : "falls short"));
+        }
+        if (!Double.isNaN(measured.statisticUpper())) {
+            rows.add(new Criterion("(U - mean) / " + deviation + ", U = " + SentenceText.number(spec.upper()) + unit,
+                    SentenceText.number(measured.statisticUpper()), combined ? "" : "at least k = "
+                            + SentenceText.number(measured.k()), combined ? "" : measured.statisticUpper()
+                                    >= measured.k() ? "meets" : "falls short"));
+        }
+        rows.add(new Criterion("Estimated fraction beyond the limit" + (spec.twoLimits() ? "s" : "")
+                + (combined ? " (M-method)" : ""), SentenceText.percent(measured.estimate()), combined
+                        ? "at most M = " + SentenceText.percent(measured.maxEstimate()) : "",
+                combined ? (measured.accepted() ? "within" : "above") : ""));
+        rows.add(new Criterion("Upper " + SentenceText.percent(decision.confidence()) + " bound on that fraction",
+                SentenceText.percent(measured.upperBound()), "", ""));
+        if (measured.normality() != null) {
+            rows.add(new Criterion("Normality (Anderson-Darling)", String.format(Locale.ROOT, "p = %.3g",
+                    measured.normality().pValue()), "p at least " + SentenceText.number(
+                            lotgate.sentencing.MeasuredLot.NORMALITY_LEVEL), normalityFailed(decision)
+                                    ? "FAILS" : "no evidence against"));
+        }
+        return rows;
+    }
+
+    /** Whether a variables lot's measurements fail the normality check its verdict rests on. */
+    static boolean normalityFailed(LotDecision decision) {
+        return decision.measured() != null && decision.measured().normality() != null
+                && decision.measured().normality().pValue() < lotgate.sentencing.MeasuredLot.NORMALITY_LEVEL;
+    }
+
+    /** The warning a failed normality check puts in the verdict box. */
+    static String normalityWarning(LotDecision decision) {
+        return "Measurements not normal (Anderson-Darling p = " + String.format(Locale.ROOT, "%.3g",
+                decision.measured().normality().pValue()) + "): the k-method's risks assume normal measurements, so"
+                + " this verdict is not to be relied on alone. Inspect the sample by attributes or investigate the"
+                + " process before releasing the lot.";
+    }
+
+    /**
+     * The classes whose sample leaves out the unit at this position of the sample (1-based): a class judged on
+     * fewer units than the sheet holds (a plan that stopped early, or a smaller sample for that class).
+     */
+    static List<String> classesWithout(LotDecision decision, int position) {
+        List<String> without = new ArrayList<>();
+        for (ClassVerdict verdict : decision.sentence().classes()) {
+            if (position > verdict.inspected()) {
+                without.add(verdict.defectClass().label());
+            }
+        }
+        return without;
+    }
+
+    /** Each class's sample in words, for a report where classes were judged on different numbers of units. */
+    static String sampleSizes(LotDecision decision) {
+        List<String> parts = new ArrayList<>();
+        for (ClassVerdict verdict : decision.sentence().classes()) {
+            parts.add(verdict.defectClass().label() + " on the first " + verdict.inspected());
+        }
+        return "Each class was judged on its own sample (" + String.join(", ", parts) + " of the "
+                + decision.sample().units() + " units on the sheet); a unit past a class's sample does not count for"
+                + " that class.";
+    }
+
+    /** Whether some class was judged on fewer units than the sheet holds. */
+    static boolean subSamples(LotDecision decision) {
+        return decision.sentence().classes().stream().anyMatch(v -> v.inspected() < decision.sample().units());
     }
 
     /** Text that a spreadsheet or page would otherwise read as a formula is shown with a leading quote. */

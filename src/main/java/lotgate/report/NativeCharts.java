@@ -106,10 +106,9 @@ final class NativeCharts {
         series.setSmooth(false);
         series.setLineProperties(look.line() ? WorkbookLayout.line(look.colour(), look.width(), look.dash())
                 : WorkbookLayout.noLine());
-        // The marker's size keeps the program's default: the schema part that sizes it is not in POI's lean build.
         series.setMarkerStyle(look.marker());
         if (look.marker() != MarkerStyle.NONE) {
-            markerColour(series.getCTLineSer().getMarker(), look.colour());
+            markerColour(series.getCTLineSer().getMarker(), look.colour(), look.markerSize());
         }
     }
 
@@ -126,10 +125,9 @@ final class NativeCharts {
         series.setSmooth(false);
         series.setLineProperties(look.line() ? WorkbookLayout.line(look.colour(), look.width(), look.dash())
                 : WorkbookLayout.noLine());
-        // The marker's size keeps the program's default: the schema part that sizes it is not in POI's lean build.
         series.setMarkerStyle(look.marker());
         if (look.marker() != MarkerStyle.NONE) {
-            markerColour(series.getCTScatterSer().getMarker(), look.colour());
+            markerColour(series.getCTScatterSer().getMarker(), look.colour(), look.markerSize());
         }
     }
 
@@ -173,7 +171,16 @@ final class NativeCharts {
         axis.setMaximum(maximum);
     }
 
-    private static void markerColour(CTMarker marker, Color colour) {
+    private static void markerColour(CTMarker marker, Color colour, int size) {
+        // POI's lean schema build cannot write a marker's size through its typed API: write the element as it is.
+        if (!marker.isSetSpPr()) {
+            try (org.apache.xmlbeans.XmlCursor cursor = marker.newCursor()) {
+                cursor.toEndToken();
+                cursor.beginElement(new javax.xml.namespace.QName(
+                        "http://schemas.openxmlformats.org/drawingml/2006/chart", "size", "c"));
+                cursor.insertAttributeWithValue("val", Integer.toString(Math.max(2, Math.min(72, size))));
+            }
+        }
         var properties = marker.isSetSpPr() ? marker.getSpPr() : marker.addNewSpPr();
         XDDFShapeProperties shape = new XDDFShapeProperties(properties);
         shape.setFillProperties(WorkbookLayout.fill(colour));
