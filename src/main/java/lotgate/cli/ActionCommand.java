@@ -15,8 +15,7 @@ import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /** Records a supplier's corrective action, which lets a discontinued part be inspected again (on tightened). */
-@Command(name = "corrective-action", mixinStandardHelpOptions = true, sortOptions = false, usageHelpAutoWidth = true,
-        header = "Record a supplier's corrective action for a part.",
+@Command(name = "corrective-action", header = "Record a supplier's corrective action for a part.",
         description = {"Records the supplier's corrective action in the history. Where the switching rules had"
                 + " discontinued inspection of the part, lots are sentenced again, on tightened inspection.", ""})
 final class ActionCommand implements Runnable {

@@ -5,14 +5,11 @@ import lotgate.jobs.EvaluatePlan;
 import lotgate.report.results.CurveRendering;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 /** Tabulates and draws a plan's OC, AOQ and ATI curves with their key quality levels. */
-@Command(name = "curve", mixinStandardHelpOptions = true, sortOptions = false, usageHelpAutoWidth = true,
-        header = "Tabulate and draw a plan's OC, AOQ, ATI and ASN curves.",
+@Command(name = "curve", header = "Tabulate and draw a plan's OC, AOQ, ATI and ASN curves.",
         description = {
                 "Shows a plan's operating characteristics over a range of incoming quality levels: P(accept)"
                         + " (the OC curve), AOQ, and ATI when the lot size is known; the quality levels at"
@@ -23,6 +20,12 @@ import picocli.CommandLine.Spec;
                 "Give a saved plan file, or the plan as --sample-size and --acceptance with a model.",
                 ""})
 final class CurveCommand implements Runnable {
+    @Override
+    public void run() {
+        format.print(EvaluatePlan.run(new EvaluatePlan.Request(planFile, defectClass, sampleSize,
+                acceptance, models.named(), models.lotSize, aql, ltpd, upTo, steps,
+                new EvaluatePlan.ChartFiles(chart, ocChart, aoqChart, atiChart, asnChart), curtailed)), CurveRendering::text, CurveRendering::json, CurveRendering::csv);
+    }
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "PLAN", description = "A saved plan file (plans/*.json).")
     Path planFile;
@@ -84,16 +87,4 @@ final class CurveCommand implements Runnable {
 
     @Mixin
     OutputFormat format;
-
-    @Spec
-    CommandSpec spec;
-
-    @Override
-    public void run() {
-        EvaluatePlan.Result result = EvaluatePlan.run(new EvaluatePlan.Request(planFile, defectClass, sampleSize,
-                acceptance, models.named(), models.lotSize, aql, ltpd, upTo, steps,
-                new EvaluatePlan.ChartFiles(chart, ocChart, aoqChart, atiChart, asnChart), curtailed));
-        format.print(spec, () -> CurveRendering.text(result), () -> CurveRendering.json(result),
-                () -> CurveRendering.csv(result));
-    }
 }

@@ -14,8 +14,7 @@ import picocli.CommandLine.Spec;
  * Walks through an invented receiving-inspection scenario with lotgate's own commands, printing each
  * command line before its output so that a new user can repeat any step.
  */
-@Command(name = "demo", mixinStandardHelpOptions = true, usageHelpAutoWidth = true,
-        header = "Run an invented receiving-inspection scenario from start to finish.",
+@Command(name = "demo", header = "Run an invented receiving-inspection scenario from start to finish.",
         description = {"Designs, saves, charts and compares receiving-inspection plans for an invented scenario."
                 + " All companies, parts and numbers in it are invented.", ""})
 final class DemoCommand implements Runnable {

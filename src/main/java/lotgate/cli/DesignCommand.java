@@ -17,8 +17,7 @@ import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /** Designs a single-sampling plan from the two risks, or evaluates one given as n and c, and saves it. */
-@Command(name = "design", mixinStandardHelpOptions = true, sortOptions = false, usageHelpAutoWidth = true,
-        header = "Design a sampling plan from the producer's and consumer's risks.",
+@Command(name = "design", header = "Design a sampling plan from the producer's and consumer's risks.",
         description = {
                 "Finds the plan (n, c) with the smallest sample size n whose producer's risk P(reject | AQL) is at"
                         + " most alpha and whose consumer's risk P(accept | LTPD) is at most beta, computed exactly."
@@ -80,79 +79,11 @@ final class DesignCommand implements Runnable {
                     + " measurements against specification limits).")
     String scheme;
 
-    @Option(names = "--second-ratio", paramLabel = "K", defaultValue = "1",
-            description = "Double plans: the second sample is K times the first (default ${DEFAULT-VALUE}, equal"
-                    + " samples as in the double plans of ISO 2859-1), or 'free' to search every second sample"
-                    + " size.")
-    String secondRatio;
+    @Mixin
+    SchemeDesign.Options staged;
 
-    @Option(names = "--first-rejection", paramLabel = "R1", converter = Values.Count.class,
-            description = "Double plans: fix the first sample's rejection number r1 (default: c2 + 1, so that the"
-                    + " first sample rejects only what the second could not accept).")
-    Integer firstRejection;
-
-    @Option(names = "--asn-at", paramLabel = "LEVEL", converter = Values.Quality.class,
-            description = "Double plans: the quality level at which the average sample number is minimised"
-                    + " (default: the AQL, where most lots should be).")
-    Double asnAt;
-
-    @Option(names = "--stage", paramLabel = "N:C:R",
-            description = "A given stage of a double or multiple plan, repeatable in order: sample size, acceptance"
-                    + " number (- where the stage cannot accept) and rejection number, on the cumulative count,"
-                    + " e.g. --stage 50:1:4 --stage 100:3 (the last stage's R is C + 1 and may be left out).")
-    List<String> stageSpecs = new ArrayList<>();
-
-    @Option(names = "--truncate-at", paramLabel = "N", converter = Values.Count.class,
-            description = "Sequential plans: the most units inspected (default: 3 times the single plan's n for the"
-                    + " same risks).")
-    Integer truncateAt;
-
-    @Option(names = "--sigma", paramLabel = "VALUE",
-            description = "Variables plans: the known process standard deviation, in the measurement's unit (leave it"
-                    + " out when sigma is estimated from each sample).")
-    Double sigma;
-
-    @Option(names = "--lower", paramLabel = "LIMIT", description = "Variables plans: the lower specification limit.")
-    Double lower;
-
-    @Option(names = "--upper", paramLabel = "LIMIT", description = "Variables plans: the upper specification limit.")
-    Double upper;
-
-    @Option(names = "--limits", paramLabel = "HOW",
-            description = "Variables plans with both limits: combined (default; the M-method on the estimated"
-                    + " fraction beyond both, one AQL for both) or separate (the k-method at each limit, with the"
-                    + " same AQL, or the lower limit's own with --lower-aql and --lower-ltpd).")
-    String limits;
-
-    @Option(names = "--k", paramLabel = "K",
-            description = "Variables plans: with --sample-size, evaluate the plan (n, k) you already have.")
-    Double kValue;
-
-    @Option(names = "--lower-aql", paramLabel = "LEVEL", converter = Values.Quality.class,
-            description = "Variables plans with --limits separate: the lower limit's own AQL (default --aql, which"
-                    + " then holds for the upper limit).")
-    Double lowerAql;
-
-    @Option(names = "--lower-ltpd", paramLabel = "LEVEL", converter = Values.Quality.class,
-            description = "Variables plans with --limits separate: the lower limit's own LTPD (default --ltpd).")
-    Double lowerLtpd;
-
-    @Option(names = "--unit", paramLabel = "UNIT", description = "Variables plans: the measurement's unit, e.g. mm.")
-    String unit;
-
-    @Option(names = "--characteristic", paramLabel = "NAME",
-            description = "Variables plans: what is measured, e.g. 'bore diameter'.")
-    String characteristic;
-
-    @Option(names = "--plain-wald",
-            description = "Sequential plans: keep Wald's lines for the risks as asked, even where the truncated plan's"
-                    + " exact risks then exceed them (by default the lines are redrawn until both are met).")
-    boolean plainWald;
-
-    @Option(names = "--curtailed",
-            description = "Double plans: show the ASN with inspection of the second sample stopped as soon as the"
-                    + " rejection number is reached (the design still minimises the full ASN).")
-    boolean curtailed;
+    @Mixin
+    VariablesDesign.Options variables;
 
     @ArgGroup(exclusive = false)
     SaveOptions save;
@@ -188,8 +119,7 @@ final class DesignCommand implements Runnable {
             VariablesDesign.run(this, model, lotSize);
             return;
         }
-        if (sigma != null || lower != null || upper != null || limits != null || unit != null
-                || characteristic != null || lowerAql != null || lowerLtpd != null || kValue != null) {
+        if (variables.given()) {
             throw new ParameterException(spec.commandLine(), "--sigma, --lower, --upper, --limits, --unit,"
                     + " --characteristic, --lower-aql, --lower-ltpd and --k are for --scheme variables");
         }
@@ -197,8 +127,7 @@ final class DesignCommand implements Runnable {
             SchemeDesign.run(this, model, lotSize);
             return;
         }
-        if (!stageSpecs.isEmpty() || truncateAt != null || firstRejection != null || asnAt != null || curtailed
-                || plainWald || !secondRatio.equals("1")) {
+        if (staged.given()) {
             throw new ParameterException(spec.commandLine(), "--stage, --truncate-at, --first-rejection, --asn-at,"
                     + " --second-ratio, --curtailed and --plain-wald are for --scheme double, multiple or sequential");
         }
@@ -208,8 +137,7 @@ final class DesignCommand implements Runnable {
         if (result.noPlanReason() != null) {
             noPlan(result.noPlanReason(), model, lotSize);
         }
-        format.print(spec, () -> DesignRendering.text(result), () -> DesignRendering.json(result),
-                () -> DesignRendering.csv(result));
+        format.print(result, DesignRendering::text, DesignRendering::json, DesignRendering::csv);
     }
 
     /** Where to save the plan, or null. */
@@ -219,8 +147,8 @@ final class DesignCommand implements Runnable {
 
     /** Prints that no plan meets the request and fails with its exit code. */
     void noPlan(String reason, OcModel model, int lotSize) {
-        format.print(spec, () -> DesignRendering.noPlanText(reason),
-                () -> DesignRendering.noPlanJson(reason, model, lotSize), () -> DesignRendering.noPlanCsv(reason));
+        format.print(reason, DesignRendering::noPlanText, why -> DesignRendering.noPlanJson(why, model, lotSize),
+                DesignRendering::noPlanCsv);
         throw new Main.Failure(ExitCode.NO_PLAN, format.kind == OutputFormat.Kind.text ? null
                 : "no sampling plan meets the request: " + reason);
     }
@@ -240,50 +168,8 @@ final class DesignCommand implements Runnable {
         }
         List<DesignSinglePlan.Criteria> criteria = new ArrayList<>();
         for (String text : classSpecs) {
-            criteria.add(parseClass(text));
+            criteria.add(ClassSpec.parse(spec, text, alpha, beta));
         }
         return criteria;
-    }
-
-    private DesignSinglePlan.Criteria parseClass(String text) {
-        String where = "--class " + text;
-        int colon = text.indexOf(':');
-        DefectClass defectClass = DefectClass.of(colon < 0 ? text : text.substring(0, colon));
-        if (defectClass == null || defectClass == DefectClass.ANY) {
-            throw new ParameterException(spec.commandLine(), where + ": start with critical, major or minor and a"
-                    + " colon, as in major:aql=1%,ltpd=5%");
-        }
-        Double classAql = null;
-        Double classLtpd = null;
-        double classAlpha = alpha;
-        double classBeta = beta;
-        Integer c = null;
-        Integer n = null;
-        for (String pair : colon < 0 ? new String[0] : text.substring(colon + 1).split(",")) {
-            int equals = pair.indexOf('=');
-            if (equals < 0) {
-                throw new ParameterException(spec.commandLine(), where + ": '" + pair + "' is not key=value");
-            }
-            String key = pair.substring(0, equals).trim();
-            String value = pair.substring(equals + 1).trim();
-            try {
-                switch (key) {
-                    case "aql" -> classAql = Values.fraction(value);
-                    case "ltpd" -> classLtpd = Values.fraction(value);
-                    case "alpha" -> classAlpha = new Values.Risk().convert(value);
-                    case "beta" -> classBeta = new Values.Risk().convert(value);
-                    case "c" -> c = new Values.Acceptance().convert(value);
-                    case "n" -> n = new Values.Count().convert(value);
-                    default -> throw new ParameterException(spec.commandLine(), where + ": unknown key '" + key
-                            + "'; use aql, ltpd, alpha, beta, c or n");
-                }
-            } catch (picocli.CommandLine.TypeConversionException e) {
-                throw new ParameterException(spec.commandLine(), where + ": " + key + ": " + e.getMessage());
-            }
-        }
-        if (classAql == null || classLtpd == null) {
-            throw new ParameterException(spec.commandLine(), where + ": give both aql= and ltpd=");
-        }
-        return new DesignSinglePlan.Criteria(defectClass, text, classAql, classAlpha, classLtpd, classBeta, c, n);
     }
 }

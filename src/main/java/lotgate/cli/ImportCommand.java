@@ -31,8 +31,7 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** Imports past lots from a spreadsheet or CSV into the history, all or nothing. */
-@Command(name = "import", mixinStandardHelpOptions = true, sortOptions = false, usageHelpAutoWidth = true,
-        header = "Import past lots into the history store, all or nothing.",
+@Command(name = "import", header = "Import past lots into the history store, all or nothing.",
         description = {"Reads one past lot per row under a header row (columns, any order: lot, supplier, part,"
                 + " received, sample size, nonconforming, verdict; optional: lot size, acceptance number, inspector,"
                 + " defects as 'type:count; type:count', production steady or irregular) and records them in the"

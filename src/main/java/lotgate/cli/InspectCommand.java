@@ -27,8 +27,7 @@ import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /** At the inspection bench: takes one unit's result per line and says after each whether to stop. */
-@Command(name = "inspect", mixinStandardHelpOptions = true, sortOptions = false, usageHelpAutoWidth = true,
-        header = "At the inspection bench: enter each unit's result and learn after each whether to stop.",
+@Command(name = "inspect", header = "At the inspection bench: enter each unit's result and learn after each whether to stop.",
         description = {
                 "Reads one inspected unit per line from standard input, in the order inspected: pass or fail (p, f;"
                         + " ok, nc), or for a plan that counts nonconformities (Poisson model) the number found in"

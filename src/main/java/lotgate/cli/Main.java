@@ -12,26 +12,29 @@ import picocli.CommandLine.Option;
 
 /** The lotgate command: acceptance sampling plans for lots, from design to lot sentencing. */
 @Command(name = "lotgate",
+        scope = CommandLine.ScopeType.INHERIT,
         mixinStandardHelpOptions = true,
+        sortOptions = false,
         versionProvider = Version.Provider.class,
         usageHelpAutoWidth = true,
         description = {"Acceptance sampling of manufacturing lots: design exact sampling plans from the producer's"
                 + " and consumer's risks, study their OC, AOQ, ATI and ASN curves, and save them under plans/ so that"
-                + " every inspector applies the same plan.", ""},
-        footerHeading = "%nExit codes:%n",
-        footer = {
-                "   0  done (sentencing: lot accepted)",
-                "   1  lot rejected",
-                "   2  bad option or value",
-                "   3  input file missing, unreadable or invalid; history store missing",
-                "   4  incomplete sample",
-                "   5  no sampling plan meets the request",
-                "   6  an output file cannot be written",
-                "   7  the history store cannot be used (unreachable, altered, or newer)",
-                "   8  inspection is discontinued until a corrective action is recorded",
-                "   9  no decision yet: inspect more units (double, multiple and sequential plans)",
-                "  70  internal fault (rerun with --debug)"})
+                + " every inspector applies the same plan.", ""})
 public final class Main implements Runnable {
+    /** The exit codes, listed under the main command's help only (subcommands inherit its other attributes). */
+    private static final String[] EXIT_CODES = {
+            "   0  done (sentencing: lot accepted)",
+            "   1  lot rejected",
+            "   2  bad option or value",
+            "   3  input file missing, unreadable or invalid; history store missing",
+            "   4  incomplete sample",
+            "   5  no sampling plan meets the request",
+            "   6  an output file cannot be written",
+            "   7  the history store cannot be used (unreachable, altered, or newer)",
+            "   8  inspection is discontinued until a corrective action is recorded",
+            "   9  no decision yet: inspect more units (double, multiple and sequential plans)",
+            "  70  internal fault (rerun with --debug)"};
+
     /**
      * The commands by name, in the order the help lists them. Picocli builds a command's model by
      * reflection, which costs more than most commands' work, so a run builds only the command it
@@ -129,6 +132,7 @@ public final class Main implements Runnable {
         cli.setParameterExceptionHandler(Main::usageError);
         cli.setExecutionExceptionHandler(Main::failure);
         cli.setCaseInsensitiveEnumValuesAllowed(true);
+        cli.getCommandSpec().usageMessage().footerHeading("%nExit codes:%n").footer(EXIT_CODES);
         return cli;
     }
 

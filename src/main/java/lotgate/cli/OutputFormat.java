@@ -2,10 +2,11 @@ package lotgate.cli;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
-import java.util.function.Supplier;
+import java.util.function.Function;
 import lotgate.report.Json;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
 
 /** The --format option: text for people, json and csv for programs and spreadsheets. */
 final class OutputFormat {
@@ -15,13 +16,16 @@ final class OutputFormat {
             description = "Output format: text (the default), json or csv.")
     Kind kind;
 
-    /** Prints a result in the format asked for, each rendering made only when it is the one asked for. */
-    void print(CommandSpec spec, Supplier<String> text, Supplier<ObjectNode> json, Supplier<String> csv) {
-        PrintWriter out = spec.commandLine().getOut();
+    @Spec(Spec.Target.MIXEE)
+    CommandSpec command;
+
+    /** Prints a job's result in the format asked for; only that format's rendering is made. */
+    <R> void print(R result, Function<R, String> text, Function<R, ObjectNode> json, Function<R, String> csv) {
+        PrintWriter out = command.commandLine().getOut();
         switch (kind) {
-            case json -> out.println(Json.text(json.get()));
-            case csv -> out.print(csv.get());
-            case text -> out.print(text.get());
+            case json -> out.println(Json.text(json.apply(result)));
+            case csv -> out.print(csv.apply(result));
+            case text -> out.print(text.apply(result));
         }
         out.flush();
     }

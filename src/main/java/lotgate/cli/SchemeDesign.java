@@ -9,6 +9,7 @@ import lotgate.sampling.DoublePlanDesigner;
 import lotgate.sampling.MultiplePlan;
 import lotgate.sampling.OcModel;
 import lotgate.sampling.Stage;
+import picocli.CommandLine.Option;
 import picocli.CommandLine.ParameterException;
 
 /**
@@ -16,6 +17,52 @@ import picocli.CommandLine.ParameterException;
  * checked against the scheme, as a request to {@link DesignStagedPlan}.
  */
 final class SchemeDesign {
+    /** The options of plans in stages and sequential plans. */
+    static final class Options {
+        @Option(names = "--second-ratio", paramLabel = "K", defaultValue = "1",
+                description = "Double plans: the second sample is K times the first (default ${DEFAULT-VALUE}, equal"
+                        + " samples as in the double plans of ISO 2859-1), or 'free' to search every second sample"
+                        + " size.")
+        String secondRatio;
+
+        @Option(names = "--first-rejection", paramLabel = "R1", converter = Values.Count.class,
+                description = "Double plans: fix the first sample's rejection number r1 (default: c2 + 1, so that the"
+                        + " first sample rejects only what the second could not accept).")
+        Integer firstRejection;
+
+        @Option(names = "--asn-at", paramLabel = "LEVEL", converter = Values.Quality.class,
+                description = "Double plans: the quality level at which the average sample number is minimised"
+                        + " (default: the AQL, where most lots should be).")
+        Double asnAt;
+
+        @Option(names = "--stage", paramLabel = "N:C:R",
+                description = "A given stage of a double or multiple plan, repeatable in order: sample size, acceptance"
+                        + " number (- where the stage cannot accept) and rejection number, on the cumulative count,"
+                        + " e.g. --stage 50:1:4 --stage 100:3 (the last stage's R is C + 1 and may be left out).")
+        List<String> stageSpecs = new ArrayList<>();
+
+        @Option(names = "--truncate-at", paramLabel = "N", converter = Values.Count.class,
+                description = "Sequential plans: the most units inspected (default: 3 times the single plan's n for the"
+                        + " same risks).")
+        Integer truncateAt;
+
+        @Option(names = "--plain-wald",
+                description = "Sequential plans: keep Wald's lines for the risks as asked, even where the truncated plan's"
+                        + " exact risks then exceed them (by default the lines are redrawn until both are met).")
+        boolean plainWald;
+
+        @Option(names = "--curtailed",
+                description = "Double plans: show the ASN with inspection of the second sample stopped as soon as the"
+                        + " rejection number is reached (the design still minimises the full ASN).")
+        boolean curtailed;
+
+        /** Whether any of these options was given. */
+        boolean given() {
+            return !stageSpecs.isEmpty() || truncateAt != null || firstRejection != null || asnAt != null || curtailed
+                    || plainWald || !secondRatio.equals("1");
+        }
+    }
+
     private SchemeDesign() {
     }
 
@@ -31,13 +78,13 @@ final class SchemeDesign {
         DoublePlanDesigner.Space space = isDouble && stages.isEmpty() ? space(command) : null;
         DesignStagedPlan.Result result = DesignStagedPlan.run(new DesignStagedPlan.Request(
                 DesignStagedPlan.Scheme.valueOf(scheme.toUpperCase(Locale.ROOT)), model, lotSize, command.aql,
-                command.alpha, command.ltpd, command.beta, stages, space, command.asnAt, command.truncateAt,
-                command.plainWald, command.curtailed, command.saveTarget()));
+                command.alpha, command.ltpd, command.beta, stages, space, command.staged.asnAt, command.staged.truncateAt,
+                command.staged.plainWald, command.staged.curtailed, command.saveTarget()));
         if (result.noPlanReason() != null) {
             command.noPlan(result.noPlanReason(), model, lotSize);
         }
-        command.format.print(command.spec, () -> StagedDesignRendering.text(result),
-                () -> StagedDesignRendering.json(result), () -> StagedDesignRendering.csv(result));
+        command.format.print(result, StagedDesignRendering::text, StagedDesignRendering::json,
+                StagedDesignRendering::csv);
     }
 
     private static void checkOptions(DesignCommand command, String scheme) {
@@ -51,65 +98,65 @@ final class SchemeDesign {
         }
         boolean isDouble = scheme.equals("double");
         List<String> misplaced = new ArrayList<>();
-        if (!isDouble && (command.firstRejection != null)) {
+        if (!isDouble && (command.staged.firstRejection != null)) {
             misplaced.add("--first-rejection");
         }
-        if (!isDouble && command.asnAt != null) {
+        if (!isDouble && command.staged.asnAt != null) {
             misplaced.add("--asn-at");
         }
-        if (!isDouble && !command.secondRatio.equals("1")) {
+        if (!isDouble && !command.staged.secondRatio.equals("1")) {
             misplaced.add("--second-ratio");
         }
-        if (!isDouble && command.curtailed) {
+        if (!isDouble && command.staged.curtailed) {
             misplaced.add("--curtailed");
         }
-        if (!scheme.equals("sequential") && command.truncateAt != null) {
+        if (!scheme.equals("sequential") && command.staged.truncateAt != null) {
             misplaced.add("--truncate-at");
         }
-        if (!scheme.equals("sequential") && command.plainWald) {
+        if (!scheme.equals("sequential") && command.staged.plainWald) {
             misplaced.add("--plain-wald");
         }
-        if (scheme.equals("sequential") && !command.stageSpecs.isEmpty()) {
+        if (scheme.equals("sequential") && !command.staged.stageSpecs.isEmpty()) {
             misplaced.add("--stage");
         }
         if (!misplaced.isEmpty()) {
             throw usage(command, String.join(", ", misplaced) + (misplaced.size() == 1 ? " does" : " do") + " not apply to --scheme "
                     + scheme);
         }
-        if (scheme.equals("multiple") && command.stageSpecs.size() < 2) {
+        if (scheme.equals("multiple") && command.staged.stageSpecs.size() < 2) {
             throw usage(command, "--scheme multiple needs its stages: give 2 to " + MultiplePlan.MOST_STAGES + " --stage options,"
                     + " e.g. --stage 20:-:3 --stage 20:1:4 --stage 20:3:4");
         }
-        if (isDouble && !command.stageSpecs.isEmpty()
-                && (command.firstRejection != null || command.asnAt != null || !command.secondRatio.equals("1"))) {
+        if (isDouble && !command.staged.stageSpecs.isEmpty()
+                && (command.staged.firstRejection != null || command.staged.asnAt != null || !command.staged.secondRatio.equals("1"))) {
             throw usage(command, "--first-rejection, --asn-at and --second-ratio shape a design; with --stage the plan is given");
         }
     }
 
     private static DoublePlanDesigner.Space space(DesignCommand command) {
         Double ratio;
-        if (command.secondRatio.trim().equalsIgnoreCase("free")) {
+        if (command.staged.secondRatio.trim().equalsIgnoreCase("free")) {
             ratio = null;
         } else {
             try {
-                ratio = Double.parseDouble(command.secondRatio.trim());
+                ratio = Double.parseDouble(command.staged.secondRatio.trim());
             } catch (NumberFormatException e) {
-                throw usage(command, "--second-ratio " + command.secondRatio + ": give a number such as 1 or 2, or 'free'");
+                throw usage(command, "--second-ratio " + command.staged.secondRatio + ": give a number such as 1 or 2, or 'free'");
             }
             if (!(ratio >= 0.25 && ratio <= 10)) {
-                throw usage(command, "--second-ratio " + command.secondRatio + ": give a ratio from 0.25 to 10, or 'free'");
+                throw usage(command, "--second-ratio " + command.staged.secondRatio + ": give a ratio from 0.25 to 10, or 'free'");
             }
         }
-        return new DoublePlanDesigner.Space(ratio, command.firstRejection);
+        return new DoublePlanDesigner.Space(ratio, command.staged.firstRejection);
     }
 
     /** The --stage options as stages: N:C:R, with C "-" for none and R = C + 1 allowed to be left out last. */
     private static List<Stage> stages(DesignCommand command) {
         List<Stage> stages = new ArrayList<>();
-        for (int i = 0; i < command.stageSpecs.size(); i++) {
-            String text = command.stageSpecs.get(i);
+        for (int i = 0; i < command.staged.stageSpecs.size(); i++) {
+            String text = command.staged.stageSpecs.get(i);
             String[] parts = text.split(":");
-            boolean last = i == command.stageSpecs.size() - 1;
+            boolean last = i == command.staged.stageSpecs.size() - 1;
             if (parts.length != 3 && !(last && parts.length == 2)) {
                 throw usage(command, "--stage " + text + ": write N:C:R, such as 50:1:4 (the last stage may be N:C)");
             }

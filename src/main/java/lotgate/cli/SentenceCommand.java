@@ -18,8 +18,7 @@ import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /** Sentences a lot: reads its inspection sheet, applies a saved plan, and gives the verdict with its evidence. */
-@Command(name = "sentence", mixinStandardHelpOptions = true, sortOptions = false, usageHelpAutoWidth = true,
-        header = "Accept or reject a lot from its inspection sheet and a saved plan.",
+@Command(name = "sentence", header = "Accept or reject a lot from its inspection sheet and a saved plan.",
         description = {
                 "Reads the sample recorded in an inspection sheet (.xlsx, .xls or .csv), applies the saved plan,"
                         + " and gives the verdict per defect class and for the lot, with exact evidence: the"
@@ -156,8 +155,7 @@ final class SentenceCommand implements Runnable {
         SentenceLot.Result result = SentenceLot.run(new SentenceLot.Request(planFile, sheetFile, sheet, columns(),
                 range[0], range[1], givenDetails(), lotFile, confidence, !noRecord, supersedes, reason, production,
                 storeOption.location(), new SentenceLot.Outputs(record, chart, reports)));
-        format.print(spec, () -> SentenceRendering.text(result), () -> SentenceRendering.jsonNode(result),
-                () -> SentenceRendering.csv(result));
+        format.print(result, SentenceRendering::text, SentenceRendering::json, SentenceRendering::csv);
         if (result instanceof SentenceLot.Undecided) {
             throw new Main.Failure(ExitCode.NOT_DECIDED, null);
         }

@@ -14,8 +14,7 @@ import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /** Checks the whole history store and names the first record altered or removed; prints the head to keep. */
-@Command(name = "verify", mixinStandardHelpOptions = true, sortOptions = false, usageHelpAutoWidth = true,
-        header = "Check that no record of the history store was altered or removed.",
+@Command(name = "verify", header = "Check that no record of the history store was altered or removed.",
         description = {"Recomputes the hash of every record and its link to the one before, checks every column"
                 + " that queries, reports and rankings read and every defect count against each record's content,"
                 + " and names the first record that was altered or removed (exit code 7).",

@@ -16,7 +16,7 @@ import picocli.CommandLine.Spec;
  * Starts the local web workbench. The server classes load only here, so the other commands start as
  * fast as before.
  */
-@Command(name = "workbench", mixinStandardHelpOptions = true, sortOptions = false, usageHelpAutoWidth = true,
+@Command(name = "workbench",
         header = "Open the web workbench: design plans, sentence lots and read suppliers' records in a browser.",
         description = {"Serves the workbench on this machine (127.0.0.1) and opens it in the default browser;"
                 + " it runs until you press Ctrl+C. The pages call the same jobs as the commands, with the same"

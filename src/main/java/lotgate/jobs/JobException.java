@@ -11,6 +11,8 @@ public final class JobException extends RuntimeException {
         INVALID_REQUEST,
         /** The request clashes with what is already recorded (a lot recorded twice, a record to correct). */
         CONFLICT,
+        /** The request names something the store does not hold (a supplier without lots). */
+        NOT_FOUND,
         /** An input file's content does not fit the request (a plan family without the plan asked for). */
         BAD_INPUT,
         /** The sample on the sheet holds fewer or more units than the plan inspects. */

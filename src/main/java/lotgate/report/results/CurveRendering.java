@@ -3,7 +3,6 @@ package lotgate.report.results;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.util.ArrayList;
 import java.util.List;
 import lotgate.jobs.EvaluatePlan;
@@ -27,11 +26,7 @@ public final class CurveRendering {
 
     /** The curve table and key levels as text. */
     public static String text(EvaluatePlan.Result result) {
-        StringWriter text = new StringWriter();
-        PrintWriter out = new PrintWriter(text);
-        printText(out, result);
-        out.flush();
-        return text.toString();
+        return Text.of(out -> printText(out, result));
     }
 
     private static String quality(PlanChoice choice, double level) {

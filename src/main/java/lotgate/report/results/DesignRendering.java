@@ -2,7 +2,6 @@ package lotgate.report.results;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.util.ArrayList;
 import java.util.List;
 import lotgate.jobs.DesignSinglePlan;
@@ -65,47 +64,45 @@ public final class DesignRendering {
 
     /** A single-plan design as text. */
     public static String text(DesignSinglePlan.Result result) {
-        StringWriter text = new StringWriter();
-        PrintWriter out = new PrintWriter(text);
-        OcModel model = result.model();
-        int lotSize = result.lotSize();
-        boolean classed = result.classed();
-        if (classed) {
-            out.println("Single sampling plan with criteria per defect class");
-            out.println("  " + PlanWording.model(model, lotSize));
-            out.println();
-            out.println("  Inspect n = " + result.sampleSize() + " units; a class with a smaller sample is judged on"
-                    + " the first units inspected.");
-        }
-        boolean zeroAcceptance = false;
-        for (DesignSinglePlan.ClassOutcome outcome : result.classes()) {
-            SinglePlan plan = outcome.found().plan();
-            zeroAcceptance |= plan.c() == 0;
-            out.println();
+        return Text.of(out -> {
+            OcModel model = result.model();
+            int lotSize = result.lotSize();
+            boolean classed = result.classed();
             if (classed) {
-                out.println("  " + outcome.defectClass().label() + " (" + describe(outcome.method(), plan) + ")");
-            } else {
-                out.println("Single sampling plan" + switch (outcome.method()) {
-                    case SavedPlan.GIVEN -> ", as given";
-                    case SavedPlan.FIXED_ACCEPTANCE -> " with acceptance number " + plan.c()
-                            + ": the smallest sample that meets the LTPD point";
-                    default -> ": the smallest sample that meets both risks";
-                });
+                out.println("Single sampling plan with criteria per defect class");
                 out.println("  " + PlanWording.model(model, lotSize));
                 out.println();
+                out.println("  Inspect n = " + result.sampleSize() + " units; a class with a smaller sample is judged on"
+                        + " the first units inspected.");
             }
-            printClass(out, outcome, model, lotSize, classed ? "    " : "  ");
-        }
-        if (zeroAcceptance) {
-            out.println();
-            out.println(Cautions.ZERO_ACCEPTANCE.indent(2).stripTrailing());
-        }
-        if (result.saved() != null) {
-            out.println();
-            out.println("  Saved " + result.save().file() + " (fingerprint " + result.saved().shortFingerprint() + ")");
-        }
-        out.flush();
-        return text.toString();
+            boolean zeroAcceptance = false;
+            for (DesignSinglePlan.ClassOutcome outcome : result.classes()) {
+                SinglePlan plan = outcome.found().plan();
+                zeroAcceptance |= plan.c() == 0;
+                out.println();
+                if (classed) {
+                    out.println("  " + outcome.defectClass().label() + " (" + describe(outcome.method(), plan) + ")");
+                } else {
+                    out.println("Single sampling plan" + switch (outcome.method()) {
+                        case SavedPlan.GIVEN -> ", as given";
+                        case SavedPlan.FIXED_ACCEPTANCE -> " with acceptance number " + plan.c()
+                                + ": the smallest sample that meets the LTPD point";
+                        default -> ": the smallest sample that meets both risks";
+                    });
+                    out.println("  " + PlanWording.model(model, lotSize));
+                    out.println();
+                }
+                printClass(out, outcome, model, lotSize, classed ? "    " : "  ");
+            }
+            if (zeroAcceptance) {
+                out.println();
+                out.println(Cautions.ZERO_ACCEPTANCE.indent(2).stripTrailing());
+            }
+            if (result.saved() != null) {
+                out.println();
+                out.println("  Saved " + result.save().file() + " (fingerprint " + result.saved().shortFingerprint() + ")");
+            }
+        });
     }
 
     private static String describe(String method, SinglePlan plan) {

@@ -2,7 +2,6 @@ package lotgate.report.results;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -36,18 +35,16 @@ public final class SentenceRendering {
             return pending(undecided, "text");
         }
         SentenceLot.Decided decided = (SentenceLot.Decided) result;
-        StringWriter text = new StringWriter();
-        PrintWriter out = new PrintWriter(text);
-        printText(out, decided.decision(), decided.outputs());
-        if (decided.recording() != null) {
-            printHistory(out, decided.recording());
-        }
-        out.flush();
-        return text.toString();
+        return Text.of(out -> {
+            printText(out, decided.decision(), decided.outputs());
+            if (decided.recording() != null) {
+                printHistory(out, decided.recording());
+            }
+        });
     }
 
     /** The result as JSON: the decision record with its history, or the instruction to inspect more. */
-    public static ObjectNode jsonNode(SentenceLot.Result result) {
+    public static ObjectNode json(SentenceLot.Result result) {
         if (result instanceof SentenceLot.Undecided undecided) {
             return pendingJson(undecided);
         }
@@ -151,34 +148,32 @@ public final class SentenceRendering {
     }
 
     private static String pending(SentenceLot.Undecided undecided, String format) {
-        StringWriter text = new StringWriter();
-        PrintWriter out = new PrintWriter(text);
-        SavedPlan plan = undecided.plan();
-        InspectionSample sample = undecided.sample();
-        Pending pending = undecided.pending();
-        LotDetails lot = undecided.lot();
-        Stopping.Point point = pending.point();
-        String counted = PlanWording.counted(plan.model(), (int) Math.min(Integer.MAX_VALUE, point.found()));
-        String what = instruction(undecided);
-        switch (format) {
-            case "csv" -> out.print(CsvTable.table(List.of("lot", "verdict", "inspected", "found", "step", "moreUnits",
-                    "nextTotal", "planFingerprint"), List.of(List.of(lot.lot(), "continue", point.inspected(),
-                    point.found(), point.step(), point.moreUnits(), pending.nextTotal(), plan.fingerprint()))));
-            default -> {
-                out.println("NO DECISION YET " + lotLine(lot));
-                out.println("  " + point.found() + " " + counted + " found in " + point.inspected() + " units ("
-                        + point.step() + "): above the acceptance number " + PlanWording.acceptance(point.acceptanceNumber())
-                        + " and below the rejection number " + point.rejectionNumber());
-                out.println("  plan " + plan.name() + " (fingerprint " + plan.shortFingerprint() + "), "
-                        + PlanWording.brief(pending.plan()));
-                out.println("  sample of " + sample.units() + " units from " + sample.file() + ", " + SentenceLot.rowsOf(sample));
-                out.println();
-                out.println("  Next: " + what.replace("; ", ";\n        ") + ".");
-                out.println("  Nothing was recorded.");
+        return Text.of(out -> {
+            SavedPlan plan = undecided.plan();
+            InspectionSample sample = undecided.sample();
+            Pending pending = undecided.pending();
+            LotDetails lot = undecided.lot();
+            Stopping.Point point = pending.point();
+            String counted = PlanWording.counted(plan.model(), (int) Math.min(Integer.MAX_VALUE, point.found()));
+            String what = instruction(undecided);
+            switch (format) {
+                case "csv" -> out.print(CsvTable.table(List.of("lot", "verdict", "inspected", "found", "step", "moreUnits",
+                        "nextTotal", "planFingerprint"), List.of(List.of(lot.lot(), "continue", point.inspected(),
+                        point.found(), point.step(), point.moreUnits(), pending.nextTotal(), plan.fingerprint()))));
+                default -> {
+                    out.println("NO DECISION YET " + lotLine(lot));
+                    out.println("  " + point.found() + " " + counted + " found in " + point.inspected() + " units ("
+                            + point.step() + "): above the acceptance number " + PlanWording.acceptance(point.acceptanceNumber())
+                            + " and below the rejection number " + point.rejectionNumber());
+                    out.println("  plan " + plan.name() + " (fingerprint " + plan.shortFingerprint() + "), "
+                            + PlanWording.brief(pending.plan()));
+                    out.println("  sample of " + sample.units() + " units from " + sample.file() + ", " + SentenceLot.rowsOf(sample));
+                    out.println();
+                    out.println("  Next: " + what.replace("; ", ";\n        ") + ".");
+                    out.println("  Nothing was recorded.");
+                }
             }
-        }
-        out.flush();
-        return text.toString();
+        });
     }
 
     private static String where(InspectionSample sample, int row) {

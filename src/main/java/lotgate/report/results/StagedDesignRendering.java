@@ -2,7 +2,6 @@ package lotgate.report.results;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.util.List;
 import java.util.Locale;
 import lotgate.jobs.DesignStagedPlan;
@@ -31,11 +30,7 @@ public final class StagedDesignRendering {
 
     /** The design as text. */
     public static String text(DesignStagedPlan.Result result) {
-        StringWriter text = new StringWriter();
-        PrintWriter out = new PrintWriter(text);
-        printText(out, result, result.points(), result.saved());
-        out.flush();
-        return text.toString();
+        return Text.of(out -> printText(out, result, result.points(), result.saved()));
     }
 
     /** The design as JSON. */

@@ -2,7 +2,6 @@ package lotgate.report.results;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.util.List;
 import java.util.Locale;
 import lotgate.jobs.DesignVariablesPlan;
@@ -27,11 +26,7 @@ public final class VariablesDesignRendering {
 
     /** The design as text. */
     public static String text(DesignVariablesPlan.Result result) {
-        StringWriter text = new StringWriter();
-        PrintWriter out = new PrintWriter(text);
-        printText(out, result);
-        out.flush();
-        return text.toString();
+        return Text.of(out -> printText(out, result));
     }
 
     private static void printText(PrintWriter out, DesignVariablesPlan.Result result) {
