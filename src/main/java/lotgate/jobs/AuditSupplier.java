@@ -54,7 +54,7 @@ public final class AuditSupplier {
         String part = request.part();
         SupplierAudit audit;
         List<String> evidence = new ArrayList<>();
-        try (HistoryStore store = HistoryStore.open(request.store())) {
+        try (HistoryStore store = HistoryStore.open(request.store(), false)) {
             List<LotRow> rows = store.rows(supplier, part);
             if (rows.isEmpty()) {
                 throw new JobException(JobException.Kind.NOT_FOUND, "supplier", "the history store "

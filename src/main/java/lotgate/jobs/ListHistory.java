@@ -23,7 +23,7 @@ public final class ListHistory {
 
     /** Reads the records asked for. */
     public static Result run(Request request) {
-        try (HistoryStore store = HistoryStore.open(request.store())) {
+        try (HistoryStore store = HistoryStore.open(request.store(), false)) {
             return new Result(store.location(), store.rows(request.supplier(), request.part()));
         }
     }

@@ -36,7 +36,7 @@ public final class RankSuppliers {
             }
         }
         List<QualityStatistics.Ranked> ranking;
-        try (HistoryStore store = HistoryStore.open(request.store())) {
+        try (HistoryStore store = HistoryStore.open(request.store(), false)) {
             ranking = QualityStatistics.rank(store.supplierTotals(), request.confidence());
         }
         for (Path report : request.reports()) {
