@@ -201,7 +201,7 @@ public final class Main implements Runnable {
     /** The exit code that stands for a job's refusal of its request. */
     static int exitCode(JobException.Kind kind) {
         return switch (kind) {
-            case INVALID_REQUEST, CONFLICT -> ExitCode.USAGE;
+            case INVALID_REQUEST, CONFLICT, NOT_FOUND -> ExitCode.USAGE;
             case BAD_INPUT -> ExitCode.BAD_INPUT;
             case INCOMPLETE_SAMPLE -> ExitCode.INCOMPLETE_SAMPLE;
             case DISCONTINUED -> ExitCode.DISCONTINUED;
