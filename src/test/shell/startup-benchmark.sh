@@ -33,7 +33,7 @@ javac --release 17 -d "$work/hello/classes" "$work/hello/src/Hello.java"
 jar --create --file "$work/hello.jar" --main-class Hello -C "$work/hello/classes" .
 
 # The demo store: the invented year of past lots.
-$lotgate import demo-data/lots-2025.csv --store "$work/history.sqlite" > /dev/null
+$lotgate import demo-data/lots-2025.csv --store "$work/history.sqlite" --create-store > /dev/null
 
 names=(bare version design sentence supplier)
 commands=(
