@@ -8,14 +8,15 @@ import java.time.LocalDate;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import lotgate.history.HistoryStore;
-import lotgate.history.LotRow;
 import lotgate.history.RecordContent;
 import lotgate.history.Severity;
+import lotgate.history.SeverityTracker;
 import lotgate.history.SupplierHistory;
 import lotgate.history.SwitchingRules;
 import lotgate.inspection.Cell;
@@ -92,20 +93,22 @@ final class ImportCommand implements Runnable {
         if (lots.isEmpty()) {
             throw new SheetException(file, "no lots to import below the header");
         }
-        int written;
+        long written;
         String location;
         try (HistoryStore store = storeOption.openForRecording()) {
+            Map<String, Part> parts = new HashMap<>();
             for (int i = 0; i < lots.size(); i++) {
                 RecordContent.Lot lot = lots.get(i);
-                long existing = store.currentRecord(lot.supplier(), lot.part(), lot.lot());
-                if (existing > 0) {
+                Part part = parts.computeIfAbsent(key(lot), k -> Part.of(store, lot));
+                Long existing = part.recorded().get(lot.lot());
+                if (existing != null) {
                     throw new SheetException(file, source.whereRow(sheetName, sheetRows.get(i)) + ": lot " + lot.lot()
                             + " of " + lot.supplier() + ", part " + lot.part() + " is already recorded as #" + existing
                             + " in " + store.location() + " (nothing was imported)");
                 }
             }
-            List<ObjectNode> contents = withSeverities(store, lots);
-            written = store.appendAll(contents, Instant.now().truncatedTo(ChronoUnit.MILLIS)).size();
+            written = store.appendEach(() -> withSeverities(lots, parts),
+                    Instant.now().truncatedTo(ChronoUnit.MILLIS));
             location = store.location();
         }
         PrintWriter out = spec.commandLine().getOut();
@@ -113,25 +116,50 @@ final class ImportCommand implements Runnable {
         out.flush();
     }
 
-    /** Each lot with the severity the switching rules had it under, continuing its part's recorded history. */
-    private static List<ObjectNode> withSeverities(HistoryStore store, List<RecordContent.Lot> lots) {
-        Map<String, List<LotRow>> histories = new LinkedHashMap<>();
-        List<ObjectNode> contents = new ArrayList<>();
-        long fake = -1;
-        for (RecordContent.Lot lot : lots) {
-            String key = lot.supplier() + "\u0000" + lot.part();
-            List<LotRow> rows = histories.computeIfAbsent(key, k -> new ArrayList<>(store.rows(lot.supplier(),
-                    lot.part())));
-            Severity severity = new SupplierHistory(rows, SwitchingRules.CURRENT).current();
-            RecordContent.Lot placed = new RecordContent.Lot(lot.supplier(), lot.part(), lot.lot(), lot.lotSize(),
-                    lot.received(), lot.inspector(), lot.verdict(), lot.inspected(), lot.nonconforming(),
-                    lot.defectTypes(), severity.label(), lot.production(), 0, null);
-            rows.add(new LotRow(fake--, Instant.EPOCH, "lot", lot.supplier(), lot.part(), lot.lot(), lot.lotSize(),
-                    lot.received(), lot.verdict(), lot.inspected(), lot.nonconforming(), severity.label(),
-                    lot.production(), 0));
-            contents.add(RecordContent.lot(placed, null, "import"));
+    private static String key(RecordContent.Lot lot) {
+        return lot.supplier() + "\u0000" + lot.part();
+    }
+
+    /**
+     * A part's recorded history, read once: its current record of each lot, and the switching state
+     * after its last record, which the imported lots carry forward in file order.
+     */
+    private record Part(Map<String, Long> recorded, SeverityTracker tracker) {
+        static Part of(HistoryStore store, RecordContent.Lot lot) {
+            SupplierHistory history = new SupplierHistory(store.rows(lot.supplier(), lot.part()),
+                    SwitchingRules.CURRENT);
+            Map<String, Long> recorded = new HashMap<>();
+            for (SupplierHistory.Entry entry : history.entries()) {
+                recorded.put(entry.row().lot(), entry.row().seq());
+            }
+            return new Part(recorded, history.continuation());
         }
-        return contents;
+    }
+
+    /** Each lot, as it is written, with the severity the switching rules had it under. */
+    private static Iterator<ObjectNode> withSeverities(List<RecordContent.Lot> lots, Map<String, Part> parts) {
+        Iterator<RecordContent.Lot> each = lots.iterator();
+        return new Iterator<>() {
+            @Override
+            public boolean hasNext() {
+                return each.hasNext();
+            }
+
+            @Override
+            public ObjectNode next() {
+                RecordContent.Lot lot = each.next();
+                SeverityTracker tracker = parts.get(key(lot)).tracker();
+                Severity severity = tracker.severity();
+                if (severity != Severity.DISCONTINUED) {
+                    tracker.lot(lot.lot(), "accept".equals(lot.verdict()), lot.nonconforming(),
+                            !"irregular".equals(lot.production()));
+                }
+                RecordContent.Lot placed = new RecordContent.Lot(lot.supplier(), lot.part(), lot.lot(), lot.lotSize(),
+                        lot.received(), lot.inspector(), lot.verdict(), lot.inspected(), lot.nonconforming(),
+                        lot.defectTypes(), severity.label(), lot.production(), 0, null);
+                return RecordContent.lot(placed, null, "import");
+            }
+        };
     }
 
     private RecordContent.Lot lot(SheetSource source, String sheetName, int row, List<Cell> cells,

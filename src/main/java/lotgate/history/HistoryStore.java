@@ -341,14 +341,39 @@ public final class HistoryStore implements AutoCloseable {
      */
     public List<StoredRecord> appendAll(List<ObjectNode> contents, Instant recordedAt) {
         for (ObjectNode content : contents) {
-            for (String field : new String[] {"supplier", "part", "lot", "inspector"}) {
-                String problem = Identifiers.problem(field, Migrations.text(content, field));
-                if (problem != null) {
-                    throw new StoreException("history store " + location.shown() + ": " + problem
-                            + " (nothing was recorded)");
-                }
+            String problem = identifierProblem(content);
+            if (problem != null) {
+                throw new StoreException("history store " + location.shown() + ": " + problem
+                        + " (nothing was recorded)");
             }
         }
+        List<StoredRecord> stored = new ArrayList<>();
+        append(contents, recordedAt, stored::add);
+        return stored;
+    }
+
+    /**
+     * Appends many records in one transaction, all or none, as {@link #appendAll} does, taking each content
+     * from the iterator as it goes and keeping none of them: memory stays flat however many there are.
+     *
+     * @return how many records were appended
+     */
+    public long appendEach(Iterable<ObjectNode> contents, Instant recordedAt) {
+        return append(contents, recordedAt, stored -> { });
+    }
+
+    private static String identifierProblem(ObjectNode content) {
+        for (String field : new String[] {"supplier", "part", "lot", "inspector"}) {
+            String problem = Identifiers.problem(field, Migrations.text(content, field));
+            if (problem != null) {
+                return problem;
+            }
+        }
+        return null;
+    }
+
+    private long append(Iterable<ObjectNode> contents, Instant recordedAt,
+            java.util.function.Consumer<StoredRecord> each) {
         try {
             return transaction("record the lots", () -> {
                 Head head = lockedHead();
@@ -358,32 +383,39 @@ public final class HistoryStore implements AutoCloseable {
                             + "; nothing was recorded. Run 'lotgate verify --store " + location.shown() + "' to find"
                             + " the damage");
                 }
-                long last = head.seq();
+                long first = head.seq();
+                long last = first;
                 String previous = head.hash();
-                List<StoredRecord> stored = new ArrayList<>();
-                for (ObjectNode content : contents) {
-                    String text = CanonicalJson.text(content);
-                    long seq = ++last;
-                    String hash = StoredRecord.hashOf(previous, seq, recordedAt, text);
-                    String key = null;
-                    if (version >= 3 && "lot".equals(Migrations.text(content, "kind"))) {
-                        key = lotKey(Migrations.text(content, "supplier"), Migrations.text(content, "part"),
-                                Migrations.text(content, "lot"));
-                        long supersedes = content.path("supersedes").asLong(0);
-                        if (supersedes > 0) {
-                            release(supersedes);
+                try (Migrations.RecordInserter inserter = new Migrations.RecordInserter(connection, version)) {
+                    for (ObjectNode content : contents) {
+                        String problem = identifierProblem(content);
+                        if (problem != null) {
+                            throw new StoreException("history store " + location.shown() + ": " + problem
+                                    + " (nothing was recorded)");
                         }
-                    }
-                    try {
-                        Migrations.insertRecord(connection, version, seq, recordedAt, text, content, previous, hash, key);
-                    } catch (SQLException e) {
-                        if (key != null && uniqueViolation(e)) {
-                            throw new KeyTaken(key, content);
+                        String text = CanonicalJson.text(content);
+                        long seq = ++last;
+                        String hash = StoredRecord.hashOf(previous, seq, recordedAt, text);
+                        String key = null;
+                        if (version >= 3 && "lot".equals(Migrations.text(content, "kind"))) {
+                            key = lotKey(Migrations.text(content, "supplier"), Migrations.text(content, "part"),
+                                    Migrations.text(content, "lot"));
+                            long supersedes = content.path("supersedes").asLong(0);
+                            if (supersedes > 0) {
+                                release(supersedes);
+                            }
                         }
-                        throw e;
+                        try {
+                            inserter.insert(seq, recordedAt, text, content, previous, hash, key);
+                        } catch (SQLException e) {
+                            if (key != null && uniqueViolation(e)) {
+                                throw new KeyTaken(key, content);
+                            }
+                            throw e;
+                        }
+                        each.accept(new StoredRecord(seq, recordedAt, text, previous, hash));
+                        previous = hash;
                     }
-                    stored.add(new StoredRecord(seq, recordedAt, text, previous, hash));
-                    previous = hash;
                 }
                 try (PreparedStatement update = connection.prepareStatement("UPDATE chain_head SET seq = ?, hash = ?"
                         + " WHERE id = 1")) {
@@ -391,7 +423,7 @@ public final class HistoryStore implements AutoCloseable {
                     update.setString(2, previous);
                     update.executeUpdate();
                 }
-                return stored;
+                return last - first;
             });
         } catch (KeyTaken taken) {
             long holder = holderOf(taken.key);
@@ -597,10 +629,16 @@ public final class HistoryStore implements AutoCloseable {
 
     /** Nonconforming units per defect type for a supplier (and part), most frequent first. */
     public Map<String, Long> defectTypes(String supplier, String part) {
-        String sql = "SELECT defect, SUM(units) AS total FROM defect_count WHERE supplier = ?"
-                + (part == null ? "" : " AND part = ?")
-                + " AND seq NOT IN (SELECT supersedes FROM lot_record WHERE supersedes > 0)"
-                + " GROUP BY defect ORDER BY total DESC, defect";
+        // A lot's current record holds its key (a correction takes it over): one look-up by seq per count,
+        // where a superseded-record subquery would scan the whole table.
+        String sql = version >= 3
+                ? "SELECT d.defect, SUM(d.units) AS total FROM defect_count d JOIN lot_record r ON r.seq = d.seq"
+                        + " WHERE d.supplier = ?" + (part == null ? "" : " AND d.part = ?")
+                        + " AND r.lot_key IS NOT NULL GROUP BY d.defect ORDER BY total DESC, d.defect"
+                : "SELECT defect, SUM(units) AS total FROM defect_count WHERE supplier = ?"
+                        + (part == null ? "" : " AND part = ?")
+                        + " AND seq NOT IN (SELECT supersedes FROM lot_record WHERE supersedes > 0)"
+                        + " GROUP BY defect ORDER BY total DESC, defect";
         return read("read the defect types", () -> {
             Map<String, Long> types = new LinkedHashMap<>();
             try (PreparedStatement query = connection.prepareStatement(sql)) {
@@ -626,7 +664,8 @@ public final class HistoryStore implements AutoCloseable {
     public List<SupplierTotals> supplierTotals() {
         String sql = "SELECT supplier, COUNT(*), SUM(CASE WHEN verdict = 'reject' THEN 1 ELSE 0 END), SUM(inspected),"
                 + " SUM(nonconforming) FROM lot_record WHERE kind = 'lot'"
-                + " AND seq NOT IN (SELECT supersedes FROM lot_record WHERE supersedes > 0)"
+                + (version >= 3 ? " AND lot_key IS NOT NULL"
+                        : " AND seq NOT IN (SELECT supersedes FROM lot_record WHERE supersedes > 0)")
                 + " GROUP BY supplier ORDER BY supplier";
         return read("aggregate the suppliers", () -> {
             List<SupplierTotals> totals = new ArrayList<>();

@@ -177,19 +177,38 @@ final class Migrations {
     /** Writes a record's row in the columns of the given schema version, extracted from its content. */
     static void insertRecord(Connection connection, int version, long seq, Instant recordedAt, String text,
             JsonNode content, String previous, String hash, String lotKey) throws SQLException {
-        String columns = "seq, recorded_at, kind, supplier, part, lot, lot_size, received, verdict, inspected,"
-                + " nonconforming, supersedes, content, previous_hash, hash";
-        String marks = "?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?";
-        if (version >= 2) {
-            columns += ", severity, production";
-            marks += ", ?, ?";
+        try (RecordInserter inserter = new RecordInserter(connection, version)) {
+            inserter.insert(seq, recordedAt, text, content, previous, hash, lotKey);
         }
-        if (version >= 3) {
-            columns += ", lot_key";
-            marks += ", ?";
+    }
+
+    /** Inserts records with statements prepared once, for appends of many records in one transaction. */
+    static final class RecordInserter implements AutoCloseable {
+        private final int version;
+        private final PreparedStatement record;
+        private final PreparedStatement defects;
+
+        RecordInserter(Connection connection, int version) throws SQLException {
+            this.version = version;
+            String columns = "seq, recorded_at, kind, supplier, part, lot, lot_size, received, verdict, inspected,"
+                    + " nonconforming, supersedes, content, previous_hash, hash";
+            String marks = "?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?";
+            if (version >= 2) {
+                columns += ", severity, production";
+                marks += ", ?, ?";
+            }
+            if (version >= 3) {
+                columns += ", lot_key";
+                marks += ", ?";
+            }
+            record = connection.prepareStatement("INSERT INTO lot_record (" + columns + ") VALUES (" + marks + ")");
+            defects = version >= 2 ? connection.prepareStatement("INSERT INTO defect_count (seq, supplier, part,"
+                    + " defect, units) VALUES (?, ?, ?, ?, ?)") : null;
         }
-        try (PreparedStatement insert = connection.prepareStatement("INSERT INTO lot_record (" + columns
-                + ") VALUES (" + marks + ")")) {
+
+        void insert(long seq, Instant recordedAt, String text, JsonNode content, String previous, String hash,
+                String lotKey) throws SQLException {
+            PreparedStatement insert = record;
             insert.setLong(1, seq);
             insert.setString(2, recordedAt.toString());
             insert.setString(3, text(content, "kind"));
@@ -213,31 +232,46 @@ final class Migrations {
                 insert.setString(18, lotKey);
             }
             insert.executeUpdate();
+            if (version >= 2) {
+                insertDefects(defects, seq, content);
+            }
         }
-        if (version >= 2) {
-            insertDefects(connection, seq, content);
+
+        @Override
+        public void close() throws SQLException {
+            try {
+                record.close();
+            } finally {
+                if (defects != null) {
+                    defects.close();
+                }
+            }
         }
     }
 
     private static void insertDefects(Connection connection, long seq, JsonNode content) throws SQLException {
+        try (PreparedStatement insert = connection.prepareStatement("INSERT INTO defect_count (seq, supplier, part,"
+                + " defect, units) VALUES (?, ?, ?, ?, ?)")) {
+            insertDefects(insert, seq, content);
+        }
+    }
+
+    private static void insertDefects(PreparedStatement insert, long seq, JsonNode content) throws SQLException {
         JsonNode types = content.get("defectTypes");
         if (types == null || !types.isObject() || types.isEmpty()) {
             return;
         }
-        try (PreparedStatement insert = connection.prepareStatement("INSERT INTO defect_count (seq, supplier, part,"
-                + " defect, units) VALUES (?, ?, ?, ?, ?)")) {
-            var fields = types.fields();
-            while (fields.hasNext()) {
-                var entry = fields.next();
-                insert.setLong(1, seq);
-                insert.setString(2, text(content, "supplier"));
-                insert.setString(3, text(content, "part"));
-                insert.setString(4, entry.getKey());
-                insert.setLong(5, entry.getValue().asLong());
-                insert.addBatch();
-            }
-            insert.executeBatch();
+        var fields = types.fields();
+        while (fields.hasNext()) {
+            var entry = fields.next();
+            insert.setLong(1, seq);
+            insert.setString(2, text(content, "supplier"));
+            insert.setString(3, text(content, "part"));
+            insert.setString(4, entry.getKey());
+            insert.setLong(5, entry.getValue().asLong());
+            insert.addBatch();
         }
+        insert.executeBatch();
     }
 
     /** The columns verification reads, in this order, for a schema version. */

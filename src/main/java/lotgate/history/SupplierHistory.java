@@ -18,6 +18,7 @@ public final class SupplierHistory {
     private final List<Entry> entries = new ArrayList<>();
     private final List<SeverityTracker.Switch> switches = new ArrayList<>();
     private final Severity current;
+    private final SeverityTracker tracker;
 
     /** Builds the history of one supplier's part from its rows in record order. */
     public SupplierHistory(List<LotRow> rows, SwitchingRules rules) {
@@ -27,7 +28,7 @@ public final class SupplierHistory {
                 replacement.put(row.supersedes(), row);
             }
         }
-        SeverityTracker tracker = new SeverityTracker(rules);
+        tracker = new SeverityTracker(rules);
         for (LotRow row : rows) {
             if (row.supersedes() > 0) {
                 continue;
@@ -61,6 +62,15 @@ public final class SupplierHistory {
     /** The severity the next lot is to be inspected under. */
     public Severity current() {
         return current;
+    }
+
+    /**
+     * The switching state after the last record, to be carried forward over lots that follow it, so that
+     * an import of many lots judges each without replaying the history again. Advancing it leaves this
+     * history's entries and {@link #current()} as they are.
+     */
+    public SeverityTracker continuation() {
+        return tracker;
     }
 
     public List<Entry> entries() {

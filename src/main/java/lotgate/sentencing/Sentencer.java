@@ -26,7 +26,8 @@ public final class Sentencer {
     }
 
     /**
-     * @param lotSize    the lot's size N, or 0 if unknown (a hypergeometric plan then uses its own)
+     * @param lotSize    the lot's size N, or 0 if unknown (a hypergeometric plan then uses its own; the evidence
+     *                   then leaves out the bound on nonconforming units in the lot)
      * @param confidence the confidence level of the bounds
      * @return the sentence, or for a multi-stage or sequential plan that has not decided, what to inspect next
      */
@@ -49,7 +50,7 @@ public final class Sentencer {
             int found = (int) Math.min(Integer.MAX_VALUE, point.found());
             verdicts.add(new ClassVerdict(defectClass, plan, point.inspected(), found,
                     point.verdict() == Stopping.Verdict.ACCEPT,
-                    evidence(model, plan, criteria, point.inspected(), found, lot, confidence),
+                    evidence(model, plan, criteria, point.inspected(), found, lotSize, confidence),
                     point.acceptanceNumber(), point.rejectionNumber(), point.step()));
         }
         return new Sentence(verdicts.stream().allMatch(ClassVerdict::accepted), verdicts);

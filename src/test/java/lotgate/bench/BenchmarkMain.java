@@ -88,6 +88,15 @@ public final class BenchmarkMain {
                     scores.get(history + "recordOneLot"));
             System.out.println();
         }
+        String imports = ImportBenchmark.class.getName() + ".";
+        if (scores.containsKey(imports + "importLots") && scores.containsKey(imports + "bareSqlite3Import")) {
+            System.out.println("Import of " + ImportBenchmark.LOTS + " lots into a fresh store, -Xmx256m (ms, same run;"
+                    + " target: at most 5 times sqlite3's bare import)");
+            System.out.printf("%-44s %10.0f   sqlite3 %9.0f   ratio %5.2f%n", "lotgate import (whole command)",
+                    scores.get(imports + "importLots"), scores.get(imports + "bareSqlite3Import"),
+                    scores.get(imports + "importLots") / scores.get(imports + "bareSqlite3Import"));
+            System.out.println();
+        }
         Double sentence = scores.get(SentencingBenchmark.class.getName() + ".sentence");
         Double bare = scores.get(SentencingBenchmark.class.getName() + ".bareSaxPass");
         if (sentence != null && bare != null) {

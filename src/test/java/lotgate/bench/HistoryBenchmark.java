@@ -58,7 +58,7 @@ public class HistoryBenchmark {
         folder = Files.createTempDirectory("lotgate-history-bench");
         store = folder.resolve("history.sqlite").toString();
         Random random = new Random(100_000);
-        try (HistoryStore history = HistoryStore.open(store)) {
+        try (HistoryStore history = HistoryStore.open(store, true)) {
             List<ObjectNode> batch = new ArrayList<>();
             for (int i = 0; i < LOTS; i++) {
                 int supplier = i % SUPPLIERS;
@@ -100,7 +100,7 @@ public class HistoryBenchmark {
                 Statement statement = connection.createStatement();
                 ResultSet rows = statement.executeQuery("SELECT supplier, COUNT(*), SUM(CASE WHEN verdict = 'reject'"
                         + " THEN 1 ELSE 0 END), SUM(inspected), SUM(nonconforming) FROM lot_record WHERE kind = 'lot'"
-                        + " AND seq NOT IN (SELECT supersedes FROM lot_record WHERE supersedes > 0) GROUP BY supplier")) {
+                        + " AND lot_key IS NOT NULL GROUP BY supplier")) {
             while (rows.next()) {
                 sum += rows.getLong(2) + rows.getLong(5);
             }
@@ -137,9 +137,9 @@ public class HistoryBenchmark {
                     }
                 }
             }
-            try (PreparedStatement types = connection.prepareStatement("SELECT defect, SUM(units) FROM defect_count"
-                    + " WHERE supplier = ? AND seq NOT IN (SELECT supersedes FROM lot_record WHERE supersedes > 0)"
-                    + " GROUP BY defect")) {
+            try (PreparedStatement types = connection.prepareStatement("SELECT d.defect, SUM(d.units) FROM defect_count d"
+                    + " JOIN lot_record r ON r.seq = d.seq WHERE d.supplier = ? AND r.lot_key IS NOT NULL"
+                    + " GROUP BY d.defect")) {
                 types.setString(1, "Invented Supplier 17");
                 try (ResultSet rows = types.executeQuery()) {
                     while (rows.next()) {

@@ -158,6 +158,40 @@ class HistoryCommandsTest {
     }
 
     @Test
+    void importedLotsCarryTheSeverityAReplayOfTheWholeHistoryGives() throws Exception {
+        // Two rejections in five lots on normal inspection switch to tightened, five accepted on tightened back
+        // to normal (the switching rules); split over two imports, the second must continue the first's state.
+        List<List<Object>> first = new ArrayList<>();
+        List<List<Object>> second = new ArrayList<>();
+        String[] verdicts = {"accept", "reject", "accept", "reject", "accept", "accept", "accept", "accept", "accept",
+                "accept", "reject", "accept"};
+        for (int i = 0; i < verdicts.length; i++) {
+            boolean rejected = verdicts[i].equals("reject");
+            List<Object> lot = row("C" + i, "Invented Carry", "C-1", "2026-04-" + (10 + i), 80, rejected ? 4 : 0,
+                    verdicts[i], rejected ? "burr:4" : "");
+            (i < 3 ? first : second).add(lot);
+        }
+        second.add(0, row("D0", "Invented Carry", "D-1", "2026-04-01", 80, 4, "reject", "burr:4"));
+        Path one = pastLots(first);
+        assertEquals(0, Cli.run("import", one.toString(), "--store", store, "--create-store").exitCode());
+        Path two = pastLots(second);
+        assertEquals(0, Cli.run("import", two.toString(), "--store", store).exitCode());
+        try (lotgate.history.HistoryStore opened = lotgate.history.HistoryStore.open(store)) {
+            List<lotgate.history.LotRow> rows = opened.rows("Invented Carry", "C-1");
+            assertEquals(verdicts.length, rows.size());
+            var replay = new lotgate.history.SupplierHistory(rows, lotgate.history.SwitchingRules.CURRENT);
+            List<String> recorded = new ArrayList<>();
+            List<String> replayed = new ArrayList<>();
+            for (var entry : replay.entries()) {
+                recorded.add(entry.row().severity());
+                replayed.add(entry.inspectedUnder().label());
+            }
+            assertEquals(replayed, recorded);
+            assertTrue(recorded.contains("tightened"), recorded.toString());
+        }
+    }
+
+    @Test
     void theAuditGivesTheProcessAverageWithItsExactIntervalAndThePChart() throws Exception {
         Path past = pastLots(List.of(row("P1", "Invented Works", "IW-1", "2026-01-05", 80, 2, "accept", "burr:2"),
                 row("P2", "Invented Works", "IW-1", "2026-01-12", 80, 0, "accept", ""),

@@ -144,6 +144,19 @@ class SentenceCommandTest {
     }
 
     @Test
+    void withNoLotSizeTheEvidenceLeavesOutTheBoundOnTheLot() throws Exception {
+        // The plan was designed for lots of 5000, but this lot's size is not given: no bound "of 0" units.
+        Path file = sheet("unsized.xlsx", 132);
+        Cli.Result text = Cli.run("sentence", "--no-record", BOLTS, file.toString(), "--lot", "L-6");
+        assertEquals(ExitCode.OK, text.exitCode(), text.err());
+        assertFalse(text.out().contains("in the lot: at most"), text.out());
+        Cli.Result sized = Cli.run("sentence", "--no-record", BOLTS, file.toString(), "--lot", "L-6", "--lot-size",
+                "5000");
+        assertTrue(sized.out().contains("nonconforming units in the lot: at most "), sized.out());
+        assertTrue(sized.out().contains(" of 5000 ("), sized.out());
+    }
+
+    @Test
     void moreUnitsThanThePlanSamplesNeedTheRowsOfTheSample() throws Exception {
         Path file = sheet("long.xlsx", 140, 135);
         Cli.Result result = Cli.run("sentence", "--no-record", BOLTS, file.toString(), "--lot", "L-2");
