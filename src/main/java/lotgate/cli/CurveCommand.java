@@ -58,8 +58,8 @@ final class CurveCommand implements Runnable {
                     + " where P(accept) falls to 1%% and past 1.25 times the LTPD, at most 100%%).")
     Double upTo;
 
-    @Option(names = "--steps", paramLabel = "K", defaultValue = "20", converter = Values.Count.class,
-            description = "Number of equal steps in the table (default ${DEFAULT-VALUE}).")
+    @Option(names = "--steps", paramLabel = "K", defaultValue = "20", converter = Values.Steps.class,
+            description = "Number of equal steps in the table, 1 to 10000 (default ${DEFAULT-VALUE}).")
     int steps;
 
     @Option(names = "--chart", paramLabel = "FILE",

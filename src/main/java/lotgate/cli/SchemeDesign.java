@@ -41,9 +41,9 @@ final class SchemeDesign {
                         + " e.g. --stage 50:1:4 --stage 100:3 (the last stage's R is C + 1 and may be left out).")
         List<String> stageSpecs = new ArrayList<>();
 
-        @Option(names = "--truncate-at", paramLabel = "N", converter = Values.Count.class,
-                description = "Sequential plans: the most units inspected (default: 3 times the single plan's n for the"
-                        + " same risks).")
+        @Option(names = "--truncate-at", paramLabel = "N", converter = Values.Truncation.class,
+                description = "Sequential plans: the most units inspected, 1 to 1000000 (default: 3 times the single"
+                        + " plan's n for the same risks).")
         Integer truncateAt;
 
         @Option(names = "--plain-wald",

@@ -12,6 +12,11 @@ final class Values {
     private Values() {
     }
 
+    /** The most steps a curve table takes. */
+    static final int MAX_STEPS = 10_000;
+    /** The most units a sequential plan may be truncated at: its exact lattice stays within memory. */
+    static final int MAX_TRUNCATION = 1_000_000;
+
     /** A fraction from "1%" or "0.01"; a bare value of 1 or more is refused with a hint. */
     static double fraction(String text) {
         try {
@@ -66,6 +71,30 @@ final class Values {
         @Override
         public Integer convert(String text) {
             return wholeNumber(text, 0);
+        }
+    }
+
+    /** Steps of a curve table: 1 to {@link #MAX_STEPS}. */
+    static final class Steps implements ITypeConverter<Integer> {
+        @Override
+        public Integer convert(String text) {
+            int steps = wholeNumber(text, 1);
+            if (steps > MAX_STEPS) {
+                throw new TypeConversionException("'" + text + "' is more than " + MAX_STEPS + " steps");
+            }
+            return steps;
+        }
+    }
+
+    /** The truncation of a sequential plan: 1 to {@link #MAX_TRUNCATION} units. */
+    static final class Truncation implements ITypeConverter<Integer> {
+        @Override
+        public Integer convert(String text) {
+            int units = wholeNumber(text, 1);
+            if (units > MAX_TRUNCATION) {
+                throw new TypeConversionException("'" + text + "' is more than " + MAX_TRUNCATION + " units");
+            }
+            return units;
         }
     }
 

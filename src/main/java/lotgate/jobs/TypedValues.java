@@ -12,7 +12,10 @@ public final class TypedValues {
     private TypedValues() {
     }
 
-    /** A fraction from "1%" or "0.01"; a bare value of 1 or more is refused with a hint. */
+    /** The smallest quality level, risk or confidence level taken: 0.0001%. */
+    public static final BigDecimal SMALLEST = new BigDecimal("0.000001");
+
+    /** A fraction from "1%" or "0.01", at least 0.0001%; a bare value of 1 or more is refused with a hint. */
     public static double fraction(String text) {
         String trimmed = text.trim();
         boolean percent = trimmed.endsWith("%");
@@ -33,15 +36,22 @@ public final class TypedValues {
         if (value.signum() <= 0) {
             throw new IllegalArgumentException("'" + text + "' must be above 0");
         }
+        if (value.compareTo(SMALLEST) < 0) {
+            throw new IllegalArgumentException("'" + text + "' is below 0.0001%, the smallest level lotgate takes");
+        }
         return value.doubleValue();
     }
 
-    /** A risk (alpha, beta, a confidence level): a fraction strictly between 0% and 100%. */
+    /** A risk (alpha, beta, a confidence level): a fraction from 0.0001% to 99.9999%. */
     public static double risk(String text) {
         double value = fraction(text);
         if (value >= 1) {
             throw new IllegalArgumentException("'" + text + "' is not a risk; give a value between 0% and 100%,"
                     + " such as 5%");
+        }
+        if (value > 0.999999) {
+            throw new IllegalArgumentException("'" + text + "' is above 99.9999%, the largest risk or confidence"
+                    + " lotgate takes");
         }
         return value;
     }
@@ -55,7 +65,8 @@ public final class TypedValues {
             }
             return value;
         } catch (NumberFormatException e) {
-            throw new IllegalArgumentException("'" + text + "' is not a whole number of " + least + " or more");
+            throw new IllegalArgumentException("'" + text + "' is not a whole number from " + least + " to "
+                    + Integer.MAX_VALUE);
         }
     }
 }
