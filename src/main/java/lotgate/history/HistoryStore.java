@@ -656,6 +656,32 @@ public final class HistoryStore implements AutoCloseable {
         });
     }
 
+    /**
+     * Each effective lot's defect type counts, by record sequence number, for one supplier (and part): an audit
+     * of a period sums those of the period's lots.
+     */
+    public Map<Long, Map<String, Long>> defectTypesByLot(String supplier, String part) {
+        String sql = "SELECT seq, defect, units FROM defect_count WHERE supplier = ?"
+                + (part == null ? "" : " AND part = ?")
+                + " AND seq NOT IN (SELECT supersedes FROM lot_record WHERE supersedes > 0)";
+        return read("read the defect types", () -> {
+            Map<Long, Map<String, Long>> byLot = new java.util.HashMap<>();
+            try (PreparedStatement query = connection.prepareStatement(sql)) {
+                query.setString(1, supplier);
+                if (part != null) {
+                    query.setString(2, part);
+                }
+                try (ResultSet result = query.executeQuery()) {
+                    while (result.next()) {
+                        byLot.computeIfAbsent(result.getLong(1), k -> new LinkedHashMap<>())
+                                .merge(result.getString(2), result.getLong(3), Long::sum);
+                    }
+                }
+            }
+            return byLot;
+        });
+    }
+
     /** One supplier's totals over its effective lots (corrections replace what they supersede). */
     public record SupplierTotals(String supplier, long lots, long rejected, long inspected, long nonconforming) {
     }

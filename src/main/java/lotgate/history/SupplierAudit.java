@@ -28,7 +28,31 @@ public record SupplierAudit(String supplier, String part, LocalDate from, LocalD
         return of(supplier, part, from, to, rows, defectTypes, rules, confidence, List.of());
     }
 
-    /** The audit with the lots judged on measurements (as the store reads them, any order). */
+    /**
+     * The audit with each lot's defect types (by record sequence number, as {@link HistoryStore#defectTypesByLot}
+     * reads them): the Pareto counts only the period's effective lots, as every other table and chart does.
+     */
+    public static SupplierAudit ofLots(String supplier, String part, LocalDate from, LocalDate to, List<LotRow> rows,
+            Map<Long, Map<String, Long>> defectsByLot, SwitchingRules rules, double confidence,
+            List<MeasurementCharts.Row> measured) {
+        SupplierAudit all = of(supplier, part, from, to, rows, Map.of(), rules, confidence, measured);
+        Map<String, Long> types = new java.util.HashMap<>();
+        for (LotRow lot : all.lotsInOrder()) {
+            defectsByLot.getOrDefault(lot.seq(), Map.of()).forEach((type, count) -> types.merge(type, count, Long::sum));
+        }
+        Map<String, Long> ordered = new java.util.LinkedHashMap<>();
+        types.entrySet().stream().sorted(Map.Entry.<String, Long>comparingByValue().reversed()
+                .thenComparing(Map.Entry.comparingByKey())).forEach(e -> ordered.put(e.getKey(), e.getValue()));
+        return new SupplierAudit(all.supplier(), all.part(), all.from(), all.to(), all.confidence(), all.parts(),
+                all.lots(), all.accepted(), all.rejected(), all.acceptanceRate(), all.processAverage(), all.pChart(),
+                QualityStatistics.pareto(ordered), all.rejectedLots(), all.lotsInOrder(), all.measurements());
+    }
+
+    /**
+     * The audit with the lots judged on measurements (as the store reads them, any order).
+     *
+     * @param defectTypes the defect type counts of the period's lots, most frequent first
+     */
     public static SupplierAudit of(String supplier, String part, LocalDate from, LocalDate to, List<LotRow> rows,
             Map<String, Long> defectTypes, SwitchingRules rules, double confidence,
             List<MeasurementCharts.Row> measured) {

@@ -12,6 +12,7 @@ import lotgate.report.Json;
 import lotgate.report.Percent;
 import lotgate.report.PlanWording;
 import lotgate.sampling.OcModel;
+import lotgate.sampling.OperatingCharacteristic;
 import lotgate.sampling.PlanRisks;
 import lotgate.sampling.RiskPoints;
 import lotgate.sampling.SinglePlan;
@@ -140,6 +141,72 @@ public final class DesignRendering {
                     + String.join(", ", others.stream().map(String::valueOf).toList())
                     + " (lower producer's risk, higher consumer's risk).");
         }
+        for (String note : lotNotes(outcome, model, lotSize)) {
+            out.println();
+            out.println(wrap(note, indent));
+        }
+    }
+
+    /** Text broken into lines of at most 104 characters, each starting with the indent. */
+    private static String wrap(String text, String indent) {
+        StringBuilder out = new StringBuilder();
+        StringBuilder line = new StringBuilder(indent);
+        for (String word : text.split(" ")) {
+            if (line.length() > indent.length() && line.length() + 1 + word.length() > 104) {
+                out.append(line).append('\n');
+                line = new StringBuilder(indent);
+            }
+            if (line.length() > indent.length()) {
+                line.append(' ');
+            }
+            line.append(word);
+        }
+        return out.append(line).toString();
+    }
+
+    /**
+     * What a lot size adds to a single plan: the AOQ and ATI of rectifying inspection (a type B model), a hint
+     * that the hypergeometric model fits a sample of more than a tenth of the lot, and for the hypergeometric
+     * model an AQL below one nonconforming unit of the lot, which leaves no producer's risk to control.
+     */
+    static List<String> lotNotes(DesignSinglePlan.ClassOutcome outcome, OcModel model, int lotSize) {
+        List<String> notes = new ArrayList<>();
+        if (lotSize <= 0) {
+            return notes;
+        }
+        SinglePlan plan = outcome.found().plan();
+        RiskPoints points = outcome.points();
+        if (model instanceof OcModel.Hypergeometric) {
+            if (Math.round(outcome.found().risks().aqlPoint() * lotSize) == 0) {
+                double oneUnit = 1.0 / lotSize;
+                double accepted = plan.acceptance(model, oneUnit);
+                notes.add("Note: the AQL " + Percent.level(points.aql()) + " is less than one nonconforming unit of a lot"
+                        + " of " + lotSize + " (D = 0), so the producer's risk there is 0 by construction and the AQL"
+                        + " point does not shape the plan. The lowest quality the plan can be judged at is one"
+                        + " nonconforming unit, " + Percent.level(oneUnit) + " (D = 1): such a lot is accepted "
+                        + Percent.probability(accepted) + " of the time (producer's risk " + Percent.probability(1
+                        - accepted) + "). State the AQL as D = 1 or more to control the producer's risk.");
+            }
+            return notes;
+        }
+        if (plan.n() > 0.1 * lotSize && plan.n() < lotSize && model.countsUnits()) {
+            notes.add("Note: the sample is " + Percent.level((double) plan.n() / lotSize) + " of the lot of " + lotSize
+                    + " units, more than a tenth: for an isolated lot the hypergeometric model (--model"
+                    + " hypergeometric --lot-size " + lotSize + ") is exact and often needs a smaller sample.");
+        }
+        if (plan.n() < lotSize) {
+            OperatingCharacteristic oc = new OperatingCharacteristic(plan, model, lotSize);
+            OperatingCharacteristic.Aoql aoql = oc.aoql();
+            notes.add("With rectifying inspection (rejected lots of " + lotSize + " inspected 100%): AOQ "
+                    + Percent.probability(plan.averageOutgoingQuality(model, points.aql(), lotSize)) + " at the AQL and "
+                    + Percent.probability(plan.averageOutgoingQuality(model, points.ltpd(), lotSize)) + " at the LTPD;"
+                    + " AOQL " + Percent.probability(aoql.limit()) + " at incoming " + Percent.probability(aoql.quality())
+                    + "; ATI "
+                    + String.format(java.util.Locale.ROOT, "%.1f", plan.averageTotalInspection(model, points.aql(),
+                            lotSize)) + " units at the AQL and " + String.format(java.util.Locale.ROOT, "%.1f",
+                            plan.averageTotalInspection(model, points.ltpd(), lotSize)) + " at the LTPD.");
+        }
+        return notes;
     }
 
     private static void putClass(ObjectNode node, DesignSinglePlan.ClassOutcome outcome, OcModel model, int lotSize) {
@@ -159,6 +226,15 @@ public final class DesignRendering {
         node.put("risksMet", risks.meets(points));
         var others = node.putArray("otherAcceptanceNumbers");
         outcome.found().otherAcceptanceNumbers().forEach(others::add);
+        if (lotSize > 0 && !(model instanceof OcModel.Hypergeometric) && plan.n() < lotSize) {
+            node.put("aoqAtAql", plan.averageOutgoingQuality(model, points.aql(), lotSize));
+            node.put("aoqAtLtpd", plan.averageOutgoingQuality(model, points.ltpd(), lotSize));
+            node.put("aoql", new OperatingCharacteristic(plan, model, lotSize).aoql().limit());
+            node.put("atiAtAql", plan.averageTotalInspection(model, points.aql(), lotSize));
+            node.put("atiAtLtpd", plan.averageTotalInspection(model, points.ltpd(), lotSize));
+        }
+        var notes = node.putArray("notes");
+        lotNotes(outcome, model, lotSize).stream().filter(n -> n.startsWith("Note: ")).forEach(notes::add);
         if (lotSize > 0) {
             if (model instanceof OcModel.Hypergeometric) {
                 node.put("defectivesAtAql", Math.round(risks.aqlPoint() * lotSize));
