@@ -78,11 +78,7 @@ final class Values {
     static final class Steps implements ITypeConverter<Integer> {
         @Override
         public Integer convert(String text) {
-            int steps = wholeNumber(text, 1);
-            if (steps > MAX_STEPS) {
-                throw new TypeConversionException("'" + text + "' is more than " + MAX_STEPS + " steps");
-            }
-            return steps;
+            return atMost(text, MAX_STEPS, "is more than " + MAX_STEPS + " steps");
         }
     }
 
@@ -90,11 +86,7 @@ final class Values {
     static final class Truncation implements ITypeConverter<Integer> {
         @Override
         public Integer convert(String text) {
-            int units = wholeNumber(text, 1);
-            if (units > MAX_TRUNCATION) {
-                throw new TypeConversionException("'" + text + "' is more than " + MAX_TRUNCATION + " units");
-            }
-            return units;
+            return atMost(text, MAX_TRUNCATION, "is more than " + MAX_TRUNCATION + " units");
         }
     }
 
@@ -102,12 +94,17 @@ final class Values {
     static final class SheetRow implements ITypeConverter<Integer> {
         @Override
         public Integer convert(String text) {
-            int row = wholeNumber(text, 1);
-            if (row > 1_048_576) {
-                throw new TypeConversionException("'" + text + "' is past the last row a sheet has, 1048576");
-            }
-            return row;
+            return atMost(text, 1_048_576, "is past the last row a sheet has, 1048576");
         }
+    }
+
+    /** A whole number from 1 to {@code most}; above it, refused with the problem given. */
+    private static int atMost(String text, int most, String problem) {
+        int value = wholeNumber(text, 1);
+        if (value > most) {
+            throw new TypeConversionException("'" + text + "' " + problem);
+        }
+        return value;
     }
 
     private static int wholeNumber(String text, int least) {
