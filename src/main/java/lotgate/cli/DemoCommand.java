@@ -178,6 +178,8 @@ final class DemoCommand implements Runnable {
         out.println("Open " + charts + "/arnwick-af-m8-40.png for the OC, AOQ and ATI curves together, "
                 + reports + "/KC-0907.html for a lot report, " + charts + "/quorrin-compare-asn.png for what single,"
                 + " double and sequential plans cost, and " + reports + "/arnwick-audit.xlsx for the audit.");
+        out.println("To do all this in a browser, on the demo's plans and history: lotgate workbench --store "
+                + folder.resolve("history.sqlite") + " --plans " + plans + " --reports " + reports);
         out.flush();
     }
 

@@ -66,6 +66,8 @@ public final class Main implements Runnable {
         System.setProperty("log4j.provider", "org.apache.logging.log4j.simple.internal.SimpleProvider");
         System.setProperty("log4j2.simplelogLevel", "OFF");
         System.setProperty("log4j2.statusLoggerLevel", "OFF");
+        // Jetty (the workbench) brings SLF4J's API, which the SQLite driver then logs through; no provider is bound.
+        System.setProperty("slf4j.internal.verbosity", "ERROR");
     }
 
     @Option(names = "--debug", scope = CommandLine.ScopeType.INHERIT,

@@ -61,7 +61,7 @@ final class Pages {
                 <p class="form-error" role="alert"></p>
                 <p class="status" id="design-status"></p>
                 </form>
-                <form id="save" class="panel" autocomplete="off" novalidate>
+                <form id="save" class="panel no-print" autocomplete="off" novalidate>
                 <h2>Save the plan</h2>
                 """
                 + field("name", "Plan name", "", "(letters, digits, - and _)")
@@ -72,7 +72,7 @@ final class Pages {
                 <button type="submit" id="save-button">Save to the plans folder</button>
                 <p class="status" id="save-status"></p>
                 </form>
-                <section class="panel"><h2>Saved plans</h2>
+                <section class="panel no-print"><h2>Saved plans</h2>
                 <p class="status">In <span class="mono" id="plans-folder"></span></p>
                 <ul class="saved" id="saved"></ul></section>
                 </section>
@@ -105,7 +105,7 @@ final class Pages {
         String body = """
                 <div class="columns">
                 <section>
-                <form id="lot" class="panel" autocomplete="off" novalidate>
+                <form id="lot" class="panel no-print" autocomplete="off" novalidate>
                 <h2>The lot</h2>
                 <label for="f-plan">Saved plan or plan family</label><select id="f-plan" name="plan"></select>
                 <p class="field-error" data-error-for="plan"></p>
@@ -131,7 +131,7 @@ final class Pages {
                 <div class="panel" id="verdict-panel"><h2>Verdict</h2>
                 <div id="verdict"><p class="status">Choose a plan and a sheet, then sentence the lot.</p></div>
                 </div>
-                <form class="panel" id="bench" autocomplete="off" novalidate>
+                <form class="panel no-print" id="bench" autocomplete="off" novalidate>
                 <h2>At the bench: unit by unit</h2>
                 <p class="status">For the plan chosen above; say each unit as you inspect it.</p>
                 <div class="pair"><div><button type="button" id="unit-good">Conforming</button>

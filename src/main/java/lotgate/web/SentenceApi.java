@@ -11,15 +11,16 @@ import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.concurrent.ConcurrentHashMap;
 import lotgate.files.InputFileException;
 import lotgate.history.StoreException;
 import lotgate.inspection.Columns;
 import lotgate.inspection.LotDetails;
 import lotgate.jobs.JobException;
+import lotgate.jobs.LotReports;
 import lotgate.jobs.SentenceLot;
 import lotgate.jobs.TypedValues;
 import lotgate.report.results.SentenceRendering;
+import lotgate.sentencing.LotDecision;
 
 /**
  * Sentencing answers: a lot from an uploaded sheet, recorded in the history store unless the user says
@@ -29,8 +30,16 @@ final class SentenceApi {
     private static final SecureRandom RANDOM = new SecureRandom();
     private final Workbench.Settings settings;
     private final Uploads uploads;
-    /** Reports written this session, by the random id their links carry. */
-    private final Map<String, Path> reports = new ConcurrentHashMap<>();
+    /** The decisions of this session whose reports may be asked for, by the random id their links carry. */
+    private final Map<String, LotDecision> decisions = java.util.Collections.synchronizedMap(
+            new java.util.LinkedHashMap<>(64, 0.75f, true) {
+                private static final long serialVersionUID = 1L;
+
+                @Override
+                protected boolean removeEldestEntry(Map.Entry<String, LotDecision> eldest) {
+                    return size() > 500;
+                }
+            });
 
     SentenceApi(Workbench.Settings settings, Uploads uploads) {
         this.settings = settings;
@@ -49,14 +58,11 @@ final class SentenceApi {
         try (Uploads.Sheet sheet = uploads.receive(exchange, browserName)) {
             boolean record = "yes".equals(fields.get("record"));
             String id = newId();
-            Files.createDirectories(settings.work());
-            Path xlsx = settings.work().resolve("lot-" + id + ".xlsx");
-            Path html = settings.work().resolve("lot-" + id + ".html");
             SentenceLot.Result result;
             try {
                 result = SentenceLot.run(new SentenceLot.Request(plan, sheet.file(), null, Columns.standard(), 0, 0,
                         details(fields), null, 0.95, record, null, null, "steady", settings.store(),
-                        new SentenceLot.Outputs(null, null, List.of(xlsx, html))));
+                        SentenceLot.Outputs.NONE));
             } catch (JobException e) {
                 return JsonText.refused(400, field(e.field()), shown(e.getMessage(), sheet, browserName));
             } catch (InputFileException e) {
@@ -92,7 +98,8 @@ final class SentenceApi {
                     members.put("record", Map.of("sequence", Long.toString(decided.recording().record().seq()),
                             "chain", decided.recording().record().hash()));
                 }
-                reports.put(id, settings.work().resolve("lot-" + id));
+                // The reports are written when their links are followed: the verdict does not wait for them.
+                decisions.put(id, decided.decision());
                 members.put("reports", List.of(
                         Map.of("label", "Lot report (xlsx)", "href", "/download/lot?id=" + id + "&as=xlsx"),
                         Map.of("label", "Lot report (HTML, printable)", "href", "/download/lot?id=" + id + "&as=html")));
@@ -163,15 +170,19 @@ final class SentenceApi {
         }
     }
 
-    /** A lot report written this session, by id and kind. */
+    /** A lot report of a decision of this session, by id and kind, written into the reports folder when first asked. */
     Reply report(String id, String as) throws IOException {
-        Path base = id == null ? null : reports.get(id);
-        if (base == null || !("xlsx".equals(as) || "html".equals(as))) {
+        LotDecision decision = id == null ? null : decisions.get(id);
+        if (decision == null || !("xlsx".equals(as) || "html".equals(as))) {
             return Reply.text(404, "no such report in this session of the workbench");
         }
-        Path file = base.resolveSibling(base.getFileName() + "." + as);
-        if (!Files.isRegularFile(file)) {
-            return Reply.text(404, "the report was removed from " + settings.work());
+        String lot = decision.lot().lot() == null ? "lot" : decision.lot().lot().replaceAll("[^A-Za-z0-9._-]", "_");
+        Path file = settings.work().resolve("lot-" + lot + "-" + id + "." + as);
+        synchronized (decision) {
+            if (!Files.isRegularFile(file)) {
+                Files.createDirectories(settings.work());
+                LotReports.write(decision, file);
+            }
         }
         if (as.equals("html")) {
             // The report is a page of its own with its style inside: it may use that style, and nothing else.

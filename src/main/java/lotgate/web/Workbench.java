@@ -26,6 +26,8 @@ public final class Workbench implements AutoCloseable {
     static {
         // Jetty logs through SLF4J; lotgate has no log, so keep SLF4J from warning that none is bound.
         System.setProperty("slf4j.internal.verbosity", "ERROR");
+        System.setProperty("log4j.provider", "org.apache.logging.log4j.simple.internal.SimpleProvider");
+        System.setProperty("log4j2.simplelogLevel", "OFF");
     }
 
     private final Server server;

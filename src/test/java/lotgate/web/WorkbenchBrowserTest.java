@@ -67,6 +67,12 @@ class WorkbenchBrowserTest {
             assertTrue(Files.exists(served.plans.resolve("m8-bolts.json")));
             browser.waiting().until(d -> !d.findElements(By.cssSelector("[data-open='m8-bolts']")).isEmpty());
             browser.screenshot(SHOTS.resolve("design.png"));
+            // A tablet held upright: one column, nothing cut at the edge.
+            browser.driver.manage().window().setSize(new org.openqa.selenium.Dimension(768, 1024));
+            browser.screenshot(SHOTS.resolve("design-tablet.png"));
+            Object wide = browser.driver.executeScript("return document.documentElement.scrollWidth;");
+            assertTrue(((Number) wide).intValue() <= 768, "page wider than the tablet: " + wide);
+            browser.driver.manage().window().setSize(new org.openqa.selenium.Dimension(1280, 800));
 
             browser.driver.findElement(By.cssSelector("[data-open='m8-bolts']")).click();
             browser.waiting().until(d -> d.findElement(By.id("design-status")).getText().startsWith("Opened"));
@@ -100,6 +106,14 @@ class WorkbenchBrowserTest {
             browser.driver.findElement(By.id("unit-bad")).click();
             browser.waiting().until(d -> d.findElements(By.cssSelector("#bench-units span")).size() == 2);
             browser.screenshot(SHOTS.resolve("sentence.png"));
+            // Printed, the verdict keeps its evidence and loses the controls.
+            Files.write(SHOTS.resolve("sentence-print.pdf"), java.util.Base64.getDecoder().decode(
+                    browser.driver.print(new org.openqa.selenium.print.PrintOptions()).getContent()));
+
+            // The lot's printable report is written when its link is followed.
+            String report = browser.driver.findElements(By.cssSelector("#reports a")).get(1).getAttribute("href");
+            browser.driver.get(report);
+            browser.waiting().until(d -> d.getPageSource().contains("AF-2611"));
         }
     }
 }
