@@ -9,6 +9,7 @@ import java.util.Map;
 import java.util.regex.Pattern;
 import lotgate.files.InputFileException;
 import lotgate.jobs.Checks;
+import lotgate.jobs.ClassCriteria;
 import lotgate.jobs.DesignSinglePlan;
 import lotgate.jobs.DesignStagedPlan;
 import lotgate.jobs.DesignVariablesPlan;
@@ -225,6 +226,10 @@ final class DesignApi {
         double beta = risk(fields, "beta", 0.10);
         switch (scheme) {
             case "single" -> {
+                String classes = text(fields, "classes");
+                if (classes != null) {
+                    return classed(classes, model, n0, alpha, beta, save);
+                }
                 if (aql == null || ltpd == null) {
                     throw new FieldError(aql == null ? "aql" : "ltpd", "give --aql and --ltpd (or criteria per"
                             + " defect class with --class)");
@@ -276,6 +281,38 @@ final class DesignApi {
             default -> throw new FieldError("scheme", "--scheme " + scheme + ": give single, double, multiple,"
                     + " sequential or variables");
         }
+    }
+
+    /** A plan with criteria per defect class, one line of the classes field each; the chart shows the first class. */
+    private Map<String, Object> classed(String classes, OcModel model, int lotSize, double alpha, double beta,
+            SaveTarget save) {
+        List<DesignSinglePlan.Criteria> criteria = new ArrayList<>();
+        for (String line : classes.split("\\R")) {
+            if (line.isBlank()) {
+                continue;
+            }
+            try {
+                criteria.add(ClassCriteria.parse(line.trim(), alpha, beta));
+            } catch (IllegalArgumentException e) {
+                throw new FieldError("classes", e.getMessage());
+            }
+        }
+        DesignSinglePlan.Result result = DesignSinglePlan.run(new DesignSinglePlan.Request(model, lotSize, criteria,
+                save));
+        if (result.noPlanReason() != null) {
+            throw new NoPlan(result.noPlanReason());
+        }
+        DesignSinglePlan.ClassOutcome first = result.classes().get(0);
+        SinglePlan plan = first.found().plan();
+        List<Map<String, String>> tiles = new ArrayList<>();
+        tiles.add(tile("n", Integer.toString(result.sampleSize())));
+        for (DesignSinglePlan.ClassOutcome outcome : result.classes()) {
+            tiles.add(tile(outcome.defectClass().label(), "n " + outcome.found().plan().n() + ", c "
+                    + outcome.found().plan().c()));
+        }
+        return designed(new Designed(first.defectClass().label() + " n = " + plan.n() + ", c = " + plan.c(),
+                DesignRendering.text(result), tiles, plan, model, lotSize, first.points().aql(), first.points().ltpd(),
+                result.saved()));
     }
 
     private static String label(Plan plan) {

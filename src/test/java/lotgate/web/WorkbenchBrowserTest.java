@@ -66,6 +66,9 @@ class WorkbenchBrowserTest {
             browser.waiting().until(d -> d.findElement(By.id("save-status")).getText().startsWith("Saved"));
             assertTrue(Files.exists(served.plans.resolve("m8-bolts.json")));
             browser.waiting().until(d -> !d.findElements(By.cssSelector("[data-open='m8-bolts']")).isEmpty());
+            new Actions(browser.driver).moveToElement(browser.driver.findElement(By.cssSelector("#curve svg")), -150, 0)
+                    .perform();
+            browser.waiting().until(d -> d.findElement(By.cssSelector("#curve .readout")).getText().contains("P(accept)"));
             browser.screenshot(SHOTS.resolve("design.png"));
             // A tablet held upright: one column, nothing cut at the edge.
             browser.driver.manage().window().setSize(new org.openqa.selenium.Dimension(768, 1024));
