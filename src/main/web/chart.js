@@ -9,7 +9,7 @@
   var COLOURS = ["#1f4e99", "#c0392b", "#2e8b57", "#8e44ad", "#d38400", "#34495e"];
   var DASHES = ["", "8 4", "2 3", "10 3 2 3", "5 2", "1 2"];
   var SHAPES = ["circle", "square", "triangle", "diamond", "circle", "square"];
-  var W = 720, H = 380, LEFT = 70, RIGHT = 18, TOP = 16, BOTTOM = 52;
+  var W = 720, H = 380, RIGHT = 18, TOP = 16, BOTTOM = 52, LEFT = 70;
 
   function svg(tag, attributes, parent) {
     var node = document.createElementNS(NS, tag);
@@ -87,6 +87,7 @@
    * flags: [] (true: drawn hollow-red, out of limits)}], marks: [{x, label}], yTicks: [{v, label}]}.
    */
   LG.chart = function (host, spec) {
+    LEFT = spec.left || 70;
     LG.clear(host);
     host.classList.add("chart");
     var fx = formatter(spec.xFormat), fy = formatter(spec.yFormat);
@@ -222,6 +223,7 @@
 
   /** Bars with an optional cumulative-percent line (Pareto). spec: {categories, values, cumulative, yLabel}. */
   LG.bars = function (host, spec) {
+    LEFT = 70;
     LG.clear(host);
     host.classList.add("chart");
     var n = spec.categories.length;

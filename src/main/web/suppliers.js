@@ -68,12 +68,14 @@
       var severity = reply.severity;
       if (severity && severity.x.length) {
         LG.chart(document.getElementById("severity"), {
-          id: "severity", title: "Inspection severity", xLabel: "lot, in order received", yLabel: "",
+          id: "severity", title: "Inspection severity", xLabel: "lot, in order received", yLabel: "", left: 104,
           xFormat: "number", yMin: -0.3, yMax: severity.ticks.length - 0.7,
           yTicks: severity.ticks.map(function (label, i) { return { v: i, label: label }; }),
           series: [{ name: "", x: severity.x, y: severity.y, labels: severity.labels, xLabels: severity.lots, step: true, markers: true }]
         });
       }
+      var words = document.getElementById("audit-text");
+      if (words) { words.textContent = reply.text || ""; }
       var rejected = document.getElementById("rejected");
       LG.clear(rejected);
       if (reply.rejected && reply.rejected.rows.length) {

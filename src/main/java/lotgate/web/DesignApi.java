@@ -17,11 +17,13 @@ import lotgate.jobs.JobException;
 import lotgate.jobs.PlanCurves;
 import lotgate.jobs.SaveTarget;
 import lotgate.jobs.SavedPlans;
+import lotgate.jobs.ShowPlan;
 import lotgate.jobs.TypedValues;
 import lotgate.plan.DefectClass;
 import lotgate.plan.SavedPlan;
 import lotgate.report.Percent;
 import lotgate.report.results.DesignRendering;
+import lotgate.report.results.PlanFileRendering;
 import lotgate.report.results.StagedDesignRendering;
 import lotgate.report.results.VariablesDesignRendering;
 import lotgate.sampling.CurvePoint;
@@ -99,11 +101,12 @@ final class DesignApi {
     Reply open(String name) {
         return answer(() -> {
             Path file = planFile(settings.plans(), name);
-            SavedPlan saved = SavedPlans.read(file);
+            ShowPlan.Result shown = ShowPlan.run(new ShowPlan.Request(file));
+            SavedPlan saved = shown.plan();
             Plan plan = saved.plan();
             Double aql = saved.designedFor() == null ? null : saved.designedFor().aql();
             Double ltpd = saved.designedFor() == null ? null : saved.designedFor().ltpd();
-            return designed(new Designed(saved.name(), SavedPlans.describe(file, saved), tiles(plan, saved.achieved()),
+            return designed(new Designed(saved.name(), PlanFileRendering.text(shown).replace(file.toString(), file.getFileName().toString()), tiles(plan, saved.achieved()),
                     plan, saved.model(), saved.lotSize(), aql, ltpd, saved));
         });
     }

@@ -174,6 +174,7 @@ final class Pages {
                 <div class="panel"><h2>Inspection severity</h2><div id="severity"></div></div>
                 </div>
                 <div class="panel"><h2>Rejected lots</h2><div id="rejected"></div></div>
+                <div class="panel"><h2>The audit in the command's words</h2><pre class="answer" id="audit-text"></pre></div>
                 """;
         return Html.page(shown.isEmpty() ? "Supplier" : shown, "/suppliers", csrf, body, "chart.js", "suppliers.js");
     }

@@ -119,4 +119,43 @@ class WorkbenchBrowserTest {
             browser.waiting().until(d -> d.getPageSource().contains("AF-2611"));
         }
     }
+
+    @Test
+    void readASuppliersRecordAndFindItsPChart() throws Exception {
+        try (Served served = Served.start(folder); Browser browser = Browser.open(1280, 800)) {
+            // The demo's invented year of lots, imported as the demo does.
+            assertEquals(0, lotgate.cli.Main.run(new java.io.PrintWriter(java.io.Writer.nullWriter()),
+                    new java.io.PrintWriter(java.io.Writer.nullWriter()), "import", "demo-data/lots-2025.csv",
+                    "--store", served.store));
+            // A lot of a supplier whose name is markup: it must come back as text, never as a script.
+            assertEquals(200, served.post("/api/plans", "scheme=single&aql=1%25&ltpd=5%25&name=m8").statusCode());
+            String hostile = "<script>alert(1)</script>";
+            var recorded = served.upload("/api/sentence?plan=m8&file=arnwick-af2611.xlsx&record=yes&lot=X-1&part=P-1"
+                    + "&supplier=" + java.net.URLEncoder.encode(hostile, java.nio.charset.StandardCharsets.UTF_8),
+                    Path.of("demo-data", "arnwick-af2611.xlsx"));
+            assertEquals(200, recorded.statusCode(), recorded.body());
+
+            browser.driver.get(served.uri("/suppliers").toString());
+            browser.waiting().until(d -> !d.findElements(By.cssSelector("#ranking table")).isEmpty());
+            browser.waiting().until(d -> !d.findElements(By.id("store-state")).isEmpty());
+            assertTrue(browser.driver.findElement(By.id("store-state")).getText().startsWith("Chain intact"));
+            assertEquals(1, browser.driver.findElements(By.linkText(hostile)).size());
+            assertEquals(0, browser.driver.findElements(By.cssSelector("#ranking script")).size());
+            browser.screenshot(SHOTS.resolve("suppliers.png"));
+
+            browser.driver.findElement(By.linkText("Arnwick Fasteners (invented)")).click();
+            browser.waiting().until(d -> !d.findElements(By.cssSelector("#p-chart svg[data-chart='p-chart']")).isEmpty());
+            assertEquals("Arnwick Fasteners (invented)", browser.driver.findElement(By.id("supplier-name")).getText());
+            assertTrue(browser.driver.findElements(By.cssSelector("#p-chart svg path[data-series='lot']")).size() == 1);
+            assertEquals(2, browser.driver.findElements(By.cssSelector("#downloads a")).size());
+            browser.screenshot(SHOTS.resolve("supplier.png"));
+
+            browser.driver.get(served.uri("/supplier?name=" + java.net.URLEncoder.encode(hostile,
+                    java.nio.charset.StandardCharsets.UTF_8)).toString());
+            browser.waiting().until(d -> !d.findElement(By.id("supplier-facts")).getText().isEmpty());
+            assertEquals(hostile, browser.driver.findElement(By.id("supplier-name")).getText());
+            assertEquals(0, browser.driver.findElements(By.cssSelector("main script")).size());
+            assertTrue(browser.driver.getTitle().startsWith(hostile));
+        }
+    }
 }
