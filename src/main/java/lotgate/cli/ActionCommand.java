@@ -1,18 +1,11 @@
 package lotgate.cli;
 
 import java.io.PrintWriter;
-import java.time.Instant;
 import java.time.LocalDate;
-import java.time.temporal.ChronoUnit;
-import lotgate.history.HistoryStore;
-import lotgate.history.RecordContent;
-import lotgate.history.StoredRecord;
+import lotgate.jobs.RecordCorrectiveAction;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.ParameterException;
-import picocli.CommandLine.Spec;
 
 /** Records a supplier's corrective action, which lets a discontinued part be inspected again (on tightened). */
 @Command(name = "corrective-action", header = "Record a supplier's corrective action for a part.",
@@ -35,30 +28,16 @@ final class ActionCommand implements Runnable {
     @Mixin
     RecordingStoreOption storeOption;
 
-    @Spec
-    CommandSpec spec;
-
     @Override
     public void run() {
-        for (String[] id : new String[][] {{"--supplier", supplier}, {"--part", part}}) {
-            String problem = lotgate.history.Identifiers.problem(id[0], id[1]);
-            if (problem != null) {
-                throw new ParameterException(spec.commandLine(), problem);
-            }
-        }
-        if (reason.isBlank()) {
-            throw new ParameterException(spec.commandLine(), "--reason must say what the supplier did");
-        }
-        StoredRecord record;
-        String location;
-        try (HistoryStore store = storeOption.openForRecording()) {
-            record = store.append(RecordContent.action(supplier, part, reason.trim(), date == null ? LocalDate.now() : date),
-                    Instant.now().truncatedTo(ChronoUnit.MILLIS));
-            location = store.location();
-        }
-        PrintWriter out = spec.commandLine().getOut();
-        out.println("Corrective action for " + supplier + ", part " + part + " recorded as #" + record.seq() + " in "
-                + location + " (chain hash " + record.hash() + ").");
+        RecordCorrectiveAction.Request request = new RecordCorrectiveAction.Request(supplier, part, reason, date,
+                storeOption.location());
+        RecordCorrectiveAction.check(request);
+        storeOption.prepareForRecording();
+        RecordCorrectiveAction.Result result = RecordCorrectiveAction.run(request);
+        PrintWriter out = storeOption.mixee.commandLine().getOut();
+        out.println("Corrective action for " + result.supplier() + ", part " + result.part() + " recorded as #"
+                + result.record().seq() + " in " + result.store() + " (chain hash " + result.record().hash() + ").");
         out.flush();
     }
 }

@@ -35,6 +35,8 @@ import picocli.CommandLine.Spec;
                 "Quality levels and risks are written as percent (1%%, 0.65%%) or as fractions (0.01).",
                 ""})
 final class DesignCommand implements Runnable {
+    @Spec
+    CommandSpec spec;
 
     @Option(names = "--aql", paramLabel = "LEVEL", converter = Values.Quality.class,
             description = "Acceptable quality level: lots this good should pass (e.g. 1%%).")
@@ -103,9 +105,6 @@ final class DesignCommand implements Runnable {
 
     @Mixin
     OutputFormat format;
-
-    @Spec
-    CommandSpec spec;
 
     @Override
     public void run() {

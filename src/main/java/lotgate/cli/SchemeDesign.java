@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import lotgate.jobs.DesignStagedPlan;
+import lotgate.jobs.TypedValues;
 import lotgate.report.results.StagedDesignRendering;
 import lotgate.sampling.DoublePlanDesigner;
 import lotgate.sampling.MultiplePlan;
@@ -152,26 +153,10 @@ final class SchemeDesign {
 
     /** The --stage options as stages: N:C:R, with C "-" for none and R = C + 1 allowed to be left out last. */
     private static List<Stage> stages(DesignCommand command) {
-        List<Stage> stages = new ArrayList<>();
-        for (int i = 0; i < command.staged.stageSpecs.size(); i++) {
-            String text = command.staged.stageSpecs.get(i);
-            String[] parts = text.split(":");
-            boolean last = i == command.staged.stageSpecs.size() - 1;
-            if (parts.length != 3 && !(last && parts.length == 2)) {
-                throw usage(command, "--stage " + text + ": write N:C:R, such as 50:1:4 (the last stage may be N:C)");
-            }
-            try {
-                int n = Integer.parseInt(parts[0].trim());
-                int c = parts[1].trim().equals("-") ? Stage.NO_ACCEPTANCE : Integer.parseInt(parts[1].trim());
-                int r = parts.length == 3 ? Integer.parseInt(parts[2].trim()) : c + 1;
-                stages.add(new Stage(n, c, r));
-            } catch (NumberFormatException e) {
-                throw usage(command, "--stage " + text + ": N, C and R must be whole numbers (C may be - for none)");
-            } catch (IllegalArgumentException e) {
-                throw usage(command, "--stage " + text + ": " + e.getMessage());
-            }
+        try {
+            return TypedValues.stages(command.staged.stageSpecs);
+        } catch (IllegalArgumentException e) {
+            throw usage(command, e.getMessage());
         }
-        return stages;
     }
-
 }

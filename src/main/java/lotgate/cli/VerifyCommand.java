@@ -1,11 +1,10 @@
 package lotgate.cli;
 
-import com.fasterxml.jackson.databind.node.ObjectNode;
-import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
 import lotgate.history.HistoryStore;
-import lotgate.report.Json;
+import lotgate.jobs.VerifyStore;
+import lotgate.report.results.VerifyRendering;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -26,6 +25,9 @@ import picocli.CommandLine.Spec;
                         + " consistently; only a kept head or a copy of a decision catches that.",
                 ""})
 final class VerifyCommand implements Runnable {
+    @Spec
+    CommandSpec spec;
+
     @Option(names = "--expect", paramLabel = "SEQ:HASH",
             description = "A head kept from an earlier verify or a lot's record (e.g. 12:3f9a...); the store must"
                     + " still hold that hash at that place (exit code 7 if not). Repeatable.")
@@ -36,9 +38,6 @@ final class VerifyCommand implements Runnable {
 
     @Mixin
     OutputFormat format;
-
-    @Spec
-    CommandSpec spec;
 
     @Override
     public void run() {
@@ -53,45 +52,13 @@ final class VerifyCommand implements Runnable {
                 throw new ParameterException(spec.commandLine(), "--expect " + e.getMessage());
             }
         }
-        HistoryStore.Verification verification;
-        String location;
-        try (HistoryStore store = storeOption.open()) {
-            verification = store.verify(kept);
-            location = store.location();
+        VerifyStore.Result result = VerifyStore.run(new VerifyStore.Request(storeOption.location(), kept));
+        boolean json = format.kind == OutputFormat.Kind.json;
+        if (json || result.intact()) {
+            format.print(result, VerifyRendering::text, VerifyRendering::json, VerifyRendering::text);
         }
-        PrintWriter out = spec.commandLine().getOut();
-        if (format.kind == OutputFormat.Kind.json) {
-            ObjectNode node = Json.object();
-            node.put("store", location);
-            node.put("storeId", verification.storeId());
-            node.put("intact", verification.intact());
-            node.put("records", verification.records());
-            if (verification.head() != null) {
-                node.put("headSeq", verification.head().seq());
-                node.put("headHash", verification.head().hash());
-                node.put("head", verification.head().toString());
-            }
-            var checked = node.putArray("expected");
-            kept.forEach(head -> checked.add(head.toString()));
-            node.put("problem", verification.problem());
-            out.println(Json.text(node));
-            out.flush();
-            if (!verification.intact()) {
-                throw new Main.Failure(ExitCode.STORE, null);
-            }
-            return;
+        if (!result.intact()) {
+            throw new Main.Failure(ExitCode.STORE, json ? null : VerifyRendering.damage(result));
         }
-        if (!verification.intact()) {
-            throw new Main.Failure(ExitCode.STORE, "history store " + location + " is damaged: "
-                    + verification.problem() + " (" + verification.records() + " records before it are intact)");
-        }
-        out.println("History store " + location + ": " + verification.records() + " records, chain intact.");
-        out.println("  store id: " + verification.storeId());
-        out.println("  head:     " + verification.head() + "   (keep it; 'lotgate verify --expect "
-                + verification.head() + "' proves later that the store still holds it)");
-        for (HistoryStore.Head head : kept) {
-            out.println("  still holds " + head);
-        }
-        out.flush();
     }
 }

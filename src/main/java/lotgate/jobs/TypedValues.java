@@ -1,6 +1,9 @@
 package lotgate.jobs;
 
 import java.math.BigDecimal;
+import java.util.ArrayList;
+import java.util.List;
+import lotgate.sampling.Stage;
 
 /**
  * The values a quality engineer types, read the same way by every face (command options, workbench
@@ -68,5 +71,34 @@ public final class TypedValues {
             throw new IllegalArgumentException("'" + text + "' is not a whole number from " + least + " to "
                     + Integer.MAX_VALUE);
         }
+    }
+
+    /**
+     * The stages of a double or multiple plan, each written N:C:R (C may be - where the stage cannot accept; the
+     * last may be N:C, its R then C + 1); the message names the stage as the command line writes it.
+     */
+    public static List<Stage> stages(List<String> specs) {
+        List<Stage> stages = new ArrayList<>();
+        for (int i = 0; i < specs.size(); i++) {
+            String spec = specs.get(i);
+            String[] parts = spec.split(":");
+            boolean last = i == specs.size() - 1;
+            if (parts.length != 3 && !(last && parts.length == 2)) {
+                throw new IllegalArgumentException("--stage " + spec + ": write N:C:R, such as 50:1:4 (the last stage"
+                        + " may be N:C)");
+            }
+            try {
+                int n = Integer.parseInt(parts[0].trim());
+                int c = parts[1].trim().equals("-") ? Stage.NO_ACCEPTANCE : Integer.parseInt(parts[1].trim());
+                int r = parts.length == 3 ? Integer.parseInt(parts[2].trim()) : c + 1;
+                stages.add(new Stage(n, c, r));
+            } catch (NumberFormatException e) {
+                throw new IllegalArgumentException("--stage " + spec + ": N, C and R must be whole numbers (C may be"
+                        + " - for none)");
+            } catch (IllegalArgumentException e) {
+                throw new IllegalArgumentException("--stage " + spec + ": " + e.getMessage());
+            }
+        }
+        return stages;
     }
 }

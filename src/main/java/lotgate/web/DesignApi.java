@@ -367,32 +367,11 @@ final class DesignApi {
 
     /** The stages of a multiple or given double plan, written N:C:R and separated by spaces. */
     private static List<Stage> stages(String text) {
-        List<Stage> stages = new ArrayList<>();
-        if (text == null) {
-            return stages;
+        try {
+            return text == null ? new ArrayList<>() : TypedValues.stages(List.of(text.trim().split("[\\s,;]+")));
+        } catch (IllegalArgumentException e) {
+            throw new FieldError("stages", e.getMessage());
         }
-        String[] specs = text.trim().split("[\\s,;]+");
-        for (int i = 0; i < specs.length; i++) {
-            String spec = specs[i];
-            String[] parts = spec.split(":");
-            boolean last = i == specs.length - 1;
-            if (parts.length != 3 && !(last && parts.length == 2)) {
-                throw new FieldError("stages", "--stage " + spec + ": write N:C:R, such as 50:1:4 (the last stage may"
-                        + " be N:C)");
-            }
-            try {
-                int n = Integer.parseInt(parts[0].trim());
-                int c = parts[1].trim().equals("-") ? Stage.NO_ACCEPTANCE : Integer.parseInt(parts[1].trim());
-                int r = parts.length == 3 ? Integer.parseInt(parts[2].trim()) : c + 1;
-                stages.add(new Stage(n, c, r));
-            } catch (NumberFormatException e) {
-                throw new FieldError("stages", "--stage " + spec + ": N, C and R must be whole numbers (C may be -"
-                        + " for none)");
-            } catch (IllegalArgumentException e) {
-                throw new FieldError("stages", "--stage " + spec + ": " + e.getMessage());
-            }
-        }
-        return stages;
     }
 
     private static String text(Map<String, String> fields, String name) {
