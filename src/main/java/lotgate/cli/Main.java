@@ -53,6 +53,7 @@ public final class Main implements Runnable {
         COMMANDS.put("supplier", SupplierCommand.class);
         COMMANDS.put("suppliers", SuppliersCommand.class);
         COMMANDS.put("verify", VerifyCommand.class);
+        COMMANDS.put("reissue", ReissueCommand.class);
         COMMANDS.put("corrective-action", ActionCommand.class);
         COMMANDS.put("import", ImportCommand.class);
         COMMANDS.put("family", FamilyCommand.class);

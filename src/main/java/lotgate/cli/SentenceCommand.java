@@ -149,12 +149,13 @@ final class SentenceCommand implements Runnable {
     @Override
     public void run() {
         int[] range = rowRange();
+        SentenceLot.Request request = new SentenceLot.Request(planFile, sheetFile, sheet, columns(), range[0],
+                range[1], givenDetails(), lotFile, confidence, !noRecord, supersedes, reason, production,
+                storeOption.location(), new SentenceLot.Outputs(record, chart, reports));
         if (!noRecord) {
             storeOption.prepareForRecording();
         }
-        SentenceLot.Result result = SentenceLot.run(new SentenceLot.Request(planFile, sheetFile, sheet, columns(),
-                range[0], range[1], givenDetails(), lotFile, confidence, !noRecord, supersedes, reason, production,
-                storeOption.location(), new SentenceLot.Outputs(record, chart, reports)));
+        SentenceLot.Result result = SentenceLot.run(request);
         format.print(result, SentenceRendering::text, SentenceRendering::json, SentenceRendering::csv);
         if (result instanceof SentenceLot.Undecided) {
             throw new Main.Failure(ExitCode.NOT_DECIDED, null);

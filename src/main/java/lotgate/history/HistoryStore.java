@@ -325,6 +325,13 @@ public final class HistoryStore implements AutoCloseable {
         }
     }
 
+    /** The work before the commit failed: the transaction is rolled back and its own exception passed on. */
+    private static final class BeforeCommitFailed extends StoreException {
+        BeforeCommitFailed(RuntimeException cause) {
+            super("the work before the commit failed", cause);
+        }
+    }
+
     /**
      * Appends a record in one transaction, chained to the last one.
      *
@@ -335,11 +342,26 @@ public final class HistoryStore implements AutoCloseable {
     }
 
     /**
+     * Appends a record and, before committing it, hands its place in the chain to {@code beforeCommit}
+     * (which renders and stages the outputs that show it); if that fails, nothing is recorded.
+     */
+    public StoredRecord append(ObjectNode content, Instant recordedAt,
+            java.util.function.Consumer<StoredRecord> beforeCommit) {
+        return appendAll(List.of(content), recordedAt, stored -> beforeCommit.accept(stored.get(0))).get(0);
+    }
+
+    /**
      * Appends several records in one transaction: all of them, or none. Refuses, recording nothing, when
      * the chain's head no longer matches its last record (the store was damaged: see {@link #verify}), when
      * an id holds a control character, and when a lot is already recorded and not superseded.
      */
     public List<StoredRecord> appendAll(List<ObjectNode> contents, Instant recordedAt) {
+        return appendAll(contents, recordedAt, stored -> { });
+    }
+
+    /** Appends several records in one transaction, calling {@code beforeCommit} with them before the commit. */
+    public List<StoredRecord> appendAll(List<ObjectNode> contents, Instant recordedAt,
+            java.util.function.Consumer<List<StoredRecord>> beforeCommit) {
         for (ObjectNode content : contents) {
             String problem = identifierProblem(content);
             if (problem != null) {
@@ -348,7 +370,7 @@ public final class HistoryStore implements AutoCloseable {
             }
         }
         List<StoredRecord> stored = new ArrayList<>();
-        append(contents, recordedAt, stored::add);
+        append(contents, recordedAt, stored::add, () -> beforeCommit.accept(stored));
         return stored;
     }
 
@@ -359,7 +381,7 @@ public final class HistoryStore implements AutoCloseable {
      * @return how many records were appended
      */
     public long appendEach(Iterable<ObjectNode> contents, Instant recordedAt) {
-        return append(contents, recordedAt, stored -> { });
+        return append(contents, recordedAt, stored -> { }, () -> { });
     }
 
     private static String identifierProblem(ObjectNode content) {
@@ -373,7 +395,7 @@ public final class HistoryStore implements AutoCloseable {
     }
 
     private long append(Iterable<ObjectNode> contents, Instant recordedAt,
-            java.util.function.Consumer<StoredRecord> each) {
+            java.util.function.Consumer<StoredRecord> each, Runnable beforeCommit) {
         try {
             return transaction("record the lots", () -> {
                 Head head = lockedHead();
@@ -423,8 +445,15 @@ public final class HistoryStore implements AutoCloseable {
                     update.setString(2, previous);
                     update.executeUpdate();
                 }
+                try {
+                    beforeCommit.run();
+                } catch (RuntimeException e) {
+                    throw new BeforeCommitFailed(e);
+                }
                 return last - first;
             });
+        } catch (BeforeCommitFailed failed) {
+            throw (RuntimeException) failed.getCause();
         } catch (KeyTaken taken) {
             long holder = holderOf(taken.key);
             throw new StoreException.DuplicateLot("lot " + Migrations.text(taken.content, "lot") + " of "
@@ -608,6 +637,26 @@ public final class HistoryStore implements AutoCloseable {
             return 0;
         }
         return holderOf(lotKey(supplier, part, lot));
+    }
+
+    /** The current records (not superseded) of a lot id, whatever the supplier and part, in record order. */
+    public List<Long> currentRecords(String lot) {
+        if (version < 3) {
+            return List.of();
+        }
+        return read("find the lot's records", () -> {
+            List<Long> seqs = new ArrayList<>();
+            try (PreparedStatement query = connection.prepareStatement("SELECT seq FROM lot_record WHERE lot = ?"
+                    + " AND lot_key IS NOT NULL ORDER BY seq")) {
+                query.setString(1, lot);
+                try (ResultSet result = query.executeQuery()) {
+                    while (result.next()) {
+                        seqs.add(result.getLong(1));
+                    }
+                }
+            }
+            return seqs;
+        });
     }
 
     /** The full content of one record. */

@@ -13,7 +13,7 @@ import java.util.regex.Pattern;
  * for existence.
  */
 public final class StoreLocation {
-    private static final Pattern PASSWORD_PARAMETER = Pattern.compile("(?i)([?&;]password=)([^&;]*)");
+    private static final Pattern PASSWORD_PARAMETER = Pattern.compile("(?i)([?&;]password=)([^&;\\s]*)");
     private static final Pattern USER_INFO = Pattern.compile("^(jdbc:[a-z]+://[^/@:]*:)([^/@]*)(@)");
     private static final String MASK = "***";
 

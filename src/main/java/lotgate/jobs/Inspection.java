@@ -125,6 +125,11 @@ final class Inspection implements AutoCloseable {
                 + " supersede its latest correction instead");
     }
 
+    /** The store's location as shown to people. */
+    String storeLocation() {
+        return store.location();
+    }
+
     SavedPlan plan() {
         return plan;
     }
@@ -143,14 +148,15 @@ final class Inspection implements AutoCloseable {
     }
 
     /** Appends the lot's record and says what it was inspected under and what comes next. */
-    SentenceLot.Recording record(LotDecision decision, String production, String reason) {
+    SentenceLot.Recording record(LotDecision decision, String production, String reason,
+            java.util.function.Consumer<StoredRecord> beforeCommit) {
         int nonconforming = decision.sample().all().nonconformingUnits(DefectClass.ANY);
         RecordContent.Lot content = new RecordContent.Lot(lot.supplier(), lot.part(), decision.lot().lot(),
                 decision.lot().lotSize(), decision.lot().received(), decision.lot().inspector(),
                 decision.sentence().verdict(), decision.sample().units(), nonconforming, decision.sample().defectTypes(),
                 severity.label(), production, supersedes, reason);
         StoredRecord stored = store.append(RecordContent.lot(content, DecisionJson.of(decision), "sentence"),
-                Instant.now().truncatedTo(ChronoUnit.MILLIS));
+                Instant.now().truncatedTo(ChronoUnit.MILLIS), beforeCommit);
         SupplierHistory after = new SupplierHistory(store.rows(lot.supplier(), lot.part()), rules);
         SeverityTracker.Switch caused = null;
         for (SupplierHistory.Entry entry : after.entries()) {

@@ -29,6 +29,7 @@ import lotgate.plan.PlanFormat;
 import lotgate.plan.SavedPlan;
 import lotgate.report.ChartFile;
 import lotgate.report.DecisionJson;
+import lotgate.report.HistoryPlace;
 import lotgate.report.Json;
 import lotgate.report.LotReport;
 import lotgate.report.SamplingChart;
@@ -164,6 +165,23 @@ public final class SentenceLot {
         }
     }
 
+    /**
+     * Applies a plan to a sheet again for a lot already decided (regenerating a recorded lot's outputs):
+     * the decision as it comes out now, or a refusal when the plan no longer decides the lot.
+     */
+    static LotDecision decideAgain(Request request, SavedPlan plan, LotDetails lot) {
+        SheetSource source = SheetSource.open(request.sheetFile());
+        List<String> notices = new ArrayList<>();
+        Judged judged = plan.measurement() != null
+                ? measured(request, plan, request.planFile(), source, lot, notices)
+                : counted(request, plan, request.planFile(), source, lot, notices);
+        if (judged instanceof DecidedLot decided) {
+            return decided.decision();
+        }
+        throw new JobException(JobException.Kind.CONFLICT, "sheet", request.sheetFile() + " no longer decides lot "
+                + lot.lot() + " under plan " + plan.name());
+    }
+
     /** What applying the plan to the sheet gave, before anything is recorded or written. */
     private sealed interface Judged {
     }
@@ -176,24 +194,46 @@ public final class SentenceLot {
     private static Decided finish(Request request, LotDecision decision, Inspection inspection) {
         Outputs outputs = request.outputs();
         try (StagedFiles staged = new StagedFiles()) {
-            for (Path report : outputs.reports()) {
-                staged.stage(report, file -> LotReport.write(decision, file));
-            }
-            if (outputs.record() != null) {
-                String record = Json.text(DecisionJson.of(decision)) + "\n";
-                staged.stage(outputs.record(), file -> AtomicWrite.writeString(file, record));
-            }
-            if (outputs.chart() != null) {
-                staged.stage(outputs.chart(), file -> ChartFile.write(SamplingChart.of(decision), file, 900, 560));
-            }
             Recording recording = null;
-            if (inspection != null) {
-                recording = request.record() ? inspection.record(decision, request.production(), request.reason())
-                        : inspection.unrecorded();
+            if (inspection != null && request.record()) {
+                // The outputs show the record's place in the chain: they are rendered and staged inside the
+                // record's transaction, which commits only once they all are.
+                recording = inspection.record(decision, request.production(), request.reason(), stored -> stage(staged,
+                        outputs, decision, new HistoryPlace(stored.seq(), stored.hash(), inspection.storeLocation())));
+            } else {
+                stage(staged, outputs, decision, null);
+                recording = inspection == null ? null : inspection.unrecorded();
             }
             staged.publish();
             return new Decided(decision, recording, outputs);
         }
+    }
+
+    /** Renders every output of a decision under a staged name, showing its place in the history (or null). */
+    static void stage(StagedFiles staged, Outputs outputs, LotDecision decision, HistoryPlace place) {
+        for (Path report : outputs.reports()) {
+            staged.stage(report, file -> LotReport.write(decision, place, file));
+        }
+        if (outputs.record() != null) {
+            String record = Json.text(decisionRecord(decision, place)) + "\n";
+            staged.stage(outputs.record(), file -> AtomicWrite.writeString(file, record));
+        }
+        if (outputs.chart() != null) {
+            staged.stage(outputs.chart(), file -> ChartFile.write(SamplingChart.of(decision), file, 900, 560));
+        }
+    }
+
+    /** The decision record as saved to a file: the decision, and where the store holds it. */
+    static com.fasterxml.jackson.databind.node.ObjectNode decisionRecord(LotDecision decision, HistoryPlace place) {
+        com.fasterxml.jackson.databind.node.ObjectNode node = DecisionJson.of(decision);
+        if (place != null) {
+            com.fasterxml.jackson.databind.node.ObjectNode history = node.putObject("historyRecord");
+            history.put("seq", place.seq());
+            history.put("chainHash", place.hash());
+            history.put("store", place.store());
+            history.put("expect", place.expect());
+        }
+        return node;
     }
 
     /** A lot judged by counts: a single plan, a plan in stages or a sequential plan. */
@@ -313,7 +353,7 @@ public final class SentenceLot {
         };
     }
 
-    private static void checkOutputs(Outputs outputs) {
+    static void checkOutputs(Outputs outputs) {
         Checks.chartName("chart", outputs.chart());
         Path record = outputs.record();
         if (record != null && !record.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".json")) {

@@ -22,11 +22,16 @@ public final class LotReport {
     }
 
     public static void write(LotDecision decision, Path file) {
+        write(decision, null, file);
+    }
+
+    /** Writes the report of a recorded lot, which shows its place in the history store (null: not recorded). */
+    public static void write(LotDecision decision, HistoryPlace place, Path file) {
         String name = file.getFileName().toString().toLowerCase(Locale.ROOT);
         if (name.endsWith(".xlsx")) {
-            LotReportXlsx.write(decision, file);
+            LotReportXlsx.write(decision, place, file);
         } else if (name.endsWith(".html") || name.endsWith(".htm")) {
-            LotReportHtml.write(decision, file);
+            LotReportHtml.write(decision, place, file);
         } else {
             throw new IllegalArgumentException("a lot report is .xlsx or .html: " + file);
         }

@@ -25,8 +25,8 @@ final class LotReportHtml {
     private LotReportHtml() {
     }
 
-    static void write(LotDecision decision, Path file) {
-        AtomicWrite.writeString(file, page(decision));
+    static void write(LotDecision decision, HistoryPlace place, Path file) {
+        AtomicWrite.writeString(file, page(decision, place));
     }
 
     static String escape(String text) {
@@ -48,6 +48,10 @@ final class LotReportHtml {
     }
 
     static String page(LotDecision decision) {
+        return page(decision, null);
+    }
+
+    static String page(LotDecision decision, HistoryPlace place) {
         LotDetails lot = decision.lot();
         InspectionSample sample = decision.sample();
         boolean accepted = decision.sentence().accepted();
@@ -91,7 +95,9 @@ final class LotReportHtml {
         facts(html, "Received", lot.received() == null ? null : lot.received().toString(), "Inspector",
                 lot.inspector());
         html.append("</table>\n<p class=\"small\">Plan fingerprint ").append(escape(decision.plan().fingerprint()))
-                .append("<br>Sheet SHA-256 ").append(escape(decision.sheetSha256())).append("</p>\n");
+                .append("<br>Sheet SHA-256 ").append(escape(decision.sheetSha256()))
+                .append(place == null ? "" : "<br>History record " + escape(place.text()))
+                .append("</p>\n");
         if (decision.measured() != null) {
             html.append("<table><tr><th>Criterion</th><th>Value</th><th>Held against</th><th>Outcome</th></tr>\n");
             for (LotReport.Criterion criterion : LotReport.criteria(decision)) {

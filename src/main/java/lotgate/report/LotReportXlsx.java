@@ -49,6 +49,9 @@ final class LotReportXlsx {
     private final String title;
     private final String subject;
     private final String generated;
+    private final HistoryPlace place;
+    /** The most characters a spreadsheet cell holds. */
+    static final int CELL_LIMIT = 32_767;
     private final CellStyle bold;
     private final CellStyle big;
     private final CellStyle percent;
@@ -62,8 +65,9 @@ final class LotReportXlsx {
     private final CellStyle numberHeading;
     private final CellStyle text;
 
-    private LotReportXlsx(LotDecision decision) {
+    private LotReportXlsx(LotDecision decision, HistoryPlace place) {
         this.decision = decision;
+        this.place = place;
         WorkbookLayout.baseFont(base);
         title = "Lot report: " + decision.lot().lot() + ", " + (decision.sentence().accepted() ? "accepted"
                 : "rejected");
@@ -96,8 +100,8 @@ final class LotReportXlsx {
         text = WorkbookLayout.text(base);
     }
 
-    static void write(LotDecision decision, Path file) {
-        LotReportXlsx report = new LotReportXlsx(decision);
+    static void write(LotDecision decision, HistoryPlace place, Path file) {
+        LotReportXlsx report = new LotReportXlsx(decision, place);
         try {
             report.summary();
             report.sample();
@@ -124,7 +128,7 @@ final class LotReportXlsx {
         if (value instanceof Number number) {
             cell.setCellValue(number.doubleValue());
         } else if (value != null) {
-            String string = value.toString();
+            String string = fitted(value.toString());
             cell.setCellValue(string);
             if (LotReport.looksLikeFormula(string)) {
                 cell.setCellStyle(quoted);
@@ -134,6 +138,19 @@ final class LotReportXlsx {
         if (style != null) {
             cell.setCellStyle(style);
         }
+    }
+
+    /** The text cut to what a cell holds, with a visible mark saying how long it was. */
+    static String fitted(String text) {
+        if (text.length() <= CELL_LIMIT) {
+            return text;
+        }
+        String mark = " [... cut here: " + text.length() + " characters in all]";
+        int keep = CELL_LIMIT - mark.length();
+        if (Character.isHighSurrogate(text.charAt(keep - 1))) {
+            keep--;
+        }
+        return text.substring(0, keep) + mark;
     }
 
     private void pair(Sheet sheet, String key, Object value) {
@@ -200,6 +217,10 @@ final class LotReportXlsx {
         pair(sheet, "Inspection sheet", LotReportHtml.sheetLine(sample));
         pair(sheet, "Sheet SHA-256", decision.sheetSha256());
         pair(sheet, "Decided", decision.decidedAt().toString() + " by lotgate " + decision.toolVersion());
+        if (place != null) {
+            pair(sheet, "History record", "#" + place.seq() + " in " + place.store());
+            pair(sheet, "Chain hash", place.hash());
+        }
         row++;
         if (decision.measured() != null) {
             Row head = next(sheet);

@@ -92,7 +92,7 @@ public final class SupplierRanking {
                     row.createCell(0).setCellValue(r++);
                     row.getCell(0).setCellStyle(count);
                     var nameCell = row.createCell(1);
-                    nameCell.setCellValue(supplier.supplier());
+                    nameCell.setCellValue(LotReportXlsx.fitted(supplier.supplier()));
                     nameCell.setCellStyle(LotReport.looksLikeFormula(supplier.supplier()) ? quoted : text);
                     widths.note(1, supplier.supplier(), false);
                     row.createCell(2).setCellValue(supplier.lots());

@@ -434,7 +434,7 @@ public final class SupplierReport {
                 cell.setCellValue(number.doubleValue());
             } else {
                 String text = value.toString();
-                cell.setCellValue(text);
+                cell.setCellValue(LotReportXlsx.fitted(text));
                 if (LotReport.looksLikeFormula(text)) {
                     cell.setCellStyle(quoted);
                     return;

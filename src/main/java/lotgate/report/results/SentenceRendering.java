@@ -73,6 +73,7 @@ public final class SentenceRendering {
         if (recording.recorded()) {
             node.put("seq", recording.record().seq());
             node.put("recordHash", recording.record().hash());
+            node.put("expect", recording.record().seq() + ":" + recording.record().hash());
             node.put("severityNext", recording.next().label());
             if (recording.caused() != null) {
                 node.put("switch", recording.caused().from().label() + " to " + recording.caused().to().label());
@@ -94,6 +95,8 @@ public final class SentenceRendering {
         }
         out.println("  recorded as #" + recording.record().seq() + " in " + recording.store()
                 + (recording.supersedes() > 0 ? ", superseding #" + recording.supersedes() : ""));
+        out.println("  chain hash " + recording.record().hash() + " (keep it: 'lotgate verify --expect "
+                + recording.record().seq() + ":" + recording.record().hash() + "' proves the store still holds it)");
         if (recording.caused() != null) {
             out.println("  SWITCH: " + recording.caused().from().label() + " to " + recording.caused().to().label()
                     + " inspection for the next lot: " + recording.caused().reason());
