@@ -11,6 +11,16 @@ public final class OutputFileException extends RuntimeException {
         this.file = file;
     }
 
+    private OutputFileException(String message, Path file, Throwable cause) {
+        super(message, cause);
+        this.file = file;
+    }
+
+    /** The same failure with a note on what was done before it and how to finish (e.g. a record committed). */
+    public OutputFileException withNote(String note) {
+        return new OutputFileException(getMessage() + "; " + note, file, getCause());
+    }
+
     public Path file() {
         return file;
     }

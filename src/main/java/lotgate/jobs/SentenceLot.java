@@ -204,7 +204,15 @@ public final class SentenceLot {
                 stage(staged, outputs, decision, null);
                 recording = inspection == null ? null : inspection.unrecorded();
             }
-            staged.publish();
+            try {
+                staged.publish();
+            } catch (lotgate.files.OutputFileException e) {
+                if (recording == null || !recording.recorded()) {
+                    throw e;
+                }
+                throw e.withNote("the lot was recorded as #" + recording.record().seq() + ": once the cause is"
+                        + " removed, write its outputs with 'lotgate reissue " + recording.record().seq() + "'");
+            }
             return new Decided(decision, recording, outputs);
         }
     }

@@ -43,7 +43,7 @@ class MainTest {
         Cli.Result result = Cli.run("desing", "--aql", "1%");
         assertEquals(2, result.exitCode());
         assertEquals("lotgate: unknown command 'desing'; the commands are design, curve, compare, show, sentence,"
-                + " inspect, history, supplier, suppliers, verify, corrective-action, import, family, demo, workbench,"
+                + " inspect, history, supplier, suppliers, verify, reissue, corrective-action, import, family, demo, workbench,"
                 + " help"
                 + " (see 'lotgate --help')\n", result.err());
     }

@@ -357,4 +357,31 @@ class StoreCommandsTest {
         assertTrue(Files.exists(running), "a file of a run still going is left alone");
         assertTrue(Files.exists(reports.resolve("L10.html")));
     }
+
+    @ParameterizedTest
+    @MethodSource("kinds")
+    void outputsThatCannotBeMovedIntoPlaceAfterTheCommitAreReissued(String kind) throws Exception {
+        String store = Stores.fresh(kind, folder);
+        assertEquals(0, sentence(store, "P0", 0, "--create-store").exitCode());
+        Path html = folder.resolve("P1.html");
+        Path record = folder.resolve("P1.json");
+        Files.createDirectories(html).resolve("in the way").toFile().createNewFile();
+        Cli.Result stopped = sentence(store, "P1", 0, "--report", html.toString(), "--record",
+                record.toString());
+        assertEquals(ExitCode.CANNOT_WRITE, stopped.exitCode());
+        assertTrue(stopped.err().startsWith("lotgate: cannot write " + html + ": "), stopped.err());
+        assertTrue(stopped.err().endsWith("; the lot was recorded as #2: once the cause is removed, write its outputs"
+                + " with 'lotgate reissue 2'" + System.lineSeparator()), stopped.err());
+        try (Stream<Path> files = Files.list(folder)) {
+            assertEquals(0, files.filter(f -> f.getFileName().toString().startsWith(".lotgate-unfinished-")).count(),
+                    "no staged file is left");
+        }
+        Files.delete(html.resolve("in the way"));
+        Files.delete(html);
+        Cli.Result reissued = Cli.run("reissue", "2", "--store", store, "--report", html.toString(), "--record",
+                record.toString());
+        assertEquals(0, reissued.exitCode(), reissued.err());
+        assertEquals(2, JSON.readTree(record.toFile()).get("historyRecord").get("seq").asLong());
+        assertTrue(Files.readString(html).contains("History record #2"));
+    }
 }
