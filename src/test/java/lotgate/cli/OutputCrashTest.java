@@ -80,7 +80,8 @@ class OutputCrashTest {
                         seen++;
                     }
                 }
-                process.destroyForcibly();
+            } finally {
+                process.destroyForcibly(); // SIGKILL on Linux; also when an assertion above failed
             }
             process.waitFor();
             Cli.Result verified = Cli.run("verify", "--store", store);
