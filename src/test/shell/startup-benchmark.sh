@@ -6,6 +6,7 @@
 #   bash src/test/shell/startup-benchmark.sh            # after 'mvn -DskipTests package'
 #   LOTGATE='java -jar target/lotgate.jar' bash src/test/shell/startup-benchmark.sh
 #   ROUNDS=5 RUNS=3 ...                                  # rounds x runs per command (default 5 x 3)
+#   BEFORE='java -jar old/lotgate.jar' ...               # an older build timed in the same rounds
 #
 # Targets (issue 11): --version at most 2x the bare JVM, design at most 3x, sentence of a csv lot and
 # supplier on the demo store at most 5x.
@@ -36,13 +37,27 @@ jar --create --file "$work/hello.jar" --main-class Hello -C "$work/hello/classes
 $lotgate import demo-data/lots-2025.csv --store "$work/history.sqlite" --create-store > /dev/null
 
 names=(bare version design sentence supplier)
-commands=(
-  "java -jar $work/hello.jar"
-  "$lotgate --version"
-  "$lotgate design --aql 1% --ltpd 5%"
-  "$lotgate sentence plans/mirelle-ms-22.json demo-data/mirelle-ms1130.csv --no-record"
-  "$lotgate supplier 'Arnwick Fasteners (invented)' --store $work/history.sqlite"
+commands=("java -jar $work/hello.jar")
+cases=(
+  "--version"
+  "design --aql 1% --ltpd 5%"
+  "sentence plans/mirelle-ms-22.json demo-data/mirelle-ms1130.csv --no-record"
+  "supplier 'Arnwick Fasteners (invented)' --store $work/history.sqlite"
 )
+for c in "${cases[@]}"; do
+  commands+=("$lotgate $c")
+done
+# BEFORE='java -jar old/lotgate.jar' times an older build in the same rounds, for a before/after table.
+if [ -n "${BEFORE:-}" ]; then
+  # The older build gets a store of its own making (its schema may be older).
+  mkdir "$work/before"
+  $BEFORE import demo-data/lots-2025.csv --store "$work/before/history.sqlite" --create-store > /dev/null 2>&1 \
+      || $BEFORE import demo-data/lots-2025.csv --store "$work/before/history.sqlite" > /dev/null
+  names+=(before-version before-design before-sentence before-supplier)
+  for c in "${cases[@]}"; do
+    commands+=("$BEFORE ${c//$work\/history.sqlite/$work/before/history.sqlite}")
+  done
+fi
 for c in "${commands[@]}"; do
   bash -c "$c" > /dev/null || { echo "startup-benchmark: failed: $c" >&2; exit 1; }
 done

@@ -63,33 +63,36 @@ final class ImportCommand implements Runnable {
         List<Integer> sheetRows = new ArrayList<>();
         Map<List<String>, Integer> seen = new HashMap<>();
         Map<String, Integer> columns = new HashMap<>();
-        source.read(sheet, (row, cells) -> {
-            if (columns.isEmpty()) {
-                for (Cell cell : cells) {
-                    String name = cell.text().trim().toLowerCase(Locale.ROOT);
-                    if (REQUIRED.contains(name) || OPTIONAL.contains(name)) {
-                        columns.put(name, cell.column());
+        try (Progress reading = Progress.onTerminal("import: reading rows", 0, true)) {
+            source.read(sheet, (row, cells) -> {
+                reading.at(row);
+                if (columns.isEmpty()) {
+                    for (Cell cell : cells) {
+                        String name = cell.text().trim().toLowerCase(Locale.ROOT);
+                        if (REQUIRED.contains(name) || OPTIONAL.contains(name)) {
+                            columns.put(name, cell.column());
+                        }
                     }
-                }
-                for (String name : REQUIRED) {
-                    if (!columns.containsKey(name)) {
-                        throw new SheetException(file, "no '" + name + "' column in the header, "
-                                + source.whereRow(sheetName, row) + "; a list of past lots needs "
-                                + String.join(", ", REQUIRED));
+                    for (String name : REQUIRED) {
+                        if (!columns.containsKey(name)) {
+                            throw new SheetException(file, "no '" + name + "' column in the header, "
+                                    + source.whereRow(sheetName, row) + "; a list of past lots needs "
+                                    + String.join(", ", REQUIRED));
+                        }
                     }
+                    return;
                 }
-                return;
-            }
-            RecordContent.Lot lot = lot(source, sheetName, row, cells, columns);
-            Integer first = seen.putIfAbsent(List.of(lot.supplier(), lot.part(), lot.lot()), row);
-            if (first != null) {
-                throw new SheetException(file, source.whereRow(sheetName, row) + ": lot " + lot.lot() + " of "
-                        + lot.supplier() + ", part " + lot.part() + " is listed twice (first " + source.whereRow(
-                        sheetName, first) + "); a lot is recorded once (nothing was imported)");
-            }
-            lots.add(lot);
-            sheetRows.add(row);
-        });
+                RecordContent.Lot lot = lot(source, sheetName, row, cells, columns);
+                Integer first = seen.putIfAbsent(List.of(lot.supplier(), lot.part(), lot.lot()), row);
+                if (first != null) {
+                    throw new SheetException(file, source.whereRow(sheetName, row) + ": lot " + lot.lot() + " of "
+                            + lot.supplier() + ", part " + lot.part() + " is listed twice (first " + source.whereRow(
+                            sheetName, first) + "); a lot is recorded once (nothing was imported)");
+                }
+                lots.add(lot);
+                sheetRows.add(row);
+            });
+        }
         if (lots.isEmpty()) {
             throw new SheetException(file, "no lots to import below the header");
         }
@@ -107,8 +110,10 @@ final class ImportCommand implements Runnable {
                             + " in " + store.location() + " (nothing was imported)");
                 }
             }
-            written = store.appendEach(() -> withSeverities(lots, parts),
-                    Instant.now().truncatedTo(ChronoUnit.MILLIS));
+            try (Progress recording = Progress.onTerminal("import: recording lots", lots.size(), true)) {
+                written = store.appendEach(() -> withSeverities(lots, parts, recording),
+                        Instant.now().truncatedTo(ChronoUnit.MILLIS));
+            }
             location = store.location();
         }
         PrintWriter out = spec.commandLine().getOut();
@@ -137,9 +142,12 @@ final class ImportCommand implements Runnable {
     }
 
     /** Each lot, as it is written, with the severity the switching rules had it under. */
-    private static Iterator<ObjectNode> withSeverities(List<RecordContent.Lot> lots, Map<String, Part> parts) {
+    private static Iterator<ObjectNode> withSeverities(List<RecordContent.Lot> lots, Map<String, Part> parts,
+            Progress progress) {
         Iterator<RecordContent.Lot> each = lots.iterator();
         return new Iterator<>() {
+            private long done;
+
             @Override
             public boolean hasNext() {
                 return each.hasNext();
@@ -148,6 +156,7 @@ final class ImportCommand implements Runnable {
             @Override
             public ObjectNode next() {
                 RecordContent.Lot lot = each.next();
+                progress.at(++done);
                 SeverityTracker tracker = parts.get(key(lot)).tracker();
                 Severity severity = tracker.severity();
                 if (severity != Severity.DISCONTINUED) {
