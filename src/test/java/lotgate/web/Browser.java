@@ -68,7 +68,9 @@ final class Browser implements AutoCloseable {
 
     WebDriverWait waiting() {
         // A bound for a hung page, not a timer the test races: every wait is on a condition.
-        return new WebDriverWait(driver, Duration.ofSeconds(120));
+        // The page redraws as the user types: an element read during a redraw is stale, so read it again.
+        return (WebDriverWait) new WebDriverWait(driver, Duration.ofSeconds(120))
+                .ignoring(org.openqa.selenium.StaleElementReferenceException.class);
     }
 
     /** Saves the whole page as PNG (the window grown to the page's height) and returns the file. */
