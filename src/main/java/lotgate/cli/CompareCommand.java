@@ -1,12 +1,10 @@
 package lotgate.cli;
 
-import java.nio.file.Path;
 import java.util.List;
 import lotgate.jobs.ComparePlans;
 import lotgate.report.results.CompareRendering;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /** Puts several plans side by side: their risks at the same AQL and LTPD, key levels, and one OC chart. */
@@ -22,7 +20,7 @@ final class CompareCommand implements Runnable {
     @Override
     public void run() {
         format.print(ComparePlans.run(new ComparePlans.Request(plans, models.named(), models.lotSize,
-                aql, ltpd, chart, asnChart)), CompareRendering::text, CompareRendering::json, CompareRendering::csv);
+                levels.aql, levels.ltpd, chart.file, asnChart.file)), CompareRendering::text, CompareRendering::json, CompareRendering::csv);
     }
 
     @Parameters(arity = "2..*", paramLabel = "PLAN", description = "Two or more plans: plans/*.json files or n,c.")
@@ -31,20 +29,14 @@ final class CompareCommand implements Runnable {
     @Mixin
     ModelOptions models;
 
-    @Option(names = "--aql", paramLabel = "LEVEL", converter = Values.Quality.class,
-            description = "AQL to compare at (default: the first saved plan's).")
-    Double aql;
+    @Mixin
+    SharedOptions.MarkedLevels levels;
 
-    @Option(names = "--ltpd", paramLabel = "LEVEL", converter = Values.Quality.class,
-            description = "LTPD to compare at (default: the first saved plan's).")
-    Double ltpd;
+    @Mixin
+    SharedOptions.Chart chart;
 
-    @Option(names = "--chart", paramLabel = "FILE", description = "Draw all OC curves on one chart; .png or .svg.")
-    Path chart;
-
-    @Option(names = "--asn-chart", paramLabel = "FILE",
-            description = "Draw all ASN curves (average units inspected per lot) on one chart; .png or .svg.")
-    Path asnChart;
+    @Mixin
+    SharedOptions.AsnChart asnChart;
 
     @Mixin
     OutputFormat format;

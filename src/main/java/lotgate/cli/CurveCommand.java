@@ -23,8 +23,8 @@ final class CurveCommand implements Runnable {
     @Override
     public void run() {
         format.print(EvaluatePlan.run(new EvaluatePlan.Request(planFile, defectClass, sampleSize,
-                acceptance, models.named(), models.lotSize, aql, ltpd, upTo, steps,
-                new EvaluatePlan.ChartFiles(chart, ocChart, aoqChart, atiChart, asnChart), curtailed)), CurveRendering::text, CurveRendering::json, CurveRendering::csv);
+                acceptance, models.named(), models.lotSize, levels.aql, levels.ltpd, upTo, steps,
+                new EvaluatePlan.ChartFiles(chart.file, ocChart, aoqChart, atiChart, asnChart.file), curtailed.on)), CurveRendering::text, CurveRendering::json, CurveRendering::csv);
     }
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "PLAN", description = "A saved plan file (plans/*.json).")
@@ -45,13 +45,8 @@ final class CurveCommand implements Runnable {
             description = "For a plan with criteria per defect class: the class to show (critical, major, minor).")
     String defectClass;
 
-    @Option(names = "--aql", paramLabel = "LEVEL", converter = Values.Quality.class,
-            description = "AQL to mark on the OC curve (default: the saved plan's).")
-    Double aql;
-
-    @Option(names = "--ltpd", paramLabel = "LEVEL", converter = Values.Quality.class,
-            description = "LTPD to mark on the OC curve (default: the saved plan's).")
-    Double ltpd;
+    @Mixin
+    SharedOptions.MarkedLevels levels;
 
     @Option(names = "--up-to", paramLabel = "LEVEL", converter = Values.Quality.class,
             description = "Highest incoming quality in the table and charts (default: a round level just past"
@@ -62,9 +57,8 @@ final class CurveCommand implements Runnable {
             description = "Number of equal steps in the table, 1 to 10000 (default ${DEFAULT-VALUE}).")
     int steps;
 
-    @Option(names = "--chart", paramLabel = "FILE",
-            description = "Draw OC, AOQ and (with a lot size) ATI stacked in one chart; .png or .svg.")
-    Path chart;
+    @Mixin
+    SharedOptions.Chart chart;
 
     @Option(names = "--oc-chart", paramLabel = "FILE", description = "Draw the OC curve alone; .png or .svg.")
     Path ocChart;
@@ -76,14 +70,11 @@ final class CurveCommand implements Runnable {
             description = "Draw the ATI curve alone (needs a lot size); .png or .svg.")
     Path atiChart;
 
-    @Option(names = "--asn-chart", paramLabel = "FILE",
-            description = "Draw the ASN curve alone (average units inspected per lot); .png or .svg.")
-    Path asnChart;
+    @Mixin
+    SharedOptions.AsnChart asnChart;
 
-    @Option(names = "--curtailed",
-            description = "For a double plan: the ASN with inspection of the second sample stopped as soon as the"
-                    + " lot is rejected.")
-    boolean curtailed;
+    @Mixin
+    SharedOptions.Curtailed curtailed;
 
     @Mixin
     OutputFormat format;

@@ -4,7 +4,6 @@ import lotgate.jobs.ListHistory;
 import lotgate.report.results.HistoryRendering;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Option;
 
 /** Lists the recorded lots, corrections and corrective actions of the history store. */
 @Command(name = "history", header = "List the lots recorded in the history store.",
@@ -14,14 +13,14 @@ import picocli.CommandLine.Option;
 final class HistoryCommand implements Runnable {
     @Override
     public void run() {
-        format.print(ListHistory.run(new ListHistory.Request(supplier, part, storeOption.location())), HistoryRendering::text, HistoryRendering::json, HistoryRendering::csv);
+        format.print(ListHistory.run(new ListHistory.Request(supplier.name, part.name, storeOption.location())), HistoryRendering::text, HistoryRendering::json, HistoryRendering::csv);
     }
 
-    @Option(names = "--supplier", paramLabel = "NAME", description = "Only this supplier's records.")
-    String supplier;
+    @Mixin
+    SharedOptions.Supplier supplier;
 
-    @Option(names = "--part", paramLabel = "PART", description = "Only this part's records.")
-    String part;
+    @Mixin
+    SharedOptions.Part part;
 
     @Mixin
     StoreOption storeOption;

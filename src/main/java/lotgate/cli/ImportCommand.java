@@ -27,7 +27,6 @@ import lotgate.inspection.SheetSource;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
@@ -41,8 +40,8 @@ final class ImportCommand implements Runnable {
     @Parameters(index = "0", paramLabel = "FILE", description = "The list of past lots: .xlsx, .xls or .csv.")
     Path file;
 
-    @Option(names = "--sheet", paramLabel = "NAME", description = "The workbook sheet (default: the first).")
-    String sheet;
+    @Mixin
+    SharedOptions.Sheet sheet;
 
     @Mixin
     RecordingStoreOption storeOption;
@@ -58,13 +57,13 @@ final class ImportCommand implements Runnable {
     @Override
     public void run() {
         SheetSource source = SheetSource.open(file);
-        String sheetName = sheet != null ? sheet : source.sheetNames().get(0);
+        String sheetName = sheet.name != null ? sheet.name : source.sheetNames().get(0);
         List<RecordContent.Lot> lots = new ArrayList<>();
         List<Integer> sheetRows = new ArrayList<>();
         Map<List<String>, Integer> seen = new HashMap<>();
         Map<String, Integer> columns = new HashMap<>();
         try (Progress reading = Progress.onTerminal("import: reading rows", 0, true)) {
-            source.read(sheet, (row, cells) -> {
+            source.read(sheet.name, (row, cells) -> {
                 reading.at(row);
                 if (columns.isEmpty()) {
                     for (Cell cell : cells) {

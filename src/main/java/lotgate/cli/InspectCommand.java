@@ -21,6 +21,7 @@ import lotgate.sampling.SequentialPlan;
 import lotgate.sampling.Stage;
 import lotgate.sentencing.Stopping;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -67,10 +68,8 @@ final class InspectCommand implements Runnable {
             description = "With --save-sheet: unit identifiers are TEXT followed by the unit's number (e.g. LOT17-).")
     String prefix;
 
-    @Option(names = "--result-words", paramLabel = "MAPPING",
-            description = "Your site's own result words, added to the standard ones, e.g. \"pass=GO;fail=NOGO\" (also"
-                    + " from the LOTGATE_RESULT_WORDS environment variable), as for 'lotgate sentence'.")
-    String resultWords;
+    @Mixin
+    SharedOptions.ResultWords resultWords;
 
     @Spec
     CommandSpec spec;
@@ -95,7 +94,7 @@ final class InspectCommand implements Runnable {
                     + " in a sheet with a value column and use 'lotgate sentence'");
         }
         boolean units = saved.model().countsUnits();
-        ResultWords words = SheetOptions.resultWords(spec, resultWords);
+        ResultWords words = SheetOptions.resultWords(spec, resultWords.mapping);
         boolean terminal = System.console() != null && input.get() == System.in;
         PrintWriter out = spec.commandLine().getOut();
         out.println("Plan " + saved.name() + " (fingerprint " + saved.shortFingerprint() + "): " + PlanWording.brief(plan));

@@ -11,7 +11,7 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
 /** The lotgate command: acceptance sampling plans for lots, from design to lot sentencing. */
-@Command(name = "lotgate",
+@Command(name = "lotgate", resourceBundle = "lotgate.cli.OptionTexts",
         scope = CommandLine.ScopeType.INHERIT,
         mixinStandardHelpOptions = true,
         sortOptions = false,

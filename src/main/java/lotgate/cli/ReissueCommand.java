@@ -2,8 +2,6 @@ package lotgate.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
 import lotgate.inspection.Columns;
 import lotgate.jobs.ReissueLotOutputs;
 import lotgate.jobs.SentenceLot;
@@ -28,11 +26,11 @@ final class ReissueCommand implements Runnable {
             description = "The record's number (12 or #12), or the lot id.")
     String which;
 
-    @Option(names = "--supplier", paramLabel = "NAME", description = "The lot's supplier, when its id is not unique.")
-    String supplier;
+    @Mixin
+    SharedOptions.Supplier supplier;
 
-    @Option(names = "--part", paramLabel = "PART", description = "The lot's part, when its id is not unique.")
-    String part;
+    @Mixin
+    SharedOptions.Part part;
 
     @Option(names = "--sheet-file", paramLabel = "FILE",
             description = "Where the inspection sheet is now, if it moved (it must be the same file: same SHA-256).")
@@ -42,18 +40,17 @@ final class ReissueCommand implements Runnable {
             description = "Where the applied plan is now, if it moved (it must be the same plan: same fingerprint).")
     Path planFile;
 
-    @Option(names = "--columns", paramLabel = "MAPPING",
-            description = "The header names given when the lot was sentenced, if any (as for sentence).")
-    String columnMapping;
+    @Mixin
+    SharedOptions.ColumnNames columnNames;
 
-    @Option(names = "--report", paramLabel = "FILE", description = "Write a lot report: .xlsx or .html; repeatable.")
-    List<Path> reports = new ArrayList<>();
+    @Mixin
+    SharedOptions.Reports reports;
 
-    @Option(names = "--record", paramLabel = "FILE", description = "Write the decision record as a JSON file.")
-    Path record;
+    @Mixin
+    SharedOptions.RecordFile record;
 
-    @Option(names = "--chart", paramLabel = "FILE", description = "Draw the sampling chart (.png or .svg).")
-    Path chart;
+    @Mixin
+    SharedOptions.Chart chart;
 
     @Mixin
     StoreOption storeOption;
@@ -63,37 +60,37 @@ final class ReissueCommand implements Runnable {
 
     @Override
     public void run() {
-        if (reports.isEmpty() && record == null && chart == null) {
+        SentenceLot.Outputs outputs = new SentenceLot.Outputs(record.file, chart.file, reports.files);
+        if (outputs.reports().isEmpty() && outputs.record() == null && outputs.chart() == null) {
             throw new ParameterException(spec.commandLine(), "name what to write: --report, --record or --chart");
         }
         Long seq = null;
         String lot = which;
         String number = which.startsWith("#") ? which.substring(1) : which;
-        if (number.matches("[0-9]{1,18}") && (which.startsWith("#") || supplier == null)) {
+        if (number.matches("[0-9]{1,18}") && (which.startsWith("#") || supplier.name == null)) {
             seq = Long.parseLong(number);
             lot = null;
         }
         Columns columns = null;
-        if (columnMapping != null) {
+        if (columnNames.mapping != null) {
             try {
-                columns = Columns.mapped(columnMapping);
+                columns = Columns.mapped(columnNames.mapping);
             } catch (IllegalArgumentException e) {
                 throw new ParameterException(spec.commandLine(), "--columns: " + e.getMessage());
             }
         }
         ReissueLotOutputs.Result result = ReissueLotOutputs.run(new ReissueLotOutputs.Request(storeOption.location(),
-                seq, lot, supplier, part, sheetFile, planFile, columns, new SentenceLot.Outputs(record, chart,
-                reports)));
+                seq, lot, supplier.name, part.name, sheetFile, planFile, columns, outputs));
         PrintWriter out = spec.commandLine().getOut();
         out.println("Lot " + result.decision().lot().lot() + ", record " + result.place().text() + ":");
-        for (Path report : reports) {
+        for (Path report : outputs.reports()) {
             out.println("  report written to " + report);
         }
-        if (record != null) {
-            out.println("  record saved to " + record);
+        if (outputs.record() != null) {
+            out.println("  record saved to " + outputs.record());
         }
-        if (chart != null) {
-            out.println("  sampling chart written to " + chart);
+        if (outputs.chart() != null) {
+            out.println("  sampling chart written to " + outputs.chart());
         }
         out.flush();
     }

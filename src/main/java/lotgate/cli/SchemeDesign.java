@@ -10,6 +10,7 @@ import lotgate.sampling.DoublePlanDesigner;
 import lotgate.sampling.MultiplePlan;
 import lotgate.sampling.OcModel;
 import lotgate.sampling.Stage;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParameterException;
 
@@ -52,14 +53,12 @@ final class SchemeDesign {
                         + " exact risks then exceed them (by default the lines are redrawn until both are met).")
         boolean plainWald;
 
-        @Option(names = "--curtailed",
-                description = "Double plans: show the ASN with inspection of the second sample stopped as soon as the"
-                        + " rejection number is reached (the design still minimises the full ASN).")
-        boolean curtailed;
+        @Mixin
+        SharedOptions.Curtailed curtailed;
 
         /** Whether any of these options was given. */
         boolean given() {
-            return !stageSpecs.isEmpty() || truncateAt != null || firstRejection != null || asnAt != null || curtailed
+            return !stageSpecs.isEmpty() || truncateAt != null || firstRejection != null || asnAt != null || curtailed.on
                     || plainWald || !secondRatio.equals("1");
         }
     }
@@ -80,7 +79,7 @@ final class SchemeDesign {
         DesignStagedPlan.Result result = DesignStagedPlan.run(new DesignStagedPlan.Request(
                 DesignStagedPlan.Scheme.valueOf(scheme.toUpperCase(Locale.ROOT)), model, lotSize, command.aql,
                 command.alpha, command.ltpd, command.beta, stages, space, command.staged.asnAt, command.staged.truncateAt,
-                command.staged.plainWald, command.staged.curtailed, command.saveTarget()));
+                command.staged.plainWald, command.staged.curtailed.on, command.saveTarget()));
         if (result.noPlanReason() != null) {
             command.noPlan(result.noPlanReason(), model, lotSize);
         }
@@ -108,7 +107,7 @@ final class SchemeDesign {
         if (!isDouble && !command.staged.secondRatio.equals("1")) {
             misplaced.add("--second-ratio");
         }
-        if (!isDouble && command.staged.curtailed) {
+        if (!isDouble && command.staged.curtailed.on) {
             misplaced.add("--curtailed");
         }
         if (!scheme.equals("sequential") && command.staged.truncateAt != null) {

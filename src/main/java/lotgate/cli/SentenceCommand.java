@@ -3,8 +3,6 @@ package lotgate.cli;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.time.format.DateTimeParseException;
-import java.util.ArrayList;
-import java.util.List;
 import lotgate.inspection.Columns;
 import lotgate.inspection.LotDetails;
 import lotgate.jobs.SentenceLot;
@@ -51,14 +49,11 @@ final class SentenceCommand implements Runnable {
     @Parameters(index = "1", paramLabel = "SHEET", description = "The inspection sheet: .xlsx, .xls or .csv.")
     Path sheetFile;
 
-    @Option(names = "--sheet", paramLabel = "NAME",
-            description = "The workbook sheet holding the sample (default: the first sheet not named 'lot').")
-    String sheet;
+    @Mixin
+    SharedOptions.Sheet sheet;
 
-    @Option(names = "--columns", paramLabel = "MAPPING",
-            description = "Your own header names, as role=header pairs: unit, result, critical, major, minor,"
-                    + " defect, note, value (measurements); e.g. --columns unit=Serial,result=Outcome.")
-    String columnMapping;
+    @Mixin
+    SharedOptions.ColumnNames columnNames;
 
     @Option(names = "--header-row", paramLabel = "ROW", converter = Values.SheetRow.class,
             description = "The sheet row that holds the column names (default: the first of the top 50 rows that"
@@ -66,11 +61,8 @@ final class SentenceCommand implements Runnable {
                     + " passed over). 1 to 1048576.")
     Integer headerRow;
 
-    @Option(names = "--result-words", paramLabel = "MAPPING",
-            description = "Your site's own result words, added to the standard ones (pass, p, ok, good; fail, f, nc,"
-                    + " ng, bad; any case), e.g. --result-words \"pass=GO,Passed;fail=NOGO,Scrap\". The same words"
-                    + " may be set for a whole site in the LOTGATE_RESULT_WORDS environment variable.")
-    String resultWords;
+    @Mixin
+    SharedOptions.ResultWords resultWords;
 
     @Option(names = "--delimiter", paramLabel = "CHAR",
             description = "How a CSV sheet separates its values: comma, semicolon or tab (default: decided from the"
@@ -84,11 +76,11 @@ final class SentenceCommand implements Runnable {
     @Option(names = "--lot", paramLabel = "ID", description = "The lot's identifier.")
     String lotId;
 
-    @Option(names = "--supplier", paramLabel = "NAME", description = "The supplier.")
-    String supplier;
+    @Mixin
+    SharedOptions.Supplier supplier;
 
-    @Option(names = "--part", paramLabel = "PART", description = "The part number.")
-    String part;
+    @Mixin
+    SharedOptions.Part part;
 
     @Option(names = {"-N", "--lot-size"}, paramLabel = "N", converter = Values.Count.class,
             description = "The lot's size N (default: the plan's, for a finite-lot plan).")
@@ -105,12 +97,11 @@ final class SentenceCommand implements Runnable {
                     + " a CSV sheet).")
     Path lotFile;
 
-    @Option(names = "--confidence", paramLabel = "LEVEL", defaultValue = "95%", converter = Values.Risk.class,
-            description = "Confidence level of the bounds (default ${DEFAULT-VALUE}).")
-    double confidence;
+    @Mixin
+    SharedOptions.Confidence confidence;
 
-    @Option(names = "--record", paramLabel = "FILE", description = "Also save the decision record as a JSON file.")
-    Path record;
+    @Mixin
+    SharedOptions.RecordFile record;
 
     @Option(names = "--no-record", description = "Do not add this lot to the history store (a trial run).")
     boolean noRecord;
@@ -130,15 +121,11 @@ final class SentenceCommand implements Runnable {
     @Mixin
     RecordingStoreOption storeOption;
 
-    @Option(names = "--chart", paramLabel = "FILE",
-            description = "Draw the sampling chart: the count found against units inspected, with the plan's"
-                    + " acceptance and rejection numbers (lines for a sequential plan, steps for a plan in stages);"
-                    + " .png or .svg.")
-    Path chart;
+    @Mixin
+    SharedOptions.Chart chart;
 
-    @Option(names = "--report", paramLabel = "FILE",
-            description = "Write a lot report: .xlsx (summary, sample, OC chart) or .html (printable); repeatable.")
-    List<Path> reports = new ArrayList<>();
+    @Mixin
+    SharedOptions.Reports reports;
 
     @Mixin
     OutputFormat format;
@@ -149,9 +136,9 @@ final class SentenceCommand implements Runnable {
     @Override
     public void run() {
         int[] range = rowRange();
-        SentenceLot.Request request = new SentenceLot.Request(planFile, sheetFile, sheet, columns(), range[0],
-                range[1], givenDetails(), lotFile, confidence, !noRecord, supersedes, reason, production,
-                storeOption.location(), new SentenceLot.Outputs(record, chart, reports));
+        SentenceLot.Request request = new SentenceLot.Request(planFile, sheetFile, sheet.name, columns(),
+                range[0], range[1], givenDetails(), lotFile, confidence.level, !noRecord, supersedes, reason, production,
+                storeOption.location(), new SentenceLot.Outputs(record.file, chart.file, reports.files));
         if (!noRecord) {
             storeOption.prepareForRecording();
         }
@@ -193,14 +180,14 @@ final class SentenceCommand implements Runnable {
                         + " 2026-03-14");
             }
         }
-        String[][] ids = {{"--lot", lotId}, {"--supplier", supplier}, {"--part", part}, {"--inspector", inspector}};
+        String[][] ids = {{"--lot", lotId}, {"--supplier", supplier.name}, {"--part", part.name}, {"--inspector", inspector}};
         for (String[] id : ids) {
             String problem = lotgate.history.Identifiers.problem(id[0], id[1]);
             if (problem != null) {
                 throw new ParameterException(spec.commandLine(), problem);
             }
         }
-        return new LotDetails(blankToNull(lotId), blankToNull(supplier), blankToNull(part),
+        return new LotDetails(blankToNull(lotId), blankToNull(supplier.name), blankToNull(part.name),
                 lotSize == null ? 0 : lotSize, day, blankToNull(inspector));
     }
 
@@ -209,7 +196,7 @@ final class SentenceCommand implements Runnable {
     }
 
     private Columns columns() {
-        return SheetOptions.columns(spec, columnMapping, headerRow, delimiter, resultWords);
+        return SheetOptions.columns(spec, columnNames.mapping, headerRow, delimiter, resultWords.mapping);
     }
 
 }

@@ -1,9 +1,6 @@
 package lotgate.cli;
 
-import java.nio.file.Path;
 import java.time.LocalDate;
-import java.util.ArrayList;
-import java.util.List;
 import lotgate.jobs.AuditSupplier;
 import lotgate.report.results.AuditRendering;
 import picocli.CommandLine.Command;
@@ -20,15 +17,15 @@ import picocli.CommandLine.Parameters;
 final class SupplierCommand implements Runnable {
     @Override
     public void run() {
-        format.print(AuditSupplier.run(new AuditSupplier.Request(supplier, part, from, to, switching,
-                confidence, reports, storeOption.location())), AuditRendering::text, AuditRendering::json, AuditRendering::csv);
+        format.print(AuditSupplier.run(new AuditSupplier.Request(supplier, part.name, from, to, switching,
+                confidence.level, reports.files, storeOption.location())), AuditRendering::text, AuditRendering::json, AuditRendering::csv);
     }
 
     @Parameters(index = "0", paramLabel = "SUPPLIER", description = "The supplier, as recorded.")
     String supplier;
 
-    @Option(names = "--part", paramLabel = "PART", description = "Only this part.")
-    String part;
+    @Mixin
+    SharedOptions.Part part;
 
     @Option(names = "--from", paramLabel = "DATE", converter = Values.Day.class, description = "First received date of the period (2026-01-01).")
     LocalDate from;
@@ -40,13 +37,11 @@ final class SupplierCommand implements Runnable {
             description = "The switching rules to replay: current (default), older, or a plan family file's rules.")
     String switching;
 
-    @Option(names = "--confidence", paramLabel = "LEVEL", defaultValue = "95%", converter = Values.Risk.class,
-            description = "Confidence level of the intervals (default ${DEFAULT-VALUE}).")
-    double confidence;
+    @Mixin
+    SharedOptions.Confidence confidence;
 
-    @Option(names = "--report", paramLabel = "FILE",
-            description = "Write the audit report: .xlsx (data sheets and native charts) or .html; repeatable.")
-    List<Path> reports = new ArrayList<>();
+    @Mixin
+    SharedOptions.Reports reports;
 
     @Mixin
     StoreOption storeOption;
