@@ -62,3 +62,27 @@ def least_aoql(lot, target, avg):
                 break
     return best
 print("least aoql binomial 5000 2% 0.5%", least_aoql(5000, 0.02, 0.005))
+
+# The example: lot of 5,000, LTPD 5% (D = 250), process average 0.5% (D = 25), hypergeometric, in
+# exact rationals (fractions and math.comb, Python 3.11): for each c the smallest protecting n, then the least ATI.
+from fractions import Fraction
+from math import comb
+def hyper_cdf(c, lot, d, n):
+    return Fraction(sum(comb(d, x) * comb(lot - d, n - x) for x in range(0, min(c, d) + 1)), comb(lot, n))
+def least_ltpd_exact(lot, d_ltpd, beta, d_avg):
+    best = (lot, None)
+    for c in range(0, 12):
+        lo, hi = c, lot
+        while hi - lo > 1:
+            mid = (lo + hi) // 2
+            if hyper_cdf(c, lot, d_ltpd, mid) <= beta:
+                hi = mid
+            else:
+                lo = mid
+        n = hi
+        ati = n + (lot - n) * (1 - hyper_cdf(c, lot, d_avg, n))
+        if ati < best[0]:
+            best = (ati, (n, c))
+    return best
+ati, plan = least_ltpd_exact(5000, 250, Fraction(1, 10), 25)
+print("least ltpd hypergeometric 5000 5% 10% 0.5%", plan, "%.17g" % float(ati))

@@ -44,6 +44,8 @@ public final class Main implements Runnable {
 
     static {
         COMMANDS.put("design", DesignCommand.class);
+        COMMANDS.put("lookup", LookupCommand.class);
+        COMMANDS.put("least-inspection", LeastInspectionCommand.class);
         COMMANDS.put("curve", CurveCommand.class);
         COMMANDS.put("compare", CompareCommand.class);
         COMMANDS.put("show", ShowCommand.class);

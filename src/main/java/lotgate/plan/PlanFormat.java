@@ -118,7 +118,8 @@ public final class PlanFormat {
     static ObjectNode toJson(SavedPlan saved) {
         ObjectNode root = JsonNodeFactory.instance.objectNode();
         root.put("format", FORMAT);
-        boolean singleOnly = saved.classes().stream().allMatch(c -> c.plan() instanceof SinglePlan)
+        boolean singleOnly = saved.classes().stream().allMatch(c -> c.plan() instanceof SinglePlan single
+                && !single.hasGap())
                 && saved.measurement() == null;
         root.put("formatVersion", singleOnly ? SINGLE_ONLY_VERSION : VERSION);
         root.put("name", saved.name());
@@ -186,6 +187,9 @@ public final class PlanFormat {
         if (plan instanceof SinglePlan single) {
             node.put("n", single.n());
             node.put("c", single.c());
+            if (single.hasGap()) {
+                node.put("rejectionNumber", single.rejectionNumber());
+            }
         } else if (plan instanceof DoublePlan twice) {
             putStages(node, twice.stages());
         } else if (plan instanceof MultiplePlan multiple) {
@@ -409,8 +413,9 @@ public final class PlanFormat {
             }
             String method = text(design, prefix + "designedFor.method");
             Set<String> methods = switch (plan.scheme()) {
-                case "single" -> Set.of(SavedPlan.SMALLEST_SAMPLE, SavedPlan.FIXED_ACCEPTANCE, SavedPlan.GIVEN);
-                case "double" -> Set.of(SavedPlan.SMALLEST_ASN, SavedPlan.GIVEN);
+                case "single" -> Set.of(SavedPlan.SMALLEST_SAMPLE, SavedPlan.FIXED_ACCEPTANCE, SavedPlan.GIVEN,
+                        SavedPlan.ATTRIBUTE_TABLES, SavedPlan.LEAST_INSPECTION);
+                case "double" -> Set.of(SavedPlan.SMALLEST_ASN, SavedPlan.GIVEN, SavedPlan.ATTRIBUTE_TABLES);
                 case "sequential" -> Set.of(SavedPlan.WALD);
                 case "variables" -> Set.of(SavedPlan.SMALLEST_SAMPLE, SavedPlan.GIVEN);
                 default -> Set.of(SavedPlan.GIVEN);
@@ -468,7 +473,7 @@ public final class PlanFormat {
                 case "double", "multiple" -> Set.of("scheme", "stages");
                 case "sequential" -> Set.of("scheme", "h1", "h2", "s", "truncation");
                 case "variables" -> Set.of("scheme", "n", "k", "sigmaKnown");
-                default -> Set.of("scheme", "n", "c");
+                default -> Set.of("scheme", "n", "c", "rejectionNumber");
             };
             for (Iterator<String> it = plan.fieldNames(); it.hasNext();) {
                 String field = it.next();
@@ -507,6 +512,11 @@ public final class PlanFormat {
             int c = wholeNumber(plan, prefix + "plan.c", 0);
             if (c >= n) {
                 throw invalid("field '" + prefix + "plan.c' must be below plan.n = " + n + ", got " + c);
+            }
+            if (plan.has("rejectionNumber")) {
+                // Reduced plans of the attribute tables: a count between c and the rejection number accepts.
+                int rejection = wholeNumber(plan, prefix + "plan.rejectionNumber", c + 2);
+                return new SinglePlan(n, c, rejection);
             }
             return new SinglePlan(n, c);
         }

@@ -27,6 +27,10 @@ public record SavedPlan(String name, String description, Instant created, OcMode
     public static final String SMALLEST_ASN = "smallest-asn";
     /** A sequential plan with Wald's lines for the design points. */
     public static final String WALD = "wald";
+    /** A plan read from the published attribute sampling tables for a code letter and AQL. */
+    public static final String ATTRIBUTE_TABLES = "attribute-tables";
+    /** A single plan with the least average total inspection under an LTPD or AOQL protection (Dodge-Romig). */
+    public static final String LEAST_INSPECTION = "least-inspection";
 
 
     public SavedPlan {

@@ -21,7 +21,8 @@ public final class PlanWording {
     /** The plan's numbers on one line. */
     public static String brief(Plan plan) {
         if (plan instanceof SinglePlan single) {
-            return "n = " + single.n() + ", c = " + single.c();
+            return "n = " + single.n() + ", c = " + single.c() + (single.hasGap() ? ", Re = " + single.rejectionNumber()
+                    : "");
         }
         if (plan instanceof DoublePlan twice) {
             return "n1 = " + twice.n1() + ", c1 = " + twice.c1() + ", r1 = " + twice.r1() + "; n2 = " + twice.n2()

@@ -42,7 +42,7 @@ class MainTest {
     void anUnknownCommandIsToldTheCommandsThereAre() {
         Cli.Result result = Cli.run("desing", "--aql", "1%");
         assertEquals(2, result.exitCode());
-        assertEquals("lotgate: unknown command 'desing'; the commands are design, curve, compare, show, sentence,"
+        assertEquals("lotgate: unknown command 'desing'; the commands are design, lookup, least-inspection, curve, compare, show, sentence,"
                 + " inspect, history, supplier, suppliers, verify, reissue, corrective-action, import, family, demo, workbench,"
                 + " help"
                 + " (see 'lotgate --help')\n", result.err());

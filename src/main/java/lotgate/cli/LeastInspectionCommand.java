@@ -1,0 +1,58 @@
+package lotgate.cli;
+
+import lotgate.jobs.DesignLeastInspection;
+import lotgate.jobs.SaveTarget;
+import lotgate.report.results.LeastInspectionRendering;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+
+/** Designs the plan with the least average total inspection under an LTPD or AOQL protection (Dodge-Romig). */
+@Command(name = "least-inspection", header = "Design the plan that inspects least on average, for rectifying"
+        + " inspection.",
+        description = {
+                "For inspection with rectification (every rejected lot is screened 100%% and its nonconforming units"
+                        + " replaced), finds the single plan with the least average total inspection ATI = n + (N - n)"
+                        + " P(reject) at the supplier's process average, among the plans that protect lot quality"
+                        + " (--ltpd: P(accept) at the LTPD at most --beta) or the average outgoing quality (--aoql: the"
+                        + " AOQL at most the target). These are the plans Dodge and Romig tabled, computed exactly for"
+                        + " the lot size (hypergeometric by default).",
+                "",
+                "The plan 'design' gives for the same protection is shown beside it, with its ATI.",
+                ""})
+final class LeastInspectionCommand implements Runnable {
+    @Mixin
+    ModelOptions models;
+
+    @Option(names = "--ltpd", paramLabel = "LEVEL", converter = Values.Quality.class,
+            description = "Lot tolerance percent defective to protect against (e.g. 5%%).")
+    Double ltpd;
+
+    @Option(names = "--beta", paramLabel = "RISK", defaultValue = "10%", converter = Values.Risk.class,
+            description = "Consumer's risk at the LTPD (default ${DEFAULT-VALUE}).")
+    double beta;
+
+    @Option(names = "--aoql", paramLabel = "LEVEL", converter = Values.Quality.class,
+            description = "Instead of --ltpd: the largest average outgoing quality allowed (e.g. 2%%).")
+    Double aoql;
+
+    @Option(names = {"-p", "--process-average"}, paramLabel = "LEVEL", converter = Values.Quality.class,
+            description = "The supplier's usual quality (e.g. 0.5%%), where the inspection is counted.")
+    Double processAverage;
+
+    @ArgGroup(exclusive = false)
+    DesignCommand.SaveOptions save;
+
+    @Mixin
+    OutputFormat format;
+
+    @Override
+    public void run() {
+        SaveTarget target = save == null ? null : new SaveTarget(save.file, save.description, save.replace);
+        DesignLeastInspection.Result result = DesignLeastInspection.run(new DesignLeastInspection.Request(
+                models.lotSize, ltpd, beta, aoql, processAverage, models.named(), target));
+        format.print(result, LeastInspectionRendering::text, LeastInspectionRendering::json,
+                LeastInspectionRendering::csv);
+    }
+}

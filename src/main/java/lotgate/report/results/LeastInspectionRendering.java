@@ -1,0 +1,151 @@
+package lotgate.report.results;
+
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import lotgate.jobs.DesignLeastInspection;
+import lotgate.report.Cautions;
+import lotgate.report.CsvTable;
+import lotgate.report.Json;
+import lotgate.report.Percent;
+import lotgate.report.PlanWording;
+import lotgate.sampling.LeastInspectionDesigner;
+import lotgate.sampling.OcModel;
+import lotgate.sampling.SinglePlan;
+
+/** A least-inspection (Dodge-Romig) plan as text, JSON or CSV. */
+public final class LeastInspectionRendering {
+    private LeastInspectionRendering() {
+    }
+
+    /** The plan as text, with its ATI and protection and the plan {@code design} gives for comparison. */
+    public static String text(DesignLeastInspection.Result result) {
+        return Text.of(out -> {
+            DesignLeastInspection.Request request = result.request();
+            OcModel model = result.model();
+            int lotSize = result.lotSize();
+            LeastInspectionDesigner.Result found = result.found();
+            String unit = model.countsUnits() ? "" : " per unit";
+            out.println("Least-inspection plan for rectifying inspection (rejected lots screened 100%)");
+            out.println("  " + PlanWording.model(model, lotSize));
+            out.println("  protection: " + protection(result) + "; process average " + Percent.level(
+                    request.processAverage()) + unit);
+            out.println();
+            if (found.inspectEveryUnit()) {
+                out.println("  No sampling plan inspects fewer units on average than screening every unit: inspect"
+                        + " every unit of the lot (100% inspection), ATI " + lotSize + ".");
+                return;
+            }
+            SinglePlan plan = found.plan();
+            out.println("  Inspect n = " + plan.n() + " units. Accept the lot with up to c = " + plan.c() + " "
+                    + PlanWording.counted(model, plan.c()) + ";");
+            out.println("  reject it at " + plan.rejectionNumber() + " or more and screen the rest of the lot.");
+            out.println();
+            String row = "    %-44s %s%n";
+            out.printf(row, "ATI at the process average", String.format(Locale.ROOT, "%.1f units per lot (of %d)",
+                    found.ati(), lotSize));
+            out.printf(row, "P(accept) at the process average", Percent.probability(found.acceptanceAtAverage()));
+            out.printf(row, "LTPD at a consumer's risk of 10%", Percent.measured(found.ltpd10()) + unit);
+            out.printf(row, "LTPD at a consumer's risk of 5%", Percent.measured(result.ltpd5()) + unit);
+            out.printf(row, "AOQL", Percent.measured(found.aoql()) + unit + " at incoming "
+                    + Percent.measured(found.aoqlAt()) + unit);
+            out.printf(row, "plans compared", String.valueOf(found.plansCompared()));
+            DesignLeastInspection.Comparison comparison = result.comparison();
+            out.println();
+            if (comparison == null) {
+                out.println("  'design' finds no sampling plan below the lot size for the same protection.");
+            } else {
+                SinglePlan plain = comparison.plan();
+                out.println("  'design' for the same protection gives n = " + plain.n() + ", c = " + plain.c()
+                        + " (AQL at the process average with a producer's");
+                out.println("    risk of " + Percent.level(DesignLeastInspection.COMPARISON_ALPHA) + ", LTPD "
+                        + Percent.measured(comparison.ltpd()) + unit + "):");
+                out.println(String.format(Locale.ROOT, "    ATI %.1f units at the process average (%+.1f against this"
+                        + " plan), AOQL %s%s.", comparison.ati(), comparison.ati() - found.ati(),
+                        Percent.measured(comparison.aoql()), unit));
+            }
+            if (plan.c() == 0) {
+                out.println();
+                out.println(Cautions.ZERO_ACCEPTANCE.indent(2).stripTrailing());
+            }
+            if (result.saved() != null) {
+                out.println();
+                out.println("  Saved " + request.save().file() + " (fingerprint " + result.saved().shortFingerprint()
+                        + ")");
+            }
+        });
+    }
+
+    private static String protection(DesignLeastInspection.Result result) {
+        DesignLeastInspection.Request request = result.request();
+        String unit = result.model().countsUnits() ? "" : " per unit";
+        return result.byLtpd()
+                ? "LTPD " + Percent.level(request.ltpd()) + unit + " at a consumer's risk of "
+                        + Percent.level(request.beta())
+                : "AOQL at most " + Percent.level(request.aoql()) + unit;
+    }
+
+    /** The plan as JSON: n, c, rejectionNumber, the ATI and the protection figures. */
+    public static ObjectNode json(DesignLeastInspection.Result result) {
+        DesignLeastInspection.Request request = result.request();
+        LeastInspectionDesigner.Result found = result.found();
+        ObjectNode node = Json.object();
+        node.put("model", result.model().name());
+        node.put("lotSize", result.lotSize());
+        node.put("protection", result.byLtpd() ? "ltpd" : "aoql");
+        if (result.byLtpd()) {
+            node.put("ltpd", request.ltpd());
+            node.put("beta", request.beta());
+        } else {
+            node.put("aoqlTarget", request.aoql());
+        }
+        node.put("processAverage", request.processAverage());
+        node.put("planFound", !found.inspectEveryUnit());
+        node.put("fullInspection", found.inspectEveryUnit());
+        node.put("ati", found.ati());
+        if (found.inspectEveryUnit()) {
+            return node;
+        }
+        node.put("scheme", "single");
+        node.put("n", found.plan().n());
+        node.put("c", found.plan().c());
+        node.put("rejectionNumber", found.plan().rejectionNumber());
+        node.put("acceptanceAtAverage", found.acceptanceAtAverage());
+        node.put("ltpd10", found.ltpd10());
+        node.put("ltpd5", result.ltpd5());
+        node.put("aoql", found.aoql());
+        node.put("aoqlAt", found.aoqlAt());
+        node.put("plansCompared", found.plansCompared());
+        DesignLeastInspection.Comparison comparison = result.comparison();
+        if (comparison != null) {
+            ObjectNode design = node.putObject("designComparison");
+            design.put("n", comparison.plan().n());
+            design.put("c", comparison.plan().c());
+            design.put("ltpd", comparison.ltpd());
+            design.put("ati", comparison.ati());
+            design.put("aoql", comparison.aoql());
+        }
+        if (result.saved() != null) {
+            node.put("fingerprint", result.saved().fingerprint());
+        }
+        return node;
+    }
+
+    /** The plan as CSV, one row. */
+    public static String csv(DesignLeastInspection.Result result) {
+        LeastInspectionDesigner.Result found = result.found();
+        DesignLeastInspection.Request request = result.request();
+        List<Object> row = new ArrayList<>(List.of(result.model().name(), result.lotSize(),
+                result.byLtpd() ? "ltpd" : "aoql", result.byLtpd() ? request.ltpd() : request.aoql(),
+                request.processAverage()));
+        if (found.inspectEveryUnit()) {
+            row.addAll(List.of("", "", found.ati(), "", "", true, ""));
+        } else {
+            row.addAll(List.of(found.plan().n(), found.plan().c(), found.ati(), found.ltpd10(), found.aoql(), false,
+                    result.saved() == null ? "" : result.saved().fingerprint()));
+        }
+        return CsvTable.table(List.of("model", "lotSize", "protection", "target", "processAverage", "n", "c", "ati",
+                "ltpd10", "aoql", "fullInspection", "fingerprint"), List.of(row));
+    }
+}

@@ -1,0 +1,138 @@
+package lotgate.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The lookup and least-inspection commands: their outputs, what they save, and their refusals. */
+class TableCommandsTest {
+    private static final ObjectMapper JSON = new ObjectMapper();
+
+    @TempDir
+    Path folder;
+
+    private static JsonNode json(Cli.Result result) throws Exception {
+        assertEquals(0, result.exitCode(), result.err());
+        return JSON.readTree(result.out());
+    }
+
+    @Test
+    void lookupShowsTheCodeLetterThePlanAndTheRisksTheTablesDoNotPrint() {
+        Cli.Result result = Cli.run("lookup", "--lot-size", "200", "--aql", "1.5");
+        assertEquals(0, result.exitCode(), result.err());
+        // The example: G, n = 32, Ac 1 (MIL-STD-105E, from memory); 11.62% passes one time in ten and a lot at
+        // the AQL is rejected about one time in twelve (SciPy 1.10.1: 0.11619507645219035, 0.083018085736344505).
+        assertTrue(result.out().contains("sample size code letter G (Table I)"), result.out());
+        assertTrue(result.out().contains("inspect n = 32 units."), result.out());
+        assertTrue(result.out().contains("Accept the lot with up to Ac = 1 nonconforming unit; reject it at Re = 2 or"
+                + " more."), result.out());
+        assertTrue(result.out().contains("8.302% (a lot at the AQL is rejected about one time in 12)"), result.out());
+        assertTrue(result.out().contains("11.62% (such a lot passes one time in ten)"), result.out());
+    }
+
+    @Test
+    void lookupInJsonNamesTheLetterAndThePlanAsDesignDoes() throws Exception {
+        JsonNode single = json(Cli.run("lookup", "-N", "2000", "--aql", "0.65%", "--severity", "reduced", "-f",
+                "json"));
+        // MIL-STD-105E Table II-C (from memory): K, 50, Ac 1, Re 3.
+        assertEquals("K", single.path("codeLetter").asText());
+        assertEquals(50, single.path("n").asInt());
+        assertEquals(1, single.path("c").asInt());
+        assertEquals(3, single.path("rejectionNumber").asInt());
+        // SciPy 1.10.1: P(X >= 3 | 50, 0.65%) and P(X = 2).
+        assertEquals(0.0042855683342902543, single.path("producerRisk").asDouble(), 1e-13);
+        assertEquals(0.037846056325686273, single.path("reinstateAtAql").asDouble(), 1e-13);
+        JsonNode twice = json(Cli.run("lookup", "-N", "2000", "--aql", "0.65", "--scheme", "double", "-f", "json"));
+        assertEquals(2, twice.path("stages").size());
+        assertEquals(80, twice.path("stages").get(1).path("n").asInt());
+        assertEquals(3, twice.path("stages").get(0).path("r").asInt());
+        assertEquals(3, twice.path("stages").get(1).path("c").asInt());
+        assertEquals(4, twice.path("stages").get(1).path("r").asInt());
+    }
+
+    @Test
+    void lookupSaysWhenEveryUnitIsInspected() {
+        Cli.Result result = Cli.run("lookup", "-N", "10", "--aql", "0.65");
+        assertEquals(0, result.exitCode());
+        assertTrue(result.out().contains("points down to the first plan below it, at code letter F."), result.out());
+        assertTrue(result.out().contains("inspect every unit of the lot (100% inspection)"), result.out());
+    }
+
+    @Test
+    void lookupRefusesABadLevelAnAqlOutsideTheSeriesAndABadSeverity() {
+        Cli.Result level = Cli.run("lookup", "-N", "2000", "--aql", "0.65", "--level", "IV");
+        assertEquals(2, level.exitCode());
+        assertEquals("lotgate: --level: 'IV' is not an inspection level; use I, II, III (general) or S-1, S-2, S-3,"
+                + " S-4 (special) (see 'lotgate lookup --help')\n", level.err());
+        Cli.Result aql = Cli.run("lookup", "-N", "2000", "--aql", "0.5");
+        assertEquals(2, aql.exitCode());
+        assertEquals("lotgate: --aql: AQL 0.5% is not in the tables' preferred series: 0.010, 0.015, 0.025, 0.040,"
+                + " 0.065, 0.10, 0.15, 0.25, 0.40, 0.65, 1.0, 1.5, 2.5, 4.0, 6.5, 10, 15, 25, 40, 65, 100, 150, 250, 400,"
+                + " 650, 1000 (see 'lotgate lookup --help')\n", aql.err());
+        Cli.Result severity = Cli.run("lookup", "-N", "2000", "--aql", "0.65", "--severity", "strict");
+        assertEquals(2, severity.exitCode());
+        assertEquals("lotgate: --severity: 'strict' is not a severity; use normal, tightened or reduced (see"
+                + " 'lotgate lookup --help')\n", severity.err());
+        Cli.Result word = Cli.run("lookup", "-N", "2000", "--aql", "low");
+        assertEquals(2, word.exitCode());
+        assertTrue(word.err().contains("'low' is not an AQL; write it in percent as the tables print it, e.g. 0.65"),
+                word.err());
+        Cli.Result noLot = Cli.run("lookup", "--aql", "0.65");
+        assertEquals(2, noLot.exitCode());
+        assertEquals("lotgate: give the lot size with --lot-size N: the tables' code letter depends on it (see"
+                + " 'lotgate lookup --help')\n", noLot.err());
+    }
+
+    @Test
+    void lookupSavesAnOrdinaryPlanThatShowReads() {
+        Path plan = folder.resolve("clips.json");
+        Cli.Result saved = Cli.run("lookup", "-N", "2000", "--aql", "0.65", "--save", plan.toString());
+        assertEquals(0, saved.exitCode(), saved.err());
+        assertTrue(saved.out().contains("Saved " + plan), saved.out());
+        Cli.Result shown = Cli.run("show", plan.toString());
+        assertEquals(0, shown.exitCode(), shown.err());
+        assertTrue(shown.out().contains("125"), shown.out());
+    }
+
+    @Test
+    void leastInspectionGivesThePlanWithItsAti() throws Exception {
+        Cli.Result text = Cli.run("least-inspection", "--lot-size", "5000", "--ltpd", "5%", "--process-average",
+                "0.5%");
+        assertEquals(0, text.exitCode(), text.err());
+        // Exact rationals, Python 3.11 (src/test/python/tables_reference.py): n = 131, c = 3, ATI 149.079...
+        assertTrue(text.out().contains("Inspect n = 131 units. Accept the lot with up to c = 3 nonconforming units;"), text.out());
+        assertTrue(text.out().contains("149.1 units per lot (of 5000)"), text.out());
+        assertTrue(text.out().contains("'design' for the same protection"), text.out());
+        JsonNode node = json(Cli.run("least-inspection", "-N", "5000", "--ltpd", "5%", "-p", "0.5%", "-f", "json"));
+        assertEquals(131, node.path("n").asInt());
+        assertEquals(3, node.path("c").asInt());
+        assertEquals(4, node.path("rejectionNumber").asInt());
+        assertEquals(149.07929926040518, node.path("ati").asDouble(), 1e-9);
+        assertEquals("hypergeometric", node.path("model").asText());
+    }
+
+    @Test
+    void leastInspectionSavesAndRefuses() {
+        Path plan = folder.resolve("least.json");
+        Cli.Result saved = Cli.run("least-inspection", "-N", "5000", "--aoql", "2%", "-p", "0.5%", "--model",
+                "binomial", "--save", plan.toString());
+        assertEquals(0, saved.exitCode(), saved.err());
+        assertTrue(Files.exists(plan));
+        Cli.Result both = Cli.run("least-inspection", "-N", "5000", "--aoql", "2%", "--ltpd", "5%", "-p", "0.5%");
+        assertEquals(2, both.exitCode());
+        assertEquals("lotgate: give either --ltpd (lot quality protection) or --aoql (average outgoing quality"
+                + " protection) (see 'lotgate least-inspection --help')\n", both.err());
+        Cli.Result average = Cli.run("least-inspection", "-N", "5000", "--ltpd", "5%");
+        assertEquals(2, average.exitCode());
+        assertEquals("lotgate: give the supplier's --process-average: the plan inspects least at that quality (see"
+                + " 'lotgate least-inspection --help')\n", average.err());
+        assertFalse(Files.exists(folder.resolve("none.json")));
+    }
+}
