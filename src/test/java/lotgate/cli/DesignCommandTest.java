@@ -131,7 +131,7 @@ class DesignCommandTest {
     void anUnknownCommandIsNamed() {
         Cli.Result result = Cli.run("frobnicate");
         assertEquals(ExitCode.USAGE, result.exitCode());
-        assertTrue(result.err().startsWith("lotgate: unknown command 'frobnicate'; the commands are design, curve"),
+        assertTrue(result.err().startsWith("lotgate: unknown command 'frobnicate'; the commands are design, lookup,"),
                 result.err());
     }
 
