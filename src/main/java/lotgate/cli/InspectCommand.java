@@ -1,31 +1,25 @@
 package lotgate.cli;
 
 import java.io.BufferedReader;
+import java.io.IOException;
 import java.io.InputStream;
 import java.io.InputStreamReader;
 import java.io.PrintWriter;
+import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
 import java.util.Locale;
 import java.util.function.Supplier;
-import lotgate.files.AtomicWrite;
 import lotgate.inspection.ResultWords;
-import lotgate.plan.PlanFormat;
-import lotgate.plan.SavedPlan;
-import lotgate.report.CsvTable;
-import lotgate.report.PlanWording;
-import lotgate.sampling.Plan;
-import lotgate.sampling.SequentialPlan;
-import lotgate.sampling.Stage;
+import lotgate.jobs.InspectAtBench;
+import lotgate.jobs.JobException;
+import lotgate.report.results.BenchRendering;
 import lotgate.sentencing.Stopping;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /** At the inspection bench: takes one unit's result per line and says after each whether to stop. */
@@ -74,215 +68,82 @@ final class InspectCommand implements Runnable {
     @Spec
     CommandSpec spec;
 
-    /** One unit as entered: its count (1 for a failed unit of a pass/fail plan) and its defect type, or "". */
-    private record Unit(int count, String defect) {
-    }
-
     @Override
     public void run() {
-        if (sheet != null && !sheet.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".csv")) {
-            throw new ParameterException(spec.commandLine(), "--save-sheet " + sheet + ": the sheet is a .csv file");
-        }
-        SavedPlan saved = PlanFormat.read(planFile);
-        if (!saved.unclassified()) {
-            throw new ParameterException(spec.commandLine(), "plan " + saved.name() + " has criteria per defect class;"
-                    + " record its units in a sheet with critical, major and minor columns and use 'lotgate sentence'");
-        }
-        Plan plan = saved.plan();
-        if (saved.measurement() != null) {
-            throw new ParameterException(spec.commandLine(), "plan " + saved.name() + " judges measurements; record them"
-                    + " in a sheet with a value column and use 'lotgate sentence'");
-        }
-        boolean units = saved.model().countsUnits();
+        InspectAtBench.Bench bench = InspectAtBench.start(new InspectAtBench.Request(planFile, sheet, prefix));
         ResultWords words = SheetOptions.resultWords(spec, resultWords.mapping);
         boolean terminal = System.console() != null && input.get() == System.in;
         PrintWriter out = spec.commandLine().getOut();
-        out.println("Plan " + saved.name() + " (fingerprint " + saved.shortFingerprint() + "): " + PlanWording.brief(plan));
-        out.println("Enter each unit as inspected: " + (units ? "pass or fail" : "the number of nonconformities")
-                + ", then a defect type if you like (fail thread damage); 'undo' takes back the last, 'quit' stops.");
+        out.print(BenchRendering.opening(bench));
         out.flush();
-        List<Unit> entered = new ArrayList<>();
-        Stopping.Point decided = null;
+        InspectAtBench.State state = bench.state();
         int lineNumber = 0;
         try (BufferedReader reader = new BufferedReader(new InputStreamReader(input.get(), StandardCharsets.UTF_8))) {
             String line;
-            while (decided == null && (line = reader.readLine()) != null) {
+            while (!state.decided() && (line = reader.readLine()) != null) {
                 lineNumber++;
                 String text = line.trim().replaceAll("\\s+", " ").toLowerCase(Locale.ROOT);
-                if (text.isEmpty() || text.startsWith("#")) {
-                    continue;
-                }
                 if (text.equals("quit")) {
                     break;
                 }
                 if (text.equals("undo")) {
-                    if (entered.isEmpty()) {
-                        out.println("  nothing to take back");
-                    } else {
-                        entered.remove(entered.size() - 1);
-                        out.println("  unit " + (entered.size() + 1) + " taken back; " + entered.size() + " units entered");
+                    InspectAtBench.Bench before = bench;
+                    bench = bench.withoutLast();
+                    out.print(BenchRendering.takenBack(before, bench));
+                } else if (!text.isEmpty() && !text.startsWith("#")) {
+                    try {
+                        bench = bench.with(bench.parse(line, words));
+                        state = bench.state();
+                        out.print(BenchRendering.afterUnit(state));
+                    } catch (JobException refused) {
+                        String problem = "line " + lineNumber + ": " + refused.getMessage();
+                        if (!terminal) {
+                            throw new Main.Failure(ExitCode.BAD_INPUT, problem + "; " + keep(bench));
+                        }
+                        out.println("  " + problem + "; enter it again");
                     }
-                    out.flush();
-                    continue;
                 }
-                Unit unit = parse(line.trim().replaceAll("\\s+", " "), units, words);
-                if (unit == null) {
-                    String problem = "line " + lineNumber + ": '" + line.trim() + "' is not " + (units
-                            ? "a result word (" + words.accepted() + ")"
-                            : "a whole number of nonconformities from 0 to 1000000") + ", optionally followed by a"
-                            + " defect type";
-                    if (!terminal) {
-                        throw new Main.Failure(ExitCode.BAD_INPUT, problem + "; " + keep(entered, units, plan));
-                    }
-                    out.println("  " + problem + "; enter it again");
-                    out.flush();
-                    continue;
-                }
-                entered.add(unit);
-                decided = report(out, plan, entered, units);
                 out.flush();
             }
-        } catch (java.io.IOException e) {
+        } catch (IOException e) {
             throw new Main.Failure(ExitCode.BAD_INPUT, "standard input cannot be read (" + e.getMessage() + ")");
         }
-        if (decided == null) {
-            out.println(unfinished(entered.size(), plan));
+        finish(out, bench, state);
+    }
+
+    /** Writes the sheet asked for and says what the entry came to, failing with its exit code unless accepted. */
+    private void finish(PrintWriter out, InspectAtBench.Bench bench, InspectAtBench.State state) {
+        int entered = bench.units().size();
+        if (!state.decided()) {
+            out.print(BenchRendering.unfinished(entered, state.plan()));
             if (sheet != null) {
-                writeSheet(sheet, entered, units);
-                out.println("The " + entered.size() + " units entered are kept in " + sheet + "; add the units still to"
+                bench.writeSheet(sheet);
+                out.println("The " + entered + " units entered are kept in " + sheet + "; add the units still to"
                         + " inspect to it (or enter them all again here) before sentencing the lot.");
             }
             out.flush();
             throw new Main.Failure(ExitCode.NOT_DECIDED, null);
         }
         if (sheet != null) {
-            writeSheet(sheet, entered, units);
+            bench.writeSheet(sheet);
             out.println("Units written to " + sheet + "; sentence it with: lotgate sentence " + planFile + " " + sheet);
         }
         out.flush();
-        if (decided.verdict() == Stopping.Verdict.REJECT) {
+        if (state.decision().verdict() == Stopping.Verdict.REJECT) {
             throw new Main.Failure(ExitCode.REJECTED, null);
         }
     }
 
-    /**
-     * A unit from a line: a result word, or a fail word then a defect type; for a plan counting nonconformities,
-     * a count (or a pass word, 0) then an optional defect type. Null when the line is neither.
-     */
-    private static Unit parse(String text, boolean units, ResultWords words) {
-        Boolean failed = words.failed(text);
-        if (failed != null) {
-            return units || !failed ? new Unit(failed ? 1 : 0, "") : null;
-        }
-        String failWord = words.failPrefix(text);
-        if (failWord != null) {
-            return units ? new Unit(1, text.substring(failWord.length()).trim()) : null;
-        }
-        int space = text.indexOf(' ');
-        String number = space < 0 ? text : text.substring(0, space);
-        String defect = space < 0 ? "" : text.substring(space + 1).trim();
+    /** Keeps the units entered before a refused line, and says where. */
+    private static String keep(InspectAtBench.Bench bench) {
+        int entered = bench.units().size();
         try {
-            int count = Integer.parseInt(number);
-            if (count < 0 || count > 1_000_000 || (units && count > 1)) {
-                return null;
-            }
-            return new Unit(count, count == 0 ? "" : defect);
-        } catch (NumberFormatException e) {
-            return null;
+            Path kept = bench.keep();
+            return kept == null ? "no units were entered before it" : "the " + entered + " units entered before it"
+                    + " are kept in " + kept + " (an unfinished sample: " + entered + " of up to "
+                    + bench.saved().plan().maxSampleSize() + " units)";
+        } catch (UncheckedIOException e) {
+            return "the " + entered + " units entered before it could not be kept (" + e.getCause().getMessage() + ")";
         }
-    }
-
-    /** Saves the units entered before a refused line, and says where. */
-    private String keep(List<Unit> entered, boolean units, Plan plan) {
-        if (entered.isEmpty()) {
-            return "no units were entered before it";
-        }
-        Path target = sheet;
-        if (target == null) {
-            try {
-                target = java.nio.file.Files.createTempFile("lotgate-bench-", ".csv");
-            } catch (java.io.IOException e) {
-                return "the " + entered.size() + " units entered before it could not be kept (" + e.getMessage() + ")";
-            }
-        }
-        writeSheet(target, entered, units);
-        return "the " + entered.size() + " units entered before it are kept in " + target + " (an unfinished"
-                + " sample: " + entered.size() + " of up to " + plan.maxSampleSize() + " units)";
-    }
-
-    /** What stopping before the plan decides means, in words. */
-    private static String unfinished(int entered, Plan plan) {
-        return "No decision: " + entered + " of up to " + plan.maxSampleSize() + " units entered. An unfinished"
-                + " sample neither accepts nor rejects the lot: the plan decides only when its units are inspected.";
-    }
-
-    /** Prints where the plan stands after the last unit; returns the decision, or null to go on. */
-    private static Stopping.Point report(PrintWriter out, Plan plan, List<Unit> entered, boolean units) {
-        int m = entered.size();
-        long[] cumulative = new long[m + 1];
-        for (int i = 0; i < m; i++) {
-            int count = entered.get(i).count();
-            cumulative[i + 1] = cumulative[i] + (units ? Math.min(1, count) : count);
-        }
-        long found = cumulative[m];
-        String head = String.format(Locale.ROOT, "  unit %-5d %-5s found %-4d ", m, units ? (entered.get(m - 1).count() > 0
-                ? "fail" : "pass") : String.valueOf(entered.get(m - 1).count()), found);
-        Stopping.Point point = pointAfter(plan, m, cumulative);
-        if (point == null) {
-            out.println(head + "inspect on: " + untilText(plan, m, found));
-            return null;
-        }
-        switch (point.verdict()) {
-            case ACCEPT -> out.println(head + "ACCEPT the lot (" + point.step() + ": " + found + " is at most "
-                    + point.acceptanceNumber() + ")");
-            case REJECT -> out.println(head + "REJECT the lot (" + point.step() + ": " + found + " reaches "
-                    + point.rejectionNumber() + ")");
-            default -> {
-                out.println(head + "inspect on: " + untilText(plan, m, found));
-                return null;
-            }
-        }
-        return point;
-    }
-
-    /** The plan's verdict after m units, or null while m is inside a stage and no rejection is certain. */
-    private static Stopping.Point pointAfter(Plan plan, int m, long[] cumulative) {
-        if (m > plan.maxSampleSize()) {
-            return null;
-        }
-        try {
-            return Stopping.at(plan, m, unit -> cumulative[unit]);
-        } catch (IllegalArgumentException e) {
-            return null;
-        }
-    }
-
-    private static String untilText(Plan plan, int m, long found) {
-        if (plan instanceof SequentialPlan sequential) {
-            int clean = Stopping.acceptanceIfClean(sequential, m, found);
-            return "accepted after unit " + clean + " if nothing more is found; rejected at "
-                    + sequential.rejectionNumber(Math.min(m + 1, sequential.truncation())) + " found";
-        }
-        int total = 0;
-        for (Stage stage : Stopping.stages(plan)) {
-            total += stage.n();
-            if (total > m) {
-                return "this sample ends at unit " + total + " (accept there with up to "
-                        + PlanWording.acceptance(stage.c()) + ", reject at " + stage.r() + ")";
-            }
-        }
-        return "";
-    }
-
-    private void writeSheet(Path target, List<Unit> entered, boolean units) {
-        List<List<Object>> rows = new ArrayList<>();
-        for (int i = 0; i < entered.size(); i++) {
-            String id = prefix + (i + 1);
-            Unit unit = entered.get(i);
-            rows.add(units ? List.of(id, unit.count() > 0 ? "fail" : "pass", unit.defect())
-                    : List.of(id, unit.count(), unit.defect()));
-        }
-        AtomicWrite.writeString(target, CsvTable.table(units ? List.of("unit", "result", "defect")
-                : List.of("unit", "minor", "defect"), rows));
     }
 }
