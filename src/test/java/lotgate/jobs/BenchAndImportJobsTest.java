@@ -9,7 +9,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import lotgate.history.HistoryStore;
 import lotgate.inspection.ResultWords;
+import lotgate.inspection.SheetException;
 import lotgate.sentencing.Stopping;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -93,5 +95,44 @@ class BenchAndImportJobsTest {
                 new InspectAtBench.Request(Path.of("plans/kestrune-kc-114-classes.json"), null, "")));
         assertEquals("plan", classes.field());
         assertTrue(classes.getMessage().contains("criteria per defect class"), classes.getMessage());
+    }
+
+    private String newStore() {
+        String store = folder.resolve("history.sqlite").toString();
+        HistoryStore.open(store).close();
+        return store;
+    }
+
+    @Test
+    void importingPastLotsRecordsEachRowOnceAndTellsHowFarItIs() {
+        String store = newStore();
+        long[] rowsRead = {0};
+        long[] recorded = {0};
+        ImportHistory.Request request = new ImportHistory.Request(Path.of("demo-data/lots-2025.csv"), null, store);
+        ImportHistory.Lots lots = ImportHistory.check(request, row -> rowsRead[0] = row);
+        // The demo's invented list holds 49 lots under its header row.
+        assertEquals(49, lots.lots().size());
+        assertEquals(50, rowsRead[0]);
+        ImportHistory.Result result = ImportHistory.record(lots, done -> recorded[0] = done);
+        assertEquals(49, result.recorded());
+        assertEquals(49, recorded[0]);
+        SheetException again = assertThrows(SheetException.class, () -> ImportHistory.run(request));
+        assertTrue(again.getMessage().contains("is already recorded as #1"), again.getMessage());
+        assertTrue(again.getMessage().endsWith("(nothing was imported)"), again.getMessage());
+    }
+
+    @Test
+    void aBadCellIsRefusedByItsPlaceBeforeAnythingIsRecorded() throws IOException {
+        Path file = folder.resolve("past.csv");
+        Files.writeString(file, "lot,supplier,part,received,sample size,nonconforming,verdict\n"
+                + "L1,Sup (invented),P1,2025-02-03,50,1,accept\n"
+                + "L2,Sup (invented),P1,2025-02-04,50,60,reject\n");
+        String store = newStore();
+        SheetException refused = assertThrows(SheetException.class, () -> ImportHistory.run(
+                new ImportHistory.Request(file, null, store)));
+        assertTrue(refused.getMessage().contains("60 nonconforming in a sample of 50"), refused.getMessage());
+        try (HistoryStore opened = HistoryStore.open(store, false)) {
+            assertEquals(0, opened.verify().records());
+        }
     }
 }

@@ -27,11 +27,10 @@ class HistoryJobsTest {
         return store;
     }
 
-    /** A store holding the demo's past lots, imported through the command line (its import is not a job yet). */
+    /** A store holding the demo's past lots. */
     private String importedStore() {
         String store = newStore();
-        java.io.PrintWriter quiet = new java.io.PrintWriter(java.io.Writer.nullWriter());
-        assertEquals(0, lotgate.cli.Main.run(quiet, quiet, "import", LOTS.toString(), "--store", store));
+        ImportHistory.run(new ImportHistory.Request(LOTS, null, store));
         return store;
     }
 
