@@ -8,10 +8,11 @@ import java.time.LocalDate;
  * supplier's corrective action ({@code kind} "action").
  *
  * @param supersedes the record this one corrects, or 0
+ * @param hash       the record's chain hash, which with {@code seq} places it in the chain ({@code verify --expect})
  */
 public record LotRow(long seq, Instant recordedAt, String kind, String supplier, String part, String lot,
         int lotSize, LocalDate received, String verdict, int inspected, int nonconforming, String severity,
-        String production, long supersedes) {
+        String production, long supersedes, String hash) {
 
     public boolean accepted() {
         return "accept".equals(verdict);

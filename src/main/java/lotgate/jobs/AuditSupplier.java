@@ -7,7 +7,6 @@ import java.util.ArrayList;
 import java.util.List;
 import lotgate.history.HistoryStore;
 import lotgate.history.LotRow;
-import lotgate.history.NameMatch;
 import lotgate.history.SupplierAudit;
 import lotgate.history.SwitchingRules;
 import lotgate.plan.PlanFamily;
@@ -56,30 +55,13 @@ public final class AuditSupplier {
         SupplierAudit audit;
         List<String> evidence = new ArrayList<>();
         try (HistoryStore store = HistoryStore.open(request.store(), false)) {
-            List<LotRow> rows = store.rows(supplier, part);
-            if (rows.isEmpty()) {
-                List<String> suppliers = store.supplierTotals().stream().map(HistoryStore.SupplierTotals::supplier)
-                        .toList();
-                String recorded = NameMatch.resolve(supplier, suppliers);
-                if (recorded == null) {
-                    throw new JobException(JobException.Kind.NOT_FOUND, "supplier", "the history store "
-                            + store.location() + " has no lots of '" + supplier + "'"
-                            + (part == null ? "" : ", part '" + part + "'") + NameMatch.suggestion(supplier, suppliers)
-                            + " (see 'lotgate history')");
-                }
-                supplier = recorded;
-                if (part != null) {
-                    List<String> parts = store.rows(supplier, null).stream().map(LotRow::part).distinct().toList();
-                    String recordedPart = NameMatch.resolve(part, parts);
-                    if (recordedPart == null) {
-                        throw new JobException(JobException.Kind.NOT_FOUND, "part", "the history store "
-                                + store.location() + " has no lots of '" + supplier + "', part '" + part + "'"
-                                + NameMatch.suggestion(part, parts) + " (see 'lotgate history')");
-                    }
-                    part = recordedPart;
-                }
-                rows = store.rows(supplier, part);
+            RecordedNames.Names names = RecordedNames.of(store, supplier, part);
+            if (!names.found()) {
+                throw RecordedNames.notFound(store, names);
             }
+            supplier = names.supplier();
+            part = names.part();
+            List<LotRow> rows = store.rows(supplier, part);
             audit = SupplierAudit.ofLots(supplier, part, request.from(), request.to(), rows,
                     store.defectTypesByLot(supplier, part), rules, request.confidence(),
                     store.measuredLots(supplier, part));

@@ -53,6 +53,14 @@ final class Inspection implements AutoCloseable {
         // The job never creates a store: the face decides where one may be created (and says so).
         HistoryStore store = HistoryStore.open(storeLocation, false);
         try {
+            RecordedNames.Names names = RecordedNames.of(store, lot.supplier(), lot.part());
+            String renamed = null;
+            if (!names.supplier().equals(lot.supplier()) || !names.part().equals(lot.part())) {
+                renamed = "recorded under the store's spelling '" + names.supplier() + "', part '" + names.part()
+                        + "' (given as '" + lot.supplier() + "', part '" + lot.part() + "')";
+                lot = new LotDetails(lot.lot(), names.supplier(), names.part(), lot.lotSize(), lot.received(),
+                        lot.inspector());
+            }
             List<LotRow> rows = store.rows(lot.supplier(), lot.part());
             SupplierHistory history = new SupplierHistory(rows, rules);
             Severity severity = history.current();
@@ -96,6 +104,9 @@ final class Inspection implements AutoCloseable {
                 plan = plans.variants().get(wanted);
                 file = plans.files().get(wanted);
             }
+            if (renamed != null) {
+                notice = notice == null ? renamed : renamed + "; " + notice;
+            }
             return new Inspection(store, rules, lot, severity, plan, file, notice, supersedes == null ? 0 : supersedes);
         } catch (RuntimeException e) {
             store.close();
@@ -123,6 +134,11 @@ final class Inspection implements AutoCloseable {
         }
         throw new JobException(JobException.Kind.CONFLICT, "supersedes", "--supersedes " + seq + ": record " + seq + " was already corrected;"
                 + " supersede its latest correction instead");
+    }
+
+    /** The lot's details with its supplier and part spelt as the store records them. */
+    LotDetails lot() {
+        return lot;
     }
 
     /** The store's location as shown to people. */

@@ -21,10 +21,17 @@ public final class ListHistory {
     private ListHistory() {
     }
 
-    /** Reads the records asked for. */
+    /**
+     * Reads the records asked for; a supplier or part typed in another case or spacing than recorded finds the
+     * recorded one, and names the store does not hold are refused with the closest recorded names.
+     */
     public static Result run(Request request) {
         try (HistoryStore store = HistoryStore.open(request.store(), false)) {
-            return new Result(store.location(), store.rows(request.supplier(), request.part()));
+            RecordedNames.Names names = RecordedNames.of(store, request.supplier(), request.part());
+            if (!names.found()) {
+                throw RecordedNames.notFound(store, names);
+            }
+            return new Result(store.location(), store.rows(names.supplier(), names.part()));
         }
     }
 }

@@ -146,8 +146,11 @@ public final class SentenceLot {
         try {
             SavedPlan plan = inspection == null ? PlanFormat.read(request.planFile()) : inspection.plan();
             List<String> notices = new ArrayList<>();
-            if (inspection != null && inspection.notice() != null) {
-                notices.add(inspection.notice());
+            if (inspection != null) {
+                lot = inspection.lot();
+                if (inspection.notice() != null) {
+                    notices.add(inspection.notice());
+                }
             }
             lot = checkLot(request, lot, plan, notices);
             Path appliedPlan = inspection == null ? request.planFile() : inspection.planFile();

@@ -384,4 +384,47 @@ class StoreCommandsTest {
         assertEquals(2, JSON.readTree(record.toFile()).get("historyRecord").get("seq").asLong());
         assertTrue(Files.readString(html).contains("History record #2"));
     }
+
+    @ParameterizedTest
+    @MethodSource("kinds")
+    void theHistoryListingShowsEachRecordsPlaceThatVerifyAccepts(String kind) throws Exception {
+        String store = Stores.fresh(kind, folder);
+        assertEquals(0, sentence(store, "H1", 0, "--create-store").exitCode());
+        assertEquals(0, sentence(store, "H2", 1).exitCode());
+        JsonNode listed = JSON.readTree(Cli.run("history", "--store", store, "--format", "json").out());
+        JsonNode first = listed.get("records").get(0);
+        String kept = first.get("seq").asLong() + ":" + first.get("hash").asText();
+        assertEquals(64, first.get("hash").asText().length());
+        Cli.Result verified = Cli.run("verify", "--store", store, "--expect", kept);
+        assertEquals(0, verified.exitCode(), verified.err());
+        Cli.Result text = Cli.run("history", "--store", store);
+        assertTrue(text.out().contains(first.get("hash").asText().substring(0, 12)), text.out());
+        assertTrue(text.out().contains("--format json or csv gives them whole"), text.out());
+        String csv = Cli.run("history", "--store", store, "--format", "csv").out();
+        assertTrue(csv.lines().findFirst().orElseThrow().endsWith(",hash"), csv);
+        assertTrue(csv.contains(first.get("hash").asText()), csv);
+    }
+
+    @ParameterizedTest
+    @MethodSource("kinds")
+    void aSupplierTypedInAnotherCaseJoinsTheHistoryItBelongsTo(String kind) throws Exception {
+        String store = Stores.fresh(kind, folder);
+        assertEquals(0, sentence(store, "C1", 0, "--create-store").exitCode());
+        Cli.Result typed = Cli.run("sentence", BOLTS, sheet("C2", 0).toString(), "--lot", "C2", "--supplier",
+                "invented  works", "--part", "iw-1", "--store", store);
+        assertEquals(0, typed.exitCode(), typed.err());
+        assertTrue(typed.out().contains("recorded under the store's spelling 'Invented Works', part 'IW-1'"),
+                typed.out());
+        JsonNode listed = JSON.readTree(Cli.run("history", "--store", store, "--supplier", "INVENTED WORKS",
+                "--format", "json").out());
+        assertEquals(2, listed.get("records").size(), "both lots in one history, found in any case");
+        assertEquals("Invented Works", listed.get("records").get(1).get("supplier").asText());
+        Cli.Result again = Cli.run("sentence", BOLTS, sheet("C1", 0).toString(), "--lot", "C1", "--supplier",
+                "INVENTED WORKS", "--part", "IW-1", "--store", store);
+        assertEquals(ExitCode.USAGE, again.exitCode(), "the same lot under another spelling is still a duplicate");
+        Cli.Result unknown = Cli.run("history", "--store", store, "--supplier", "Invented Werks");
+        assertEquals(ExitCode.USAGE, unknown.exitCode());
+        assertTrue(unknown.err().contains("has no lots of 'Invented Werks'; did you mean 'Invented Works'?"),
+                unknown.err());
+    }
 }

@@ -11,6 +11,9 @@ import lotgate.report.Json;
 
 /** The history store's records as text, JSON or CSV. */
 public final class HistoryRendering {
+    /** The digits of a chain hash that the text listing shows. */
+    private static final int SHORT_HASH = 12;
+
     private HistoryRendering() {
     }
 
@@ -38,6 +41,7 @@ public final class HistoryRendering {
             item.put("nonconforming", row.nonconforming());
             item.put("severity", row.severity());
             item.put("supersedes", row.supersedes());
+            item.put("hash", row.hash());
         }
         return node;
     }
@@ -49,10 +53,10 @@ public final class HistoryRendering {
             table.add(List.of(row.seq(), row.recordedAt().toString(), row.kind(), row.supplier(), row.part(),
                     row.lot(), row.received() == null ? "" : row.received().toString(),
                     row.verdict() == null ? "" : row.verdict(), row.inspected(), row.nonconforming(),
-                    row.severity() == null ? "" : row.severity(), row.supersedes()));
+                    row.severity() == null ? "" : row.severity(), row.supersedes(), row.hash()));
         }
         return CsvTable.table(List.of("seq", "recordedAt", "kind", "supplier", "part", "lot", "received",
-                "verdict", "inspected", "nonconforming", "severity", "supersedes"), table);
+                "verdict", "inspected", "nonconforming", "severity", "supersedes", "hash"), table);
     }
 
     /** The records as text. */
@@ -60,15 +64,19 @@ public final class HistoryRendering {
         return Text.of(out -> {
             List<LotRow> rows = result.rows();
             out.println("History store " + result.store() + ": " + rows.size() + " records");
-            out.printf("  %6s  %-10s  %-28s %-12s %-14s %-7s %9s %6s  %-10s%n", "#", "received", "supplier",
-                    "part", "lot", "verdict", "inspected", "found", "severity");
+            out.printf("  %6s  %-12s  %-10s  %-28s %-12s %-14s %-7s %9s %6s  %-10s%n", "#", "chain hash",
+                    "received", "supplier", "part", "lot", "verdict", "inspected", "found", "severity");
             for (LotRow row : rows) {
                 String lot = row.isLot() ? row.lot() : "(corrective action)";
-                out.printf("  %6d  %-10s  %-28s %-12s %-14s %-7s %9d %6d  %-10s%s%n", row.seq(),
-                        row.received() == null ? "" : row.received().toString(), clip(row.supplier(), 28),
+                out.printf("  %6d  %-12s  %-10s  %-28s %-12s %-14s %-7s %9d %6d  %-10s%s%n", row.seq(),
+                        row.hash().substring(0, SHORT_HASH), row.received() == null ? "" : row.received().toString(), clip(row.supplier(), 28),
                         clip(row.part(), 12), clip(lot, 14), row.verdict() == null ? "" : row.verdict(),
                         row.inspected(), row.nonconforming(), row.severity() == null ? "" : row.severity(),
                         row.supersedes() > 0 ? "  corrects #" + row.supersedes() : "");
+            }
+            if (!rows.isEmpty()) {
+                out.println("  (chain hashes shortened to their first " + SHORT_HASH + " of 64 digits; --format json or"
+                        + " csv gives them whole, for 'lotgate verify --expect SEQ:HASH')");
             }
         });
     }
