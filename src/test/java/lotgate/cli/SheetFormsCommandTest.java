@@ -64,6 +64,20 @@ class SheetFormsCommandTest {
     }
 
     @Test
+    void aSiteSetsItsResultWordsOnceForEveryCommand() throws Exception {
+        Path file = xlsx("form.xlsx", form("GO", "NOGO", 2));
+        Cli.Result site = Cli.process(java.util.Map.of("LOTGATE_RESULT_WORDS", "pass=GO;fail=NOGO"), "sentence",
+                "--no-record", "--lot", "L-1", BOLTS, file.toString(), "--columns", "unit=Serial,result=Outcome");
+        assertEquals(ExitCode.OK, site.exitCode(), site.out());
+        assertTrue(site.out().contains("2 nonconforming"), site.out());
+        Cli.Result bad = Cli.process(java.util.Map.of("LOTGATE_RESULT_WORDS", "maybe"), "sentence", "--no-record",
+                "--lot", "L-1", BOLTS, file.toString(), "--columns", "unit=Serial,result=Outcome");
+        assertEquals(ExitCode.USAGE, bad.exitCode(), bad.out());
+        assertTrue(bad.out().startsWith("lotgate: LOTGATE_RESULT_WORDS: 'maybe' is not pass=WORD,WORD or"
+                + " fail=WORD,WORD"), bad.out());
+    }
+
+    @Test
     void sheetOptionsOutsideTheirRangeAreRefused() throws IOException {
         Path file = xlsx("form.xlsx", form("ok", "ng", 0));
         String[][] cases = {

@@ -211,17 +211,7 @@ class StoreCommandsTest {
 
     /** Runs lotgate in its own process with the given environment; returns its exit code and output. */
     private static Cli.Result lotgate(Map<String, String> environment, String... args) throws Exception {
-        String classpath = System.getProperty("surefire.test.class.path", System.getProperty("java.class.path"));
-        List<String> command = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java")
-                .toString(), "-cp", classpath, Main.class.getName()));
-        command.addAll(List.of(args));
-        ProcessBuilder builder = new ProcessBuilder(command);
-        builder.environment().remove("PGPASSWORD");
-        builder.environment().remove("PGPASSFILE");
-        builder.environment().putAll(environment);
-        Process process = builder.redirectErrorStream(true).start();
-        String out = new String(process.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
-        return new Cli.Result(process.waitFor(), out, "");
+        return Cli.process(environment, args);
     }
 
     @Test
