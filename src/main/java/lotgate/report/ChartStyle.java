@@ -20,6 +20,8 @@ public final class ChartStyle {
     public static final Color INK = new Color(0x23, 0x2a, 0x33);
     /** The data itself: a deep ink blue (greyscale about 28%). */
     public static final Color DATA = new Color(0x1d, 0x4e, 0x89);
+    /** The same data where it must step back behind the part that leads (the other bars of a Pareto chart). */
+    public static final Color DATA_LIGHT = new Color(0x9d, 0xb5, 0xd2);
     /** Limits, rejections and anything out of bounds: burnt vermilion (greyscale about 40%). */
     public static final Color ALERT = new Color(0xc4, 0x42, 0x1a);
     /** Centre lines and the second curve: sea teal (greyscale about 48%). */

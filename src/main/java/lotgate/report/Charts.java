@@ -304,6 +304,26 @@ public final class Charts {
             legend.add(legendMark("Lot rejected", ChartStyle.INK, ChartStyle.ring(), false));
         }
         shadeSeverity(plot, points, legend);
+        for (int i = 0; i < points.size(); i++) {
+            ControlPoint point = points.get(i);
+            if (point.outside()) {
+                // The mark says what it means beside the point, pointing at it from below and inside the plot.
+                boolean late = i > points.size() / 2;
+                org.jfree.chart.annotations.XYPointerAnnotation note = new org.jfree.chart.annotations
+                        .XYPointerAnnotation(point.lot() + " outside the limits", i, point.value(),
+                                late ? 3 * Math.PI / 4 : Math.PI / 4);
+                note.setFont(ChartStyle.NOTE_BOLD);
+                note.setPaint(ChartStyle.ALERT);
+                note.setArrowPaint(ChartStyle.ALERT);
+                note.setArrowStroke(new BasicStroke(1.4f));
+                note.setTipRadius(11);
+                note.setBaseRadius(34);
+                note.setLabelOffset(4);
+                note.setBackgroundPaint(new Color(255, 255, 255, 225));
+                note.setTextAnchor(late ? TextAnchor.TOP_RIGHT : TextAnchor.TOP_LEFT);
+                renderer.addAnnotation(note);
+            }
+        }
         for (SwitchMark change : switches) {
             ValueMarker line = new ValueMarker(change.afterIndex() + 0.5, ChartStyle.INK, new BasicStroke(1.2f,
                     BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, new float[] {2f, 2f}, 0f));
@@ -388,8 +408,15 @@ public final class Charts {
             line.addValue(cumulative[i], "Cumulative share", label + "​".repeat(i));
         }
         org.jfree.chart.plot.CategoryPlot plot = new org.jfree.chart.plot.CategoryPlot(bars,
-                new org.jfree.chart.axis.CategoryAxis("Defect type"), new NumberAxis("Nonconforming units"),
+                new org.jfree.chart.axis.CategoryAxis("Defect type"), countAxis("Nonconforming units"),
                 new org.jfree.chart.renderer.category.BarRenderer());
+        // The leading type in the data's full colour, the others lighter: the bar that dominates reads first.
+        plot.setRenderer(new org.jfree.chart.renderer.category.BarRenderer() {
+            @Override
+            public java.awt.Paint getItemPaint(int row, int column) {
+                return column == 0 || counts[column] == counts[0] ? ChartStyle.DATA : ChartStyle.DATA_LIGHT;
+            }
+        });
         plot.getRenderer().setSeriesPaint(0, ChartStyle.DATA);
         ((org.jfree.chart.renderer.category.BarRenderer) plot.getRenderer()).setShadowVisible(false);
         ((org.jfree.chart.renderer.category.BarRenderer) plot.getRenderer())
@@ -405,7 +432,11 @@ public final class Charts {
         cumulativeRenderer.setSeriesShape(0, ChartStyle.point());
         plot.setRenderer(1, cumulativeRenderer);
         plot.setDatasetRenderingOrder(org.jfree.chart.plot.DatasetRenderingOrder.FORWARD);
-        plot.getDomainAxis().setCategoryLabelPositions(org.jfree.chart.axis.CategoryLabelPositions.UP_45);
+        // A few types read level under their bars; many would collide, so they slant.
+        plot.getDomainAxis().setCategoryLabelPositions(types.size() <= 6
+                ? org.jfree.chart.axis.CategoryLabelPositions.STANDARD
+                : org.jfree.chart.axis.CategoryLabelPositions.UP_45);
+        plot.getDomainAxis().setMaximumCategoryLabelLines(2);
         plot.setBackgroundPaint(Color.WHITE);
         plot.setRangeGridlinePaint(ChartStyle.GRID);
         plot.setOutlinePaint(ChartStyle.GRID);
@@ -414,6 +445,13 @@ public final class Charts {
         }
         axisFonts(plot.getDomainAxis());
         return finish(new JFreeChart(title, ChartStyle.TITLE, plot, true));
+    }
+
+    /** A value axis of whole counts: no tick between two whole numbers. */
+    private static NumberAxis countAxis(String label) {
+        NumberAxis axis = new NumberAxis(label);
+        axis.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
+        return axis;
     }
 
     /**

@@ -199,7 +199,8 @@ final class LotReportXlsx {
         pair(sheet, "Lot", lot.lot());
         pair(sheet, "Supplier", lot.supplier());
         pair(sheet, "Part", lot.part());
-        pair(sheet, "Lot size", lot.lotSize() > 0 ? lot.lotSize() : null);
+        // As words beside the other details, not a number pushed to the far edge of the merged cells.
+        pair(sheet, "Lot size", lot.lotSize() > 0 ? lot.lotSize() + " units" : null);
         pair(sheet, "Received", lot.received());
         pair(sheet, "Inspector", lot.inspector());
         row++;
@@ -280,7 +281,7 @@ final class LotReportXlsx {
             row++;
             Row typesHead = next(sheet);
             put(typesHead, 0, "Defect type", heading);
-            put(typesHead, 1, "Nonconforming units", numberHeading);
+            put(typesHead, 1, "Units found", numberHeading);
             typesHead.setHeightInPoints(30);
             Map<String, Integer> sorted = new TreeMap<>(sample.defectTypes());
             for (Map.Entry<String, Integer> entry : sorted.entrySet()) {

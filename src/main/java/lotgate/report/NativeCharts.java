@@ -171,6 +171,51 @@ final class NativeCharts {
         axis.setMaximum(maximum);
     }
 
+    private static final String CHART_NS = "http://schemas.openxmlformats.org/drawingml/2006/chart";
+    private static final String DRAWING_NS = "http://schemas.openxmlformats.org/drawingml/2006/main";
+
+    /**
+     * Labels each point of a series with the series' name, in its colour and bold: for a marker series that holds
+     * a value only where there is something to mark ("Outside the control limits"), the mark explains itself.
+     */
+    static void labelWithName(XDDFLineChartData data, int seriesIndex, Color colour, boolean left) {
+        XDDFLineChartData.Series series = (XDDFLineChartData.Series) data.getSeries(seriesIndex);
+        insertBeforeCategories(series.getCTLineSer(), "<c:dLbls xmlns:c=\"" + CHART_NS + "\" xmlns:a=\"" + DRAWING_NS
+                + "\"><c:spPr><a:solidFill><a:srgbClr val=\"ffffff\"/></a:solidFill></c:spPr><c:txPr><a:bodyPr/>"
+                + "<a:lstStyle/><a:p><a:pPr><a:defRPr sz=\"1100\" b=\"1\"><a:solidFill><a:srgbClr val=\""
+                + ChartStyle.hex(colour) + "\"/></a:solidFill></a:defRPr></a:pPr><a:endParaRPr lang=\"en-US\"/></a:p>"
+                + "</c:txPr><c:dLblPos val=\"" + (left ? "l" : "r") + "\"/><c:showLegendKey val=\"0\"/>"
+                + "<c:showVal val=\"0\"/><c:showCatName val=\"0\"/><c:showSerName val=\"1\"/>"
+                + "<c:showPercent val=\"0\"/><c:showBubbleSize val=\"0\"/></c:dLbls>");
+    }
+
+    /** Gives one bar of a bar series its own fill (the others keep the series' fill). */
+    static void barColour(XDDFBarChartData data, int seriesIndex, int point, Color fill, Color outline) {
+        XDDFBarChartData.Series series = (XDDFBarChartData.Series) data.getSeries(seriesIndex);
+        insertBeforeCategories(series.getCTBarSer(), "<c:dPt xmlns:c=\"" + CHART_NS + "\" xmlns:a=\"" + DRAWING_NS
+                + "\"><c:idx val=\"" + point + "\"/><c:invertIfNegative val=\"0\"/><c:bubble3D val=\"0\"/><c:spPr>"
+                + "<a:solidFill><a:srgbClr val=\"" + ChartStyle.hex(fill) + "\"/></a:solidFill><a:ln w=\"9525\">"
+                + "<a:solidFill><a:srgbClr val=\"" + ChartStyle.hex(outline) + "\"/></a:solidFill></a:ln></c:spPr>"
+                + "</c:dPt>");
+    }
+
+    /**
+     * POI's lean schema build lacks the typed classes of data labels and data points: the element is written as it
+     * is, where the schema's order puts it, before the series' categories.
+     */
+    private static void insertBeforeCategories(org.apache.xmlbeans.XmlObject series, String xml) {
+        try (org.apache.xmlbeans.XmlCursor target = series.newCursor();
+                org.apache.xmlbeans.XmlCursor source = org.apache.xmlbeans.XmlObject.Factory.parse(xml).newCursor()) {
+            if (!target.toChild(new javax.xml.namespace.QName(CHART_NS, "cat"))) {
+                throw new IllegalStateException("a chart series without categories");
+            }
+            source.toFirstChild();
+            source.copyXml(target);
+        } catch (org.apache.xmlbeans.XmlException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
     private static void markerColour(CTMarker marker, Color colour, int size) {
         // POI's lean schema build cannot write a marker's size through its typed API: write the element as it is.
         if (!marker.isSetSpPr()) {

@@ -274,7 +274,7 @@ public final class SupplierReport {
             typeWidths.apply(types, 10, 36);
             int m = audit.pareto().size();
             if (m > 0) {
-                XSSFChart chart = NativeCharts.chart(types, "Pareto of defect types", 4, 0, 16, 26);
+                XSSFChart chart = NativeCharts.chart(types, paretoTitle(audit), 4, 0, 16, 26);
                 XDDFCategoryAxis bottom = NativeCharts.categoryAxis(chart, "Defect type, most frequent first");
                 XDDFValueAxis left = NativeCharts.valueAxis(chart, AxisPosition.LEFT, "Nonconforming units", "0");
                 left.setCrosses(org.apache.poi.xddf.usermodel.chart.AxisCrosses.AUTO_ZERO);
@@ -284,6 +284,10 @@ public final class SupplierReport {
                 bars.setGapWidth(60);
                 NativeCharts.addBars(bars, names, NativeCharts.numbers(types, 1, m, 1), "Nonconforming units",
                         ChartStyle.DATA, ChartStyle.INK);
+                // The leading type in the data's full colour, the others lighter: the bar that dominates reads first.
+                for (int b = 1; b < m; b++) {
+                    NativeCharts.barColour(bars, 0, b, ChartStyle.DATA_LIGHT, ChartStyle.INK);
+                }
                 chart.plot(bars);
                 XDDFValueAxis right = NativeCharts.secondAxis(chart, "Cumulative share", "0%")[0];
                 NativeCharts.range(right, 0, 1);
@@ -347,6 +351,28 @@ public final class SupplierReport {
                 reduced = true;
             }
         }
+        // A part whose severity changed after its last lot: a slot after the lots, shaded for the severity its next
+        // lot gets, so that a switch at the end of the period shows as plainly as one in the middle.
+        int slots = n;
+        for (SupplierAudit.Part part : audit.parts()) {
+            String now = part.current().label();
+            LotRow last = null;
+            for (LotRow lot : audit.lotsInOrder()) {
+                if (lot.part().equals(part.part())) {
+                    last = lot;
+                }
+            }
+            boolean changed = last != null && !now.equals(last.severity());
+            if (changed && ("tightened".equals(now) || "reduced".equals(now))) {
+                XSSFRow row = sheet.getRow(slots + 1) != null ? sheet.getRow(slots + 1) : sheet.createRow(slots + 1);
+                cells.put(row, first, audit.parts().size() == 1 ? "next lot" : "next " + part.part(), null);
+                cells.put(row, first + ("tightened".equals(now) ? 7 : 8), top, percent);
+                tightened |= "tightened".equals(now);
+                reduced |= "reduced".equals(now);
+                slots++;
+            }
+        }
+        n = slots;
         XSSFChart chart = NativeCharts.chart(sheet, "p-chart: lot fractions nonconforming", 0, 0, 18, 34);
         XDDFCategoryAxis bottom = NativeCharts.categoryAxis(chart, "Lot, in the order received");
         XDDFValueAxis left = NativeCharts.valueAxis(chart, AxisPosition.LEFT, "Fraction nonconforming", "0.0%");
@@ -360,11 +386,11 @@ public final class SupplierReport {
             bands.setBarGrouping(org.apache.poi.xddf.usermodel.chart.BarGrouping.STACKED);
             if (tightened) {
                 NativeCharts.addBars(bands, names, NativeCharts.numbers(sheet, 1, n, first + 7),
-                        "Judged under tightened inspection", ChartStyle.TIGHTENED_SHADE, null);
+                        "Under tightened inspection", ChartStyle.TIGHTENED_SHADE, null);
             }
             if (reduced) {
                 NativeCharts.addBars(bands, names, NativeCharts.numbers(sheet, 1, n, first + 8),
-                        "Judged under reduced inspection", ChartStyle.REDUCED_SHADE, null);
+                        "Under reduced inspection", ChartStyle.REDUCED_SHADE, null);
             }
             chart.plot(bands);
         }
@@ -377,10 +403,23 @@ public final class SupplierReport {
                 NativeCharts.Look.line(ChartStyle.ALERT, 1.5, PresetLineDash.DASH));
         NativeCharts.addLine(lines, names, NativeCharts.numbers(sheet, 1, n, first + 3), "Lower control limit",
                 NativeCharts.Look.line(ChartStyle.ALERT, 1.5, PresetLineDash.SYSTEM_DASH));
-        NativeCharts.addLine(lines, names, NativeCharts.numbers(sheet, 1, n, first + 5), "Outside the control limits",
-                NativeCharts.Look.markers(ChartStyle.ALERT, MarkerStyle.TRIANGLE, 11));
-        NativeCharts.addLine(lines, names, NativeCharts.numbers(sheet, 1, n, first + 6), "Lot rejected",
-                NativeCharts.Look.markers(ChartStyle.INK, MarkerStyle.X, 10));
+        // A large triangle under a small cross, so that a rejected lot outside the limits shows both marks, and the
+        // triangle labelled with what it means.
+        // Marks only where there is something to mark, so that the legend lists no mark the chart lacks.
+        if (audit.pChart().stream().anyMatch(QualityStatistics.PChartPoint::outOfControl)) {
+            NativeCharts.addLine(lines, names, NativeCharts.numbers(sheet, 1, n, first + 5),
+                    "Outside the control limits", NativeCharts.Look.markers(ChartStyle.ALERT, MarkerStyle.TRIANGLE, 15));
+            int at = 0;
+            while (!audit.pChart().get(at).outOfControl()) {
+                at++;
+            }
+            // The label on the side with room: left of a late lot, right of an early one.
+            NativeCharts.labelWithName(lines, lines.getSeriesCount() - 1, ChartStyle.ALERT, at > n / 2);
+        }
+        if (audit.lotsInOrder().stream().anyMatch(lot -> !lot.accepted())) {
+            NativeCharts.addLine(lines, names, NativeCharts.numbers(sheet, 1, n, first + 6), "Lot rejected",
+                    NativeCharts.Look.markers(ChartStyle.INK, MarkerStyle.X, 7));
+        }
         chart.plot(lines);
         WorkbookLayout.print(workbook, sheet, true, 18, 34, 0, true, title, subject, generated);
     }
@@ -448,8 +487,9 @@ public final class SupplierReport {
         /** A line of text in a column of the given width, its row as tall as its wrapped lines need. */
         void line(XSSFRow row, String text, CellStyle style, int width, float lineHeight) {
             put(row, 0, text, style);
-            // The column holds about 1.2 characters of body text per character of width: estimate the wrapped lines.
-            int lines = Math.max(1, (int) Math.ceil(text.length() / (width * 1.3)));
+            // The column holds about 1.1 characters of body text per character of width (LibreOffice's Liberation
+            // Sans wraps earlier than Calibri would): estimate the wrapped lines from that.
+            int lines = Math.max(1, (int) Math.ceil(text.length() / (width * 1.1)));
             row.setHeightInPoints(lines * lineHeight + 2);
         }
     }
@@ -501,7 +541,8 @@ public final class SupplierReport {
                 .append(LotReportHtml.escape(title(audit))).append("</title>\n<style>\n")
                 .append("@page { size: A4; margin: 12mm; }\n")
                 .append("body { font: 10pt/1.35 system-ui, sans-serif; color: #222; max-width: 190mm; margin: 0 auto; }\n")
-                .append("h1 { font-size: 14pt; } h2 { font-size: 11pt; margin: 10pt 0 3pt; }\n")
+                .append("h1 { font-size: 14pt; } h2 { font-size: 11pt; margin: 10pt 0 3pt; break-after: avoid; }\n")
+                .append("tr, svg { break-inside: avoid; }\n")
                 .append("table { border-collapse: collapse; } td, th { border-bottom: 1px solid #ccc; padding: 2pt 6pt;")
                 .append(" text-align: left; } th { background: #f0f0f0; } td.n { text-align: right; }\n")
                 .append("svg { width: 100%; height: auto; } td:nth-child(-n+5) { white-space: nowrap; }\n")
@@ -512,6 +553,10 @@ public final class SupplierReport {
         html.append("</ul>\n<h2>Severity timeline</h2>\n<table><tr><th>Part</th><th>After lot</th><th>Switch</th>"
                 + "<th>Reason</th></tr>\n");
         for (SupplierAudit.Part part : audit.parts()) {
+            if (part.switches().isEmpty()) {
+                html.append("<tr><td>").append(LotReportHtml.escape(part.part()))
+                        .append("</td><td colspan=\"3\">normal inspection throughout</td></tr>\n");
+            }
             for (SeverityTracker.Switch change : part.switches()) {
                 html.append("<tr><td>").append(LotReportHtml.escape(part.part())).append("</td><td>")
                         .append(LotReportHtml.escape(change.lot() == null ? "-" : change.lot())).append("</td><td>")
@@ -521,14 +566,14 @@ public final class SupplierReport {
         }
         html.append("</table>\n");
         if (!audit.pChart().isEmpty()) {
-            html.append("<h2>p-chart</h2>\n").append(svg(pChart(audit), 900, 430)).append('\n');
+            html.append("<h2>p-chart</h2>\n").append(svg(pChart(audit), 900, 400)).append('\n');
         }
         if (!audit.pareto().isEmpty()) {
             List<QualityStatistics.ParetoBar> bars = audit.pareto();
-            html.append("<h2>Defect types</h2>\n").append(svg(Charts.pareto("Pareto of defect types",
+            html.append("<h2>Defect types</h2>\n").append(svg(Charts.pareto(paretoTitle(audit),
                     bars.stream().map(QualityStatistics.ParetoBar::defect).toList(),
                     bars.stream().mapToLong(QualityStatistics.ParetoBar::count).toArray(),
-                    bars.stream().mapToDouble(QualityStatistics.ParetoBar::cumulativeShare).toArray()), 900, 380))
+                    bars.stream().mapToDouble(QualityStatistics.ParetoBar::cumulativeShare).toArray()), 900, 330))
                     .append('\n');
         }
         MeasurementCharts charts = audit.measurements();
@@ -552,6 +597,18 @@ public final class SupplierReport {
         }
         html.append("</table>\n</body></html>\n");
         return html.toString();
+    }
+
+    /** The Pareto chart's title, naming the defect type that leads (or the types that share the lead). */
+    static String paretoTitle(SupplierAudit audit) {
+        List<QualityStatistics.ParetoBar> bars = audit.pareto();
+        if (bars.isEmpty()) {
+            return "Pareto of defect types";
+        }
+        List<String> leading = bars.stream().filter(b -> b.count() == bars.get(0).count())
+                .map(QualityStatistics.ParetoBar::defect).toList();
+        return "Pareto of defect types: " + (leading.size() == 1 ? leading.get(0) + " leads"
+                : String.join(" and ", leading) + " share the lead");
     }
 
     /** A rejected lot named for the audit: record, lot, part and receipt date, or that the date is missing. */
