@@ -30,14 +30,25 @@ public final class VariablesDesigner {
 
     /** A plan already in use, with its risks and the designs it can be set beside (its k range is NaN). */
     public static Design evaluate(RiskPoints points, VariablesPlan plan) {
-        double z1 = VariablesPlan.standardDistance(points.aql());
-        double z2 = VariablesPlan.standardDistance(points.ltpd());
-        double za = VariablesPlan.standardDistance(points.alpha());
-        double zb = VariablesPlan.standardDistance(points.beta());
-        double exact = Math.pow((za + zb) / (z1 - z2), 2);
-        double closedK = (za * z2 + zb * z1) / (za + zb);
-        return new Design(plan, PlanRisks.of(plan, new OcModel.Binomial(), points), Double.NaN, Double.NaN, exact,
-                closedK, exact * (1 + closedK * closedK / 2));
+        Normal normal = Normal.of(points);
+        return new Design(plan, PlanRisks.of(plan, new OcModel.Binomial(), points), Double.NaN, Double.NaN,
+                normal.size(), normal.k(), normal.wallis());
+    }
+
+    /**
+     * The known-sigma design of the normal approximation: its real-valued n and its k, with Wallis's n for an
+     * unknown sigma, where the search for an exact plan starts and against which it is shown.
+     */
+    private record Normal(double size, double k, double wallis) {
+        static Normal of(RiskPoints points) {
+            double z1 = VariablesPlan.standardDistance(points.aql());
+            double z2 = VariablesPlan.standardDistance(points.ltpd());
+            double za = VariablesPlan.standardDistance(points.alpha());
+            double zb = VariablesPlan.standardDistance(points.beta());
+            double size = Math.pow((za + zb) / (z1 - z2), 2);
+            double k = (za * z2 + zb * z1) / (za + zb);
+            return new Normal(size, k, size * (1 + k * k / 2));
+        }
     }
 
     /**
@@ -69,20 +80,16 @@ public final class VariablesDesigner {
         if (points.ltpd() >= 1) {
             throw new IllegalArgumentException("a variables plan's LTPD is a fraction beyond the limit, below 100%");
         }
-        double z1 = VariablesPlan.standardDistance(points.aql());
-        double z2 = VariablesPlan.standardDistance(points.ltpd());
-        double za = VariablesPlan.standardDistance(points.alpha());
-        double zb = VariablesPlan.standardDistance(points.beta());
-        double exact = Math.pow((za + zb) / (z1 - z2), 2);
-        double closedK = (za * z2 + zb * z1) / (za + zb);
-        double wallis = exact * (1 + closedK * closedK / 2);
+        Normal normal = Normal.of(points);
+        double exact = normal.size();
         OcModel model = new OcModel.Binomial();
         int n = Math.max(fewest, Math.max(sigmaKnown ? 1 : 2, (int) Math.ceil(exact * (1 - 1e-12))));
         for (; n <= MOST_UNITS; n++) {
             double[] range = kRange(points, n, sigmaKnown);
             if (range[0] <= range[1]) {
                 VariablesPlan plan = new VariablesPlan(n, 0.5 * (range[0] + range[1]), sigmaKnown);
-                return new Design(plan, PlanRisks.of(plan, model, points), range[0], range[1], exact, closedK, wallis);
+                return new Design(plan, PlanRisks.of(plan, model, points), range[0], range[1], exact, normal.k(),
+                        normal.wallis());
             }
         }
         return null;

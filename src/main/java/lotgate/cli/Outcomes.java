@@ -1,0 +1,97 @@
+package lotgate.cli;
+
+import java.io.PrintWriter;
+import lotgate.files.InputFileException;
+import lotgate.files.OutputFileException;
+import lotgate.jobs.JobException;
+import picocli.CommandLine;
+
+/**
+ * How a command that did not end well is told to the user: one line, {@code lotgate: ...}, the stack trace only
+ * with --debug, and the documented exit code of what went wrong.
+ */
+final class Outcomes {
+    private Outcomes() {
+    }
+
+    static int usageError(CommandLine.ParameterException e, String[] args) {
+        CommandLine cli = e.getCommandLine();
+        PrintWriter err = cli.getErr();
+        String message = e.getMessage();
+        if (e instanceof CommandLine.UnmatchedArgumentException unmatched && !unmatched.getUnmatched().isEmpty()) {
+            String first = unmatched.getUnmatched().get(0);
+            message = cli.getParent() == null && !first.startsWith("-")
+                    ? "unknown command '" + first + "'; the commands are "
+                            + String.join(", ", cli.getSubcommands().keySet())
+                    : "unknown option or extra argument '" + first + "'";
+        }
+        err.println("lotgate: " + lotgate.history.Identifiers.escape(lotgate.history.StoreLocation.masked(message))
+                + " (see '" + cli.getCommandSpec().qualifiedName() + " --help')");
+        if (debugRequested(args)) {
+            e.printStackTrace(err);
+        }
+        err.flush();
+        return ExitCode.USAGE;
+    }
+
+    static int failure(Exception e, CommandLine cli, CommandLine.ParseResult parsed) {
+        PrintWriter err = cli.getErr();
+        int code;
+        String message;
+        if (e instanceof InputFileException) {
+            code = ExitCode.BAD_INPUT;
+            message = e.getMessage();
+        } else if (e instanceof OutputFileException) {
+            code = ExitCode.CANNOT_WRITE;
+            message = e.getMessage();
+        } else if (e instanceof lotgate.history.StoreException.Missing) {
+            code = ExitCode.BAD_INPUT;
+            message = e.getMessage();
+        } else if (e instanceof lotgate.history.StoreException.DuplicateLot duplicate) {
+            code = ExitCode.USAGE;
+            message = e.getMessage() + "; to correct that record, sentence again with --supersedes "
+                    + duplicate.existing() + " --reason TEXT";
+        } else if (e instanceof lotgate.history.StoreException) {
+            code = ExitCode.STORE;
+            message = e.getMessage();
+        } else if (e instanceof JobException refused) {
+            code = exitCode(refused.kind());
+            message = refused.getMessage() + (refused.kind() == JobException.Kind.INVALID_REQUEST
+                    ? " (see '" + cli.getCommandSpec().qualifiedName() + " --help')" : "");
+        } else if (e instanceof Main.Failure f) {
+            code = f.exitCode();
+            message = f.getMessage();
+        } else {
+            code = ExitCode.INTERNAL;
+            message = "internal fault: " + lotgate.history.StoreLocation.masked(String.valueOf(e))
+                    + " (rerun with --debug and report it)";
+        }
+        if (message != null) {
+            err.println("lotgate: " + lotgate.history.Identifiers.escape(lotgate.history.StoreLocation.masked(message)));
+        }
+        if (debugRequested(parsed.originalArgs().toArray(String[]::new))) {
+            e.printStackTrace(err);
+        }
+        err.flush();
+        return code;
+    }
+
+    /** The exit code that stands for a job's refusal of its request. */
+    static int exitCode(JobException.Kind kind) {
+        return switch (kind) {
+            case INVALID_REQUEST, CONFLICT, NOT_FOUND -> ExitCode.USAGE;
+            case BAD_INPUT -> ExitCode.BAD_INPUT;
+            case INCOMPLETE_SAMPLE -> ExitCode.INCOMPLETE_SAMPLE;
+            case DISCONTINUED -> ExitCode.DISCONTINUED;
+        };
+    }
+
+    private static boolean debugRequested(String[] args) {
+        for (String arg : args) {
+            if (arg.equals("--debug")) {
+                return true;
+            }
+        }
+        return false;
+    }
+}
