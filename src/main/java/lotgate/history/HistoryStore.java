@@ -186,6 +186,26 @@ public final class HistoryStore implements AutoCloseable {
         T run() throws SQLException;
     }
 
+    /** What is done with each row of a query's result. */
+    private interface EachRow {
+        void accept(ResultSet row) throws SQLException;
+    }
+
+    /** Runs a query whose parameters are a supplier and, when not null, a part, handing it each row. */
+    private void eachRow(String sql, String supplier, String part, EachRow each) throws SQLException {
+        try (PreparedStatement query = connection.prepareStatement(sql)) {
+            query.setString(1, supplier);
+            if (part != null) {
+                query.setString(2, part);
+            }
+            try (ResultSet result = query.executeQuery()) {
+                while (result.next()) {
+                    each.accept(result);
+                }
+            }
+        }
+    }
+
     private void execute(String sql) throws SQLException {
         try (Statement statement = connection.createStatement()) {
             statement.execute(sql);
@@ -690,17 +710,7 @@ public final class HistoryStore implements AutoCloseable {
                         + " GROUP BY defect ORDER BY total DESC, defect";
         return read("read the defect types", () -> {
             Map<String, Long> types = new LinkedHashMap<>();
-            try (PreparedStatement query = connection.prepareStatement(sql)) {
-                query.setString(1, supplier);
-                if (part != null) {
-                    query.setString(2, part);
-                }
-                try (ResultSet result = query.executeQuery()) {
-                    while (result.next()) {
-                        types.put(result.getString(1), result.getLong(2));
-                    }
-                }
-            }
+            eachRow(sql, supplier, part, result -> types.put(result.getString(1), result.getLong(2)));
             return types;
         });
     }
@@ -715,18 +725,8 @@ public final class HistoryStore implements AutoCloseable {
                 + " AND seq NOT IN (SELECT supersedes FROM lot_record WHERE supersedes > 0)";
         return read("read the defect types", () -> {
             Map<Long, Map<String, Long>> byLot = new java.util.HashMap<>();
-            try (PreparedStatement query = connection.prepareStatement(sql)) {
-                query.setString(1, supplier);
-                if (part != null) {
-                    query.setString(2, part);
-                }
-                try (ResultSet result = query.executeQuery()) {
-                    while (result.next()) {
-                        byLot.computeIfAbsent(result.getLong(1), k -> new LinkedHashMap<>())
-                                .merge(result.getString(2), result.getLong(3), Long::sum);
-                    }
-                }
-            }
+            eachRow(sql, supplier, part, result -> byLot.computeIfAbsent(result.getLong(1),
+                    k -> new LinkedHashMap<>()).merge(result.getString(2), result.getLong(3), Long::sum));
             return byLot;
         });
     }
