@@ -79,20 +79,23 @@ public final class ImportHistory {
         List<Integer> sheetRows = new ArrayList<>();
         Map<List<String>, Integer> seen = new HashMap<>();
         Map<String, Integer> columns = new HashMap<>();
+        HeaderSearch search = new HeaderSearch();
+        source.findHeader(texts -> search.missing(texts).isEmpty());
         source.read(request.sheet(), (row, cells) -> {
             rowsRead.accept(row);
             if (columns.isEmpty()) {
+                List<String> texts = cells.stream().map(Cell::text).toList();
+                if (!search.missing(texts).isEmpty()) {
+                    search.look(row, texts);
+                    if (row >= SheetSource.HEADER_SEARCH) {
+                        throw search.refusal(file, source, sheetName);
+                    }
+                    return;
+                }
                 for (Cell cell : cells) {
                     String name = cell.text().trim().toLowerCase(Locale.ROOT);
                     if (REQUIRED.contains(name) || OPTIONAL.contains(name)) {
-                        columns.put(name, cell.column());
-                    }
-                }
-                for (String name : REQUIRED) {
-                    if (!columns.containsKey(name)) {
-                        throw new SheetException(file, "no '" + name + "' column in the header, "
-                                + source.whereRow(sheetName, row) + "; a list of past lots needs "
-                                + String.join(", ", REQUIRED));
+                        columns.putIfAbsent(name, cell.column());
                     }
                 }
                 return;
@@ -107,10 +110,50 @@ public final class ImportHistory {
             lots.add(lot);
             sheetRows.add(row);
         });
+        if (columns.isEmpty()) {
+            throw search.refusal(file, source, sheetName);
+        }
         if (lots.isEmpty()) {
             throw new SheetException(file, "no lots to import below the header");
         }
         return new Lots(request, source, sheetName, lots, sheetRows);
+    }
+
+    /**
+     * The search for the header row: the first of the top rows that names every required column, so that a
+     * title block above the table is passed over; the row that came closest is kept for the message.
+     */
+    private static final class HeaderSearch {
+        private int looked;
+        private int closestRow;
+        private List<String> closestMissing = REQUIRED;
+
+        /** The required columns the row does not name. */
+        List<String> missing(List<String> texts) {
+            List<String> names = texts.stream().map(t -> t.trim().toLowerCase(Locale.ROOT)).toList();
+            return REQUIRED.stream().filter(name -> !names.contains(name)).toList();
+        }
+
+        void look(int row, List<String> texts) {
+            looked++;
+            List<String> missing = missing(texts);
+            if (missing.size() < closestMissing.size()) {
+                closestRow = row;
+                closestMissing = missing;
+            }
+        }
+
+        SheetException refusal(Path file, SheetSource source, String sheetName) {
+            if (looked == 0) {
+                return new SheetException(file, "there is no header row: the file is empty");
+            }
+            String closest = closestRow == 0 ? "none of them names any of these"
+                    : "the closest, " + source.whereRow(sheetName, closestRow) + ", lacks '"
+                            + String.join("', '", closestMissing) + "'";
+            return new SheetException(file, "no header row: none of the first " + looked + " non-empty rows (up to "
+                    + SheetSource.HEADER_SEARCH + " are looked at) names every column a list of past lots needs ("
+                    + String.join(", ", REQUIRED) + "); " + closest);
+        }
     }
 
     /**

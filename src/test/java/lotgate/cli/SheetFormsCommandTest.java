@@ -158,4 +158,25 @@ class SheetFormsCommandTest {
             assertEquals("lotgate: " + file + ": sheet 'Sample' " + c[2] + "\n", result.err());
         }
     }
+
+    @Test
+    void importFindsTheHeaderBelowATitleBlockAndSaysWhichRowCameClosest() throws IOException {
+        List<Object> header = row("Lot", "Supplier", "Part", "Received", "Sample size", "Nonconforming", "Verdict");
+        List<Object> lot = row("L-1", "Arnwick Fasteners (invented)", "AF-M8-40", "2026-03-14", 132, 1, "accept");
+        Path titled = xlsx("titled.xlsx", List.of(row("Past lots, Arnwick Fasteners (invented)"), row(),
+                row("Exported", "2026-11-30"), header, lot));
+        String store = folder.resolve("h.sqlite").toString();
+        Cli.Result imported = Cli.run("import", titled.toString(), "--store", store, "--create-store");
+        assertEquals(ExitCode.OK, imported.exitCode(), imported.err());
+        assertTrue(imported.out().startsWith("Imported 1 lots") || imported.out().startsWith("Imported 1 lot"),
+                imported.out());
+        Path headless = xlsx("headless.xlsx", List.of(row("Past lots"), row("Lot", "Supplier", "Part", "Received",
+                "Sample", "Verdict"), lot));
+        Cli.Result refused = Cli.run("import", headless.toString(), "--store", store);
+        assertEquals(ExitCode.BAD_INPUT, refused.exitCode(), refused.err());
+        assertEquals("lotgate: " + headless + ": no header row: none of the first 3 non-empty rows (up to 50 are"
+                + " looked at) names every column a list of past lots needs (lot, supplier, part, received, sample"
+                + " size, nonconforming, verdict); the closest, sheet 'Sample' row 2, lacks 'sample size',"
+                + " 'nonconforming'\n", refused.err());
+    }
 }
