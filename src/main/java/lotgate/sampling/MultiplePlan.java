@@ -6,7 +6,7 @@ import java.util.List;
  * A multiple-sampling plan of up to {@value #MOST_STAGES} stages, given stage by stage: after each stage the
  * cumulative count is held against that stage's acceptance and rejection numbers.
  */
-public record MultiplePlan(List<Stage> stages) implements Plan {
+public record MultiplePlan(List<Stage> stages) implements LatticePlan {
     /** The most stages a multiple plan may have (as in the multiple plans of ISO 2859-1:1999, common practice). */
     public static final int MOST_STAGES = 7;
 
@@ -26,27 +26,7 @@ public record MultiplePlan(List<Stage> stages) implements Plan {
     }
 
     @Override
-    public double acceptance(OcModel model, double quality) {
-        return Stages.walk(stages, model, quality, 0).acceptance();
-    }
-
-    @Override
-    public double rejection(OcModel model, double quality) {
-        return Stages.walk(stages, model, quality, 0).rejection();
-    }
-
-    @Override
-    public double averageSampleNumber(OcModel model, double quality) {
-        return Stages.walk(stages, model, quality, 0).averageSample();
-    }
-
-    @Override
-    public double averageOutgoingQuality(OcModel model, double quality, int lotSize) {
-        return Stages.walk(stages, model, quality, lotSize).outgoing();
-    }
-
-    @Override
-    public double averageTotalInspection(OcModel model, double quality, int lotSize) {
-        return Stages.totalInspection(Stages.walk(stages, model, quality, lotSize), lotSize);
+    public Stages.Outcome walk(OcModel model, double quality, int lotSize) {
+        return Stages.walk(stages, model, quality, lotSize);
     }
 }

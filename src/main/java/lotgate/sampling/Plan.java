@@ -4,9 +4,11 @@ package lotgate.sampling;
  * An acceptance sampling plan: the rule that turns what a sample shows into accept or reject.
  *
  * <p>Each kind is a record that implements the operating characteristics itself, so that a new kind
- * cannot compile until it answers every question below (Java 17 has no pattern switch).
+ * cannot compile until it answers every question below (Java 17 has no pattern switch); a kind walked over a
+ * lattice of (units, count) answers them all through its {@code walk} ({@link LatticePlan}).
  */
-public sealed interface Plan permits SinglePlan, DoublePlan, MultiplePlan, SequentialPlan, VariablesPlan {
+public sealed interface Plan permits SinglePlan, DoublePlan, LatticePlan,
+        VariablesPlan {
 
     /** The plan kind's name as written in plan files and in JSON output. */
     String scheme();

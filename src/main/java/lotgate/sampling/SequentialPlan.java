@@ -12,7 +12,7 @@ package lotgate.sampling;
  * @param slope      the common slope s of both lines
  * @param truncation n_t, the most units inspected
  */
-public record SequentialPlan(double h1, double h2, double slope, int truncation) implements Plan {
+public record SequentialPlan(double h1, double h2, double slope, int truncation) implements LatticePlan {
 
     public SequentialPlan {
         if (!(h1 > 0) || !(h2 > 0) || Double.isInfinite(h1) || Double.isInfinite(h2)) {
@@ -91,27 +91,7 @@ public record SequentialPlan(double h1, double h2, double slope, int truncation)
     }
 
     @Override
-    public double acceptance(OcModel model, double quality) {
-        return SequentialLattice.walk(this, model, quality, 0).acceptance();
-    }
-
-    @Override
-    public double rejection(OcModel model, double quality) {
-        return SequentialLattice.walk(this, model, quality, 0).rejection();
-    }
-
-    @Override
-    public double averageSampleNumber(OcModel model, double quality) {
-        return SequentialLattice.walk(this, model, quality, 0).averageSample();
-    }
-
-    @Override
-    public double averageOutgoingQuality(OcModel model, double quality, int lotSize) {
-        return SequentialLattice.walk(this, model, quality, lotSize).outgoing();
-    }
-
-    @Override
-    public double averageTotalInspection(OcModel model, double quality, int lotSize) {
-        return Stages.totalInspection(SequentialLattice.walk(this, model, quality, lotSize), lotSize);
+    public Stages.Outcome walk(OcModel model, double quality, int lotSize) {
+        return SequentialLattice.walk(this, model, quality, lotSize);
     }
 }
