@@ -575,11 +575,7 @@ public final class PlanFormat {
         }
 
         private boolean bool(JsonNode parent, String path) {
-            JsonNode value = field(parent, path);
-            if (!value.isBoolean()) {
-                throw invalid("field '" + path + "' must be true or false");
-            }
-            return value.asBoolean();
+            return typed(parent, path, JsonNode::isBoolean, "true or false").asBoolean();
         }
 
         private JsonNode field(JsonNode parent, String path) {
@@ -593,27 +589,25 @@ public final class PlanFormat {
         }
 
         private JsonNode object(JsonNode parent, String path) {
-            JsonNode value = field(parent, path);
-            if (!value.isObject()) {
-                throw invalid("field '" + path + "' must be an object");
-            }
-            return value;
+            return typed(parent, path, JsonNode::isObject, "an object");
         }
 
         private String text(JsonNode parent, String path) {
-            JsonNode value = field(parent, path);
-            if (!value.isTextual()) {
-                throw invalid("field '" + path + "' must be a string");
-            }
-            return value.asText();
+            return typed(parent, path, JsonNode::isTextual, "a string").asText();
         }
 
         private double number(JsonNode parent, String path) {
+            return typed(parent, path, JsonNode::isNumber, "a number").asDouble();
+        }
+
+        /** The field, refused unless it is of the kind named. */
+        private JsonNode typed(JsonNode parent, String path, java.util.function.Predicate<JsonNode> kind,
+                String what) {
             JsonNode value = field(parent, path);
-            if (!value.isNumber()) {
-                throw invalid("field '" + path + "' must be a number");
+            if (!kind.test(value)) {
+                throw invalid("field '" + path + "' must be " + what);
             }
-            return value.asDouble();
+            return value;
         }
 
         private int wholeNumber(JsonNode parent, String path, int least) {
