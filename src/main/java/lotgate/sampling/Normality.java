@@ -27,16 +27,9 @@ public final class Normality {
         }
         double[] sorted = values.clone();
         Arrays.sort(sorted);
-        double mean = 0;
-        for (double v : sorted) {
-            mean += v;
-        }
-        mean /= n;
-        double squares = 0;
-        for (double v : sorted) {
-            squares += (v - mean) * (v - mean);
-        }
-        double s = Math.sqrt(squares / (n - 1));
+        SampleMoments moments = SampleMoments.of(sorted);
+        double mean = moments.mean();
+        double s = moments.deviation();
         if (!(s > 0)) {
             return new Result(Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, 0.0);
         }

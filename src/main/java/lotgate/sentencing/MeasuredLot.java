@@ -7,6 +7,7 @@ import lotgate.plan.Measurement;
 import lotgate.sampling.NoncentralT;
 import lotgate.sampling.Normality;
 import lotgate.sampling.OcModel;
+import lotgate.sampling.SampleMoments;
 import lotgate.sampling.VariablesPlan;
 
 /**
@@ -51,16 +52,9 @@ public record MeasuredLot(boolean accepted, int n, double mean, double deviation
         if (n != plan.n()) {
             throw new IllegalArgumentException("the plan measures " + plan.n() + " units, the sample has " + n);
         }
-        double mean = 0;
-        for (double v : values) {
-            mean += v;
-        }
-        mean /= n;
-        double squares = 0;
-        for (double v : values) {
-            squares += (v - mean) * (v - mean);
-        }
-        double sampleDeviation = n > 1 ? Math.sqrt(squares / (n - 1)) : 0.0;
+        SampleMoments moments = SampleMoments.of(values);
+        double mean = moments.mean();
+        double sampleDeviation = moments.deviation();
         double deviation = spec.sigmaKnown() ? spec.sigma() : sampleDeviation;
         List<String> warnings = new ArrayList<>();
         double lower = spec.lower() == null ? Double.NaN : (mean - spec.lower()) / deviation;
