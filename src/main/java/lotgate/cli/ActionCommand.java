@@ -1,8 +1,8 @@
 package lotgate.cli;
 
-import java.io.PrintWriter;
 import java.time.LocalDate;
 import lotgate.jobs.RecordCorrectiveAction;
+import lotgate.report.results.ActionRendering;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -28,6 +28,9 @@ final class ActionCommand implements Runnable {
     @Mixin
     RecordingStoreOption storeOption;
 
+    @Mixin
+    OutputFormat format;
+
     @Override
     public void run() {
         RecordCorrectiveAction.Request request = new RecordCorrectiveAction.Request(supplier, part, reason, date,
@@ -35,9 +38,6 @@ final class ActionCommand implements Runnable {
         RecordCorrectiveAction.check(request);
         storeOption.prepareForRecording();
         RecordCorrectiveAction.Result result = RecordCorrectiveAction.run(request);
-        PrintWriter out = storeOption.mixee.commandLine().getOut();
-        out.println("Corrective action for " + result.supplier() + ", part " + result.part() + " recorded as #"
-                + result.record().seq() + " in " + result.store() + " (chain hash " + result.record().hash() + ").");
-        out.flush();
+        format.print(result, ActionRendering::text, ActionRendering::json, ActionRendering::csv);
     }
 }

@@ -20,7 +20,7 @@ final class CompareCommand implements Runnable {
     @Override
     public void run() {
         format.print(ComparePlans.run(new ComparePlans.Request(plans, models.named(), models.lotSize,
-                levels.aql, levels.ltpd, chart.file, asnChart.file)), CompareRendering::text, CompareRendering::json, CompareRendering::csv);
+                levels.aql, levels.ltpd, chart.file(), asnChart.file)), CompareRendering::text, CompareRendering::json, CompareRendering::csv);
     }
 
     @Parameters(arity = "2..*", paramLabel = "PLAN", description = "Two or more plans: plans/*.json files or n,c.")
@@ -33,7 +33,7 @@ final class CompareCommand implements Runnable {
     SharedOptions.MarkedLevels levels;
 
     @Mixin
-    SharedOptions.Chart chart;
+    SharedOptions.OcCurvesChart chart;
 
     @Mixin
     SharedOptions.AsnChart asnChart;

@@ -24,7 +24,7 @@ final class CurveCommand implements Runnable {
     public void run() {
         format.print(EvaluatePlan.run(new EvaluatePlan.Request(planFile, defectClass, sampleSize,
                 acceptance, models.named(), models.lotSize, levels.aql, levels.ltpd, upTo, steps,
-                new EvaluatePlan.ChartFiles(chart.file, ocChart, aoqChart, atiChart, asnChart.file), curtailed.on)), CurveRendering::text, CurveRendering::json, CurveRendering::csv);
+                new EvaluatePlan.ChartFiles(chart.file(), ocChart, aoqChart, atiChart, asnChart.file), curtailed.on)), CurveRendering::text, CurveRendering::json, CurveRendering::csv);
     }
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "PLAN", description = "A saved plan file (plans/*.json).")
@@ -58,7 +58,7 @@ final class CurveCommand implements Runnable {
     int steps;
 
     @Mixin
-    SharedOptions.Chart chart;
+    SharedOptions.CurvesChart chart;
 
     @Option(names = "--oc-chart", paramLabel = "FILE", description = "Draw the OC curve alone; .png or .svg.")
     Path ocChart;

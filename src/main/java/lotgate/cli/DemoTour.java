@@ -32,13 +32,13 @@ final class DemoTour {
                 "--description", "Invented demo: Arnwick Fasteners M8 flange bolt AF-M8-40, lots of 5000");
         step("   Its curves, with the OC, AOQ and ATI charts in one file:",
                 "curve", plans + "/arnwick-af-m8-40.json", "--steps", "10",
-                "--chart", charts + "/arnwick-af-m8-40.png", "--oc-chart", charts + "/arnwick-af-m8-40-oc.svg",
+                "--curves-chart", charts + "/arnwick-af-m8-40.png", "--oc-chart", charts + "/arnwick-af-m8-40-oc.svg",
                 "--aoq-chart", charts + "/arnwick-af-m8-40-aoq.svg");
         step("2. A zero-acceptance alternative for the same bolts meets the LTPD point with fewer units:",
                 "design", "--aql", "1%", "--ltpd", "5%", "--acceptance", "0", "--lot-size", "5000");
         step("   Side by side, the zero-acceptance plan rejects far more good lots (producer's risk):",
                 "compare", plans + "/arnwick-af-m8-40.json", "45,0", "--lot-size", "5000",
-                "--chart", charts + "/arnwick-compare.png");
+                "--oc-chart", charts + "/arnwick-compare.png");
         step("3. Kestrune Castings sends impeller housings (part KC-114) in isolated lots of 400: the"
                         + " hypergeometric model counts the lot's actual nonconforming units.",
                 "design", "--aql", "1%", "--ltpd", "6%", "--model", "hypergeometric", "--lot-size", "400",
@@ -46,7 +46,7 @@ final class DemoTour {
                 "--description", "Invented demo: Kestrune Castings impeller housing KC-114, isolated lots of 400");
         step("",
                 "curve", plans + "/kestrune-kc-114.json", "--steps", "10",
-                "--chart", charts + "/kestrune-kc-114.png");
+                "--curves-chart", charts + "/kestrune-kc-114.png");
         step("4. Mirelle Seals' O-rings (part MS-22) are judged by surface nonconformities per unit: the"
                         + " Poisson model, with levels per unit (1.5% = 1.5 per 100 units).",
                 "design", "--aql", "1.5%", "--ltpd", "8%", "--model", "poisson", "--lot-size", "10000",
@@ -113,7 +113,7 @@ final class DemoTour {
                 "--description", "Invented demo: Quorrin Plastics snap clip QP-7, sequential plan");
         step("    What each costs on average and at most, on one table, one OC chart and one ASN chart:",
                 "compare", plans + "/quorrin-qp-7.json", plans + "/quorrin-qp-7-double.json",
-                plans + "/quorrin-qp-7-sequential.json", "--chart", charts + "/quorrin-compare-oc.png",
+                plans + "/quorrin-qp-7-sequential.json", "--oc-chart", charts + "/quorrin-compare-oc.png",
                 "--asn-chart", charts + "/quorrin-compare-asn.png");
         step("15. Quorrin lot QP-2611 under the double plan. After the first sample of 69 clips (sheet rows 2"
                         + " to 70) one clip has failed: no decision yet (exit code 9), nothing is recorded:",
@@ -121,11 +121,11 @@ final class DemoTour {
                 "--rows", "2-70", "--store", store);
         step("    With the second sample on the sheet the lot is accepted and recorded, with its sampling chart:",
                 "sentence", plans + "/quorrin-qp-7-double.json", sheets + "/quorrin-qp2611.csv", "--store", store,
-                "--chart", charts + "/quorrin-qp2611-double.png", "--report", reports + "/QP-2611.html");
+                "--sampling-chart", charts + "/quorrin-qp2611-double.png", "--report", reports + "/QP-2611.html");
         step("    The same clips, in the order tested, under the sequential plan (a trial, not recorded): it"
                         + " would have stopped after 96 clips:",
                 "sentence", plans + "/quorrin-qp-7-sequential.json", sheets + "/quorrin-qp2611.csv", "--no-record",
-                "--chart", charts + "/quorrin-qp2611-sequential.png");
+                "--sampling-chart", charts + "/quorrin-qp2611-sequential.png");
         step("    And under the single plan, on its 132 clips (a trial, not recorded):",
                 "sentence", plans + "/quorrin-qp-7.json", sheets + "/quorrin-qp2611.csv", "--rows", "2-133",
                 "--no-record", "--format", "csv");

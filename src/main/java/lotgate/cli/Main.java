@@ -135,6 +135,7 @@ public final class Main implements Runnable {
         cli.setExecutionExceptionHandler(Outcomes::failure);
         cli.setCaseInsensitiveEnumValuesAllowed(true);
         cli.getCommandSpec().usageMessage().footerHeading("%nExit codes:%n").footer(EXIT_CODES);
+        HelpLayout.apply(cli);
         return cli;
     }
 

@@ -50,7 +50,7 @@ final class ReissueCommand implements Runnable {
     SharedOptions.RecordFile record;
 
     @Mixin
-    SharedOptions.Chart chart;
+    SharedOptions.SamplingChart chart;
 
     @Mixin
     StoreOption storeOption;
@@ -60,9 +60,9 @@ final class ReissueCommand implements Runnable {
 
     @Override
     public void run() {
-        SentenceLot.Outputs outputs = new SentenceLot.Outputs(record.file, chart.file, reports.files);
+        SentenceLot.Outputs outputs = new SentenceLot.Outputs(record.file, chart.file(), reports.files);
         if (outputs.reports().isEmpty() && outputs.record() == null && outputs.chart() == null) {
-            throw new ParameterException(spec.commandLine(), "name what to write: --report, --record or --chart");
+            throw new ParameterException(spec.commandLine(), "name what to write: --report, --record or --sampling-chart");
         }
         Long seq = null;
         String lot = which;

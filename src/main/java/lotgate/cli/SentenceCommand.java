@@ -122,7 +122,7 @@ final class SentenceCommand implements Runnable {
     RecordingStoreOption storeOption;
 
     @Mixin
-    SharedOptions.Chart chart;
+    SharedOptions.SamplingChart chart;
 
     @Mixin
     SharedOptions.Reports reports;
@@ -138,7 +138,7 @@ final class SentenceCommand implements Runnable {
         int[] range = rowRange();
         SentenceLot.Request request = new SentenceLot.Request(planFile, sheetFile, sheet.name, columns(),
                 range[0], range[1], givenDetails(), lotFile, confidence.level, !noRecord, supersedes, reason, production,
-                storeOption.location(), new SentenceLot.Outputs(record.file, chart.file, reports.files));
+                storeOption.location(), new SentenceLot.Outputs(record.file, chart.file(), reports.files));
         if (!noRecord) {
             storeOption.prepareForRecording();
         }

@@ -26,10 +26,53 @@ final class SharedOptions {
         List<Path> files = new ArrayList<>();
     }
 
-    /** --chart: the command's main chart, .png or .svg. */
-    static final class Chart {
-        @Option(names = "--chart", paramLabel = "FILE")
+    /**
+     * A chart option named by what it draws, with the name all of them once shared, --chart, kept as a hidden alias
+     * so that command lines written before still work.
+     */
+    abstract static class NamedChart {
+        @Option(names = "--chart", paramLabel = "FILE", hidden = true)
+        Path formerName;
+
+        abstract Path named();
+
+        /** The file asked for under the option's name, or else under --chart. */
+        Path file() {
+            return named() != null ? named() : formerName;
+        }
+    }
+
+    /** --curves-chart: OC, AOQ and ATI stacked in one chart, .png or .svg. */
+    static final class CurvesChart extends NamedChart {
+        @Option(names = "--curves-chart", paramLabel = "FILE")
         Path file;
+
+        @Override
+        Path named() {
+            return file;
+        }
+    }
+
+    /** --oc-chart: the OC curves of the plans compared, on one chart. */
+    static final class OcCurvesChart extends NamedChart {
+        @Option(names = "--oc-chart", paramLabel = "FILE")
+        Path file;
+
+        @Override
+        Path named() {
+            return file;
+        }
+    }
+
+    /** --sampling-chart: a lot's count against the units inspected, with the plan's acceptance and rejection. */
+    static final class SamplingChart extends NamedChart {
+        @Option(names = "--sampling-chart", paramLabel = "FILE")
+        Path file;
+
+        @Override
+        Path named() {
+            return file;
+        }
     }
 
     /** --asn-chart: the ASN curve (average units inspected per lot), .png or .svg. */

@@ -41,9 +41,6 @@ final class VerifyCommand implements Runnable {
 
     @Override
     public void run() {
-        if (format.kind == OutputFormat.Kind.csv) {
-            throw new ParameterException(spec.commandLine(), "--format csv: verify prints text or json");
-        }
         List<HistoryStore.Head> kept = new ArrayList<>();
         for (String text : expected) {
             try {
@@ -53,12 +50,12 @@ final class VerifyCommand implements Runnable {
             }
         }
         VerifyStore.Result result = VerifyStore.run(new VerifyStore.Request(storeOption.location(), kept));
-        boolean json = format.kind == OutputFormat.Kind.json;
-        if (json || result.intact()) {
-            format.print(result, VerifyRendering::text, VerifyRendering::json, VerifyRendering::text);
+        boolean forPrograms = format.kind != OutputFormat.Kind.text;
+        if (forPrograms || result.intact()) {
+            format.print(result, VerifyRendering::text, VerifyRendering::json, VerifyRendering::csv);
         }
         if (!result.intact()) {
-            throw new Main.Failure(ExitCode.STORE, json ? null : VerifyRendering.damage(result));
+            throw new Main.Failure(ExitCode.STORE, forPrograms ? null : VerifyRendering.damage(result));
         }
     }
 }

@@ -856,7 +856,8 @@ public final class HistoryStore implements AutoCloseable {
             }
             if (head.seq() != last || !head.hash().equals(previous)) {
                 return damaged(last, head.seq() > last
-                        ? "the last " + (head.seq() - last) + " record(s) were removed (the chain head names record "
+                        ? "the last " + (head.seq() - last == 1 ? "record was" : head.seq() - last + " records were")
+                                + " removed (the chain head names record "
                                 + head.seq() + ", the store ends at record " + last + ")"
                         : "the chain head does not match the last record " + last);
             }

@@ -46,6 +46,28 @@ public record SwitchingRules(String edition, int tightenRejected, int tightenWit
     }
 
     /** The rules a plan family names: an edition, with any of its numbers replaced by the site's. */
+    /** The rules in words, one per line, as a quality engineer reads them. */
+    public java.util.List<String> describe() {
+        java.util.List<String> lines = new java.util.ArrayList<>();
+        lines.add(edition + " rules");
+        lines.add("normal to tightened: " + tightenRejected + " of " + tightenWithin
+                + " consecutive lots not accepted");
+        lines.add("tightened to normal: " + normalAfterAccepted + " consecutive lots accepted");
+        lines.add("normal to reduced: " + reduceAfterAccepted + " consecutive lots accepted"
+                + (reduceDefectiveLimit < 0 ? "" : ", with at most " + reduceDefectiveLimit
+                        + " nonconforming units found in them") + ", and steady production");
+        lines.add("reduced to normal: a lot not accepted, or production irregular");
+        if (discontinueRejected >= 0) {
+            lines.add("inspection discontinued: " + discontinueRejected
+                    + " lots not accepted while on tightened inspection");
+        }
+        if (discontinueLotsOnTightened >= 0) {
+            lines.add("inspection discontinued: " + discontinueLotsOnTightened
+                    + " consecutive lots on tightened inspection");
+        }
+        return lines;
+    }
+
     public static SwitchingRules fromJson(com.fasterxml.jackson.databind.JsonNode node) {
         if (node == null || node.isNull() || node.isMissingNode()) {
             return CURRENT;

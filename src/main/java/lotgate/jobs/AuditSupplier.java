@@ -103,8 +103,11 @@ public final class AuditSupplier {
                 continue;
             }
             JsonNode proof = verdict.path("evidence");
-            parts.add(verdict.path("class").asText() + ": " + verdict.path("found").asInt() + " found in "
-                    + verdict.path("sampleSize").asInt() + " (reject at " + verdict.path("rejectionNumber").asInt()
+            // Records written before the shared vocabulary name the counts "found" and "sampleSize".
+            int found = verdict.has("nonconforming") ? verdict.path("nonconforming").asInt() : verdict.path("found").asInt();
+            int inspected = verdict.has("inspected") ? verdict.path("inspected").asInt()
+                    : verdict.path("sampleSize").asInt();
+            parts.add(verdict.path("class").asText() + ": " + found + " found in " + inspected + " (reject at " + verdict.path("rejectionNumber").asInt()
                     + "), p-value " + SentenceText.percent(proof.path("pValueAtAql").asDouble()) + " at the AQL, "
                     + proof.path("interval").asText() + " " + SentenceText.percent(proof.path("lowerBound").asDouble())
                     + " to " + SentenceText.percent(proof.path("upperBound").asDouble()) + "; plan "

@@ -251,7 +251,7 @@ public final class SentenceLot {
     private static Judged counted(Request request, SavedPlan plan, Path appliedPlan, SheetSource source,
             LotDetails lot, List<String> notices) {
         if (request.outputs().chart() != null && !plan.unclassified()) {
-            throw JobException.invalid("chart", "--chart draws the sampling chart of a plan without"
+            throw JobException.invalid("chart", "--sampling-chart draws the sampling chart of a plan without"
                     + " defect classes; plan " + plan.name() + " has criteria per class");
         }
         int[] cutoffs = plan.classes().stream().flatMap(c -> Stopping.boundaries(c.plan()).stream())
@@ -272,8 +272,10 @@ public final class SentenceLot {
         int used = sentence.classes().stream().mapToInt(ClassVerdict::inspected).max().orElse(sample.units());
         if (used < sample.units()) {
             ClassVerdict first = sentence.classes().get(0);
-            notices.add("the plan decided at " + first.step() + ", after " + used + " units; the other "
-                    + (sample.units() - used) + " units on the sheet do not count toward the verdict");
+            notices.add("the plan decided at " + first.step() + ", after "
+                    + lotgate.report.Words.count(used, "unit") + "; the other "
+                    + (sample.units() - used == 1 ? "unit on the sheet does" : (sample.units() - used)
+                            + " units on the sheet do") + " not count toward the verdict");
         }
         return new DecidedLot(new LotDecision(lot, plan, appliedPlan, sample, Sha256.of(request.sheetFile()),
                 sentence, request.confidence(), Instant.now().truncatedTo(ChronoUnit.SECONDS), ToolVersion.number(),
@@ -288,7 +290,7 @@ public final class SentenceLot {
     private static Judged measured(Request request, SavedPlan plan, Path appliedPlan, SheetSource source,
             LotDetails lot, List<String> notices) {
         if (request.outputs().chart() != null) {
-            throw JobException.invalid("chart", "--chart draws the sampling chart of an attribute plan;"
+            throw JobException.invalid("chart", "--sampling-chart draws the sampling chart of an attribute plan;"
                     + " plan " + plan.name() + " judges measurements (its report shows them)");
         }
         Path sheetFile = request.sheetFile();

@@ -586,7 +586,8 @@ public final class Charts {
         String outgoing = perUnit ? "Average outgoing quality (per 100 units)" : "Average outgoing quality";
         XYPlot plot = new XYPlot(data, qualityAxisOf(perUnit), percentAxis(outgoing), renderer);
         ValueMarker limit = new ValueMarker(aoql, ChartStyle.ALERT, ChartStyle.limit());
-        limit.setLabel("AOQL " + percent(aoql) + " at incoming " + percent(aoqlAt) + "  ");
+        // The same digits as every text output gives the AOQL.
+        limit.setLabel("AOQL " + Percent.probability(aoql) + " at incoming " + Percent.probability(aoqlAt) + "  ");
         limit.setLabelFont(LABEL);
         limit.setLabelBackgroundColor(new Color(255, 255, 255, 225));
         limit.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
@@ -650,12 +651,6 @@ public final class Charts {
         axis.setNumberFormatOverride(percent);
         axis.setAutoRangeIncludesZero(true);
         return axis;
-    }
-
-    private static String percent(double fraction) {
-        DecimalFormat format = new DecimalFormat("0.####'%'", DecimalFormatSymbols.getInstance(Locale.ROOT));
-        format.setMultiplier(100);
-        return format.format(fraction);
     }
 
     private static XYPlot style(XYPlot plot) {

@@ -14,13 +14,14 @@ import lotgate.sentencing.LotDecision;
 import lotgate.sentencing.MeasuredLot;
 
 /**
- * The decision record, "lotgate-decision" version 1: one JSON object with the verdict, the lot, the
+ * The decision record, "lotgate-decision" version 2 (version 1 named the counts "sampleSize" and "found"; readers
+ * take both): one JSON object with the verdict, the lot, the
  * plan (its fingerprint and its whole content), the sheet's SHA-256, the counts and the evidence.
  * {@code sentence --format json} prints it and {@code --record FILE} saves it.
  */
 public final class DecisionJson {
     public static final String FORMAT = "lotgate-decision";
-    public static final int VERSION = 1;
+    public static final int VERSION = 2;
 
     private DecisionJson() {
     }
@@ -101,7 +102,9 @@ public final class DecisionJson {
         sheet.put("lastRow", sample.lastRow());
         sheet.put("recording", decision.measured() != null ? "measurements" : sample.passFail() ? "pass-fail"
                 : "class-counts");
-        root.put("sampleSize", sample.units());
+        // One vocabulary with the history's records: "inspected" units, "nonconforming" found among them (records
+        // written before it say "sampleSize" and "found", and are read under both names).
+        root.put("unitsOnSheet", sample.units());
         root.put("counting", decision.measured() != null ? "units measured outside the limits"
                 : decision.countsUnits() ? "nonconforming units" : "nonconformities");
         root.put("confidence", decision.confidence());
@@ -109,8 +112,8 @@ public final class DecisionJson {
         for (ClassVerdict verdict : decision.sentence().classes()) {
             ObjectNode entry = classes.addObject();
             entry.put("class", verdict.defectClass().label());
-            entry.put("sampleSize", verdict.inspected());
-            entry.put("found", verdict.found());
+            entry.put("inspected", verdict.inspected());
+            entry.put("nonconforming", verdict.found());
             entry.put("scheme", verdict.plan().scheme());
             entry.put("decidedAt", verdict.step());
             if (verdict.acceptanceNumber() >= 0) {

@@ -17,14 +17,21 @@ public final class Percent {
                 .round(new MathContext(10, RoundingMode.HALF_EVEN))) + "%";
     }
 
-    /** A probability with four significant digits, such as 95.58%, 4.425% or 6.420e-06%. */
+    /** Below this (in percent) a probability prints as "< 0.0001%": no reader acts on its digits. */
+    private static final double SMALLEST_SHOWN = 0.0001;
+
+    /**
+     * A probability with four significant digits, such as 95.58%, 95.20%, 4.425% or 0.0003917%; a whole value as
+     * it is (95%); one below 0.0001% as "< 0.0001%". Every output prints probabilities and estimated fractions
+     * this way.
+     */
     public static String probability(double fraction) {
         if (fraction == 0) {
             return "0%";
         }
         double percent = fraction * 100;
-        if (Math.abs(percent) < 0.001) {
-            return String.format(java.util.Locale.ROOT, "%.3e%%", percent);
+        if (Math.abs(percent) < SMALLEST_SHOWN) {
+            return (percent < 0 ? "> -" : "< ") + "0.0001%";
         }
         BigDecimal rounded = new BigDecimal(percent).round(FOUR_DIGITS);
         return rounded.toPlainString() + "%";

@@ -168,17 +168,9 @@ public final class SentenceText {
         return verdict.plan() instanceof lotgate.sampling.SinglePlan ? "" : " (decided at " + verdict.step() + ")";
     }
 
-    /** A fraction as percent with four significant digits. */
+    /** A fraction as percent with four significant digits, as {@link Percent#probability} prints it everywhere. */
     public static String percent(double fraction) {
-        if (fraction == 0) {
-            return "0%";
-        }
-        double value = fraction * 100;
-        if (Math.abs(value) < 0.001) {
-            return String.format(Locale.ROOT, "%.3e%%", value);
-        }
-        return new java.math.BigDecimal(value).round(new java.math.MathContext(4)).stripTrailingZeros()
-                .toPlainString() + "%";
+        return Percent.probability(fraction);
     }
 
     /** The evidence per class: count, p-value, interval, lot bound, position on the OC curve. */

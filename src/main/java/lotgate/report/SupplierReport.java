@@ -88,14 +88,14 @@ public final class SupplierReport {
         long beyond = audit.pChart().stream().filter(QualityStatistics.PChartPoint::outOfControl).count();
         lines.add("p-chart: " + beyond + " of " + audit.pChart().size() + " lots outside the 3-sigma limits");
         for (SupplierAudit.Part part : audit.parts()) {
-            lines.add("part " + part.part() + ": " + part.current().label() + " inspection now, " + part.switches().size()
-                    + " switch(es) over " + part.lots() + " lots");
+            lines.add("part " + part.part() + ": " + part.current().label() + " inspection now, "
+                    + Words.count(part.switches().size(), "switch", "switches") + " over " + Words.count(part.lots(), "lot"));
         }
         MeasurementCharts charts = audit.measurements();
         if (charts != null) {
             String unit = charts.unit().isEmpty() ? "" : " " + charts.unit();
             long outside = charts.points().stream().filter(MeasurementCharts.Point::outOfControl).count();
-            lines.add(charts.points().size() + " lot(s) judged on measurements of " + what(charts) + ": grand mean "
+            lines.add(Words.count(charts.points().size(), "lot") + " judged on measurements of " + what(charts) + ": grand mean "
                     + SentenceText.number(charts.grandMean()) + unit + ", process sigma estimated "
                     + SentenceText.number(charts.sigma()) + unit + "; " + outside + " outside the 3-sigma limits of the"
                     + " mean or s chart");

@@ -85,7 +85,7 @@ class HistoryCommandsTest {
         assertEquals(0, third.exitCode(), third.err());
         JsonNode decision = JSON.readTree(third.out());
         assertEquals("tightened", decision.get("history").get("severityApplied").asText());
-        assertEquals(166, decision.get("sampleSize").asInt());
+        assertEquals(166, decision.get("unitsOnSheet").asInt());
     }
 
     @Test

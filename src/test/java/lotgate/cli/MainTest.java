@@ -12,6 +12,26 @@ import picocli.CommandLine;
 class MainTest {
 
     @Test
+    void helpKeepsFileNamesAndPathsWhole() {
+        // At the help's width of 80 the JDK's line breaker would split these after their '.' ("plans/bolts." then
+        // "json).").
+        assertTrue(Cli.run("design", "--help").out().contains(" plans/bolts.json)."));
+        assertTrue(Cli.run("family", "--help").out().contains(" plans/bolts-family.json)."));
+        String history = Cli.run("history", "--help").out();
+        assertTrue(history.contains(" ~/.local/share/lotgate/history.sqlite)."), history);
+    }
+
+    @Test
+    void aSplitWordMovesWholeToTheNextLineAndTheRestIsFilledAgain() {
+        String drawn = String.join("\n", "  --save=FILE  Save it (e.g. plans/bolts.", "               json) now and",
+                "               later.", "  --next       Other.");
+        assertEquals(String.join("\n", "  --save=FILE  Save it (e.g.", "               plans/bolts.json) now",
+                "               and later.", "  --next       Other."),
+                HelpLayout.mend(drawn, java.util.Set.of("Save", "it", "(e.g.", "plans/bolts.json)", "now", "and",
+                        "later.", "Other."), 36));
+    }
+
+    @Test
     void everyCommandIsRegisteredUnderItsOwnName() {
         for (Map.Entry<String, Class<?>> command : Main.commands().entrySet()) {
             CommandLine.Command annotation = command.getValue().getAnnotation(CommandLine.Command.class);

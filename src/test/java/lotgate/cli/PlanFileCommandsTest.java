@@ -98,7 +98,7 @@ class PlanFileCommandsTest {
         Path png = folder.resolve("charts/all.png");
         Path svg = folder.resolve("charts/oc.svg");
         Cli.Result result = Cli.run("curve", "-n", "132", "-c", "3", "--lot-size", "5000", "--aql", "1%", "--ltpd",
-                "5%", "--chart", png.toString(), "--oc-chart", svg.toString(), "--ati-chart",
+                "5%", "--curves-chart", png.toString(), "--oc-chart", svg.toString(), "--ati-chart",
                 folder.resolve("charts/ati.svg").toString());
         assertEquals(0, result.exitCode(), result.err());
         byte[] head = Arrays.copyOf(Files.readAllBytes(png), 8);

@@ -49,11 +49,11 @@ class SentenceCommandTest {
         assertEquals(ExitCode.OK, result.exitCode(), result.err());
         JsonNode decision = json(result);
         assertEquals("accept", decision.get("verdict").asText());
-        assertEquals(132, decision.get("sampleSize").asInt());
+        assertEquals(132, decision.get("unitsOnSheet").asInt());
         assertEquals("AF-2611", decision.get("lot").get("lot").asText());
         JsonNode any = decision.get("classes").get(0);
         assertEquals("any", any.get("class").asText());
-        assertEquals(2, any.get("found").asInt());
+        assertEquals(2, any.get("nonconforming").asInt());
         assertEquals(3, any.get("acceptanceNumber").asInt());
         assertEquals(4, any.get("rejectionNumber").asInt());
         assertEquals("accept", any.get("verdict").asText());
@@ -92,9 +92,9 @@ class SentenceCommandTest {
                 demo("kestrune-kc0907.xlsx"), "--format", "json"));
         assertTrue(decision.get("criticalFound").asBoolean());
         // Each class is judged on its own first n units: critical 175, major 82, minor 50.
-        assertEquals(175, decision.get("classes").get(0).get("sampleSize").asInt());
-        assertEquals(82, decision.get("classes").get(1).get("sampleSize").asInt());
-        assertEquals(50, decision.get("classes").get(2).get("sampleSize").asInt());
+        assertEquals(175, decision.get("classes").get(0).get("inspected").asInt());
+        assertEquals(82, decision.get("classes").get(1).get("inspected").asInt());
+        assertEquals(50, decision.get("classes").get(2).get("inspected").asInt());
         assertEquals("reject", decision.get("classes").get(0).get("verdict").asText());
         assertEquals("accept", decision.get("classes").get(1).get("verdict").asText());
     }
@@ -104,7 +104,7 @@ class SentenceCommandTest {
         JsonNode decision = json(Cli.run("sentence", "--no-record", "plans/mirelle-ms-22.json", demo("mirelle-ms1130.csv"),
                 "--format", "json"));
         JsonNode any = decision.get("classes").get(0);
-        assertEquals(3, any.get("found").asInt(), "2 + 1 surface blemishes on 2 rings");
+        assertEquals(3, any.get("nonconforming").asInt(), "2 + 1 surface blemishes on 2 rings");
         assertEquals("nonconformities", decision.get("counting").asText());
         // SciPy 1.10.1: poisson.sf(2, 84 * 0.015); chi2.ppf(0.025, 6)/168 and chi2.ppf(0.975, 8)/168 (Garwood).
         assertEquals(0.1337773338750012, any.get("evidence").get("pValueAtAql").asDouble(), 1e-13);

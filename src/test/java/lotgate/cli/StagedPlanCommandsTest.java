@@ -228,11 +228,11 @@ class StagedPlanCommandsTest {
         assertEquals(138, continuing.get("nextTotal").asInt());
         Path both = sheet("both.csv", 138, Set.of(23, 97));
         Cli.Result decided = Cli.run("sentence", "--no-record", twice.toString(), both.toString(), "--lot", "T1",
-                "--format", "json", "--chart", folder.resolve("chart.png").toString());
+                "--format", "json", "--sampling-chart", folder.resolve("chart.png").toString());
         JsonNode decision = json(decided);
         assertEquals("accept", decision.get("verdict").asText());
         assertEquals("second sample", decision.get("classes").get(0).get("decidedAt").asText());
-        assertEquals(138, decision.get("classes").get(0).get("sampleSize").asInt());
+        assertEquals(138, decision.get("classes").get(0).get("inspected").asInt());
         assertTrue(Files.size(folder.resolve("chart.png")) > 1000);
     }
 
@@ -259,7 +259,7 @@ class StagedPlanCommandsTest {
         assertEquals(ExitCode.REJECTED, rejected.exitCode(), rejected.err());
         JsonNode decision = JSON.readTree(rejected.out());
         assertEquals("unit 9", decision.get("classes").get(0).get("decidedAt").asText());
-        assertEquals(9, decision.get("classes").get(0).get("sampleSize").asInt());
+        assertEquals(9, decision.get("classes").get(0).get("inspected").asInt());
         assertTrue(decision.get("notices").get(0).asText().contains("the other 11 units on the sheet do not count"));
         Cli.Result pending = Cli.run("sentence", "--no-record", sequential.toString(),
                 sheet("short.csv", 30, Set.of(12)).toString(), "--lot", "T5");

@@ -223,7 +223,7 @@ class StoreCommandsTest {
         Cli.Result fromEnvironment = lotgate(Map.of("PGPASSWORD", password, "HOME", folder.toString()), "verify",
                 "--store", bare);
         assertEquals(0, fromEnvironment.exitCode(), fromEnvironment.out());
-        assertTrue(fromEnvironment.out().contains("1 records, chain intact"), fromEnvironment.out());
+        assertTrue(fromEnvironment.out().contains("1 record, chain intact"), fromEnvironment.out());
         Path pgpass = folder.resolve("pgpass");
         Files.writeString(pgpass, "*:*:*:*:" + password + "\n");
         Files.setPosixFilePermissions(pgpass, java.nio.file.attribute.PosixFilePermissions.fromString("rw-------"));

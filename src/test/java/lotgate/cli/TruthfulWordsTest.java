@@ -39,7 +39,7 @@ class TruthfulWordsTest {
         Cli.Result saved = Cli.run("design", "--aql", "6.5%", "--ltpd", "60%", "--sample-size", Integer.toString(n),
                 "--acceptance", Integer.toString(c), "--save", plan.toString());
         assertEquals(0, saved.exitCode(), saved.err());
-        Cli.Result curve = Cli.run("curve", plan.toString(), "--chart", folder.resolve("oc.svg").toString());
+        Cli.Result curve = Cli.run("curve", plan.toString(), "--curves-chart", folder.resolve("oc.svg").toString());
         assertEquals(0, curve.exitCode(), curve.err());
         assertTrue(curve.out().contains("        100%"), curve.out());
     }

@@ -239,7 +239,7 @@ class VariablesCommandsTest {
         Cli.Result audit = Cli.run("supplier", "Invented Test Supplier", "--store", store, "--report", html.toString(),
                 "--report", xlsx.toString());
         assertEquals(0, audit.exitCode(), audit.err());
-        assertTrue(audit.out().contains("3 lot(s) judged on measurements of bore diameter: grand mean 10.004 mm"),
+        assertTrue(audit.out().contains("3 lots judged on measurements of bore diameter: grand mean 10.004 mm"),
                 audit.out());
         assertTrue(Files.readString(html).contains("Means of bore diameter"));
         try (var workbook = new org.apache.poi.xssf.usermodel.XSSFWorkbook(xlsx.toFile())) {

@@ -100,7 +100,7 @@ class HistoryStoreTest {
         fill(tail, 6);
         sql(tail, "DELETE FROM lot_record WHERE seq = 6");
         try (HistoryStore store = HistoryStore.open(tail)) {
-            assertEquals("the last 1 record(s) were removed (the chain head names record 6, the store ends at record 5)",
+            assertEquals("the last record was removed (the chain head names record 6, the store ends at record 5)",
                     store.verify().problem());
         }
     }

@@ -33,7 +33,7 @@ public final class AuditRendering {
         out.println("  Severity timeline");
         for (SupplierAudit.Part part : audit.parts()) {
             if (part.switches().isEmpty()) {
-                out.println("    " + part.part() + ": normal throughout");
+                out.println("    " + part.part() + ": normal inspection throughout");
             }
             for (SeverityTracker.Switch change : part.switches()) {
                 out.println("    " + part.part() + ", after lot " + (change.lot() == null ? "-" : change.lot()) + ": "

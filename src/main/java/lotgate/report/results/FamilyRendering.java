@@ -15,7 +15,9 @@ public final class FamilyRendering {
             result.family().variants().forEach((severity, plan) -> out.println("  " + severity + ": "
                     + result.family().files().get(severity) + " (fingerprint " + plan.shortFingerprint() + ", sample "
                     + plan.sampleSize() + ")"));
-            out.println("  switching rules: " + result.switching());
+            java.util.List<String> rules = lotgate.history.SwitchingRules.fromJson(result.switching()).describe();
+            out.println("  switching rules (" + rules.get(0) + "):");
+            rules.subList(1, rules.size()).forEach(rule -> out.println("    " + rule));
         });
     }
 }

@@ -40,7 +40,11 @@ public final class HistoryRendering {
             item.put("inspected", row.inspected());
             item.put("nonconforming", row.nonconforming());
             item.put("severity", row.severity());
-            item.put("supersedes", row.supersedes());
+            if (row.supersedes() > 0) {
+                item.put("supersedes", row.supersedes());
+            } else {
+                item.putNull("supersedes");
+            }
             item.put("hash", row.hash());
         }
         return node;
@@ -53,7 +57,7 @@ public final class HistoryRendering {
             table.add(List.of(row.seq(), row.recordedAt().toString(), row.kind(), row.supplier(), row.part(),
                     row.lot(), row.received() == null ? "" : row.received().toString(),
                     row.verdict() == null ? "" : row.verdict(), row.inspected(), row.nonconforming(),
-                    row.severity() == null ? "" : row.severity(), row.supersedes(), row.hash()));
+                    row.severity() == null ? "" : row.severity(), row.supersedes() > 0 ? row.supersedes() : "", row.hash()));
         }
         return CsvTable.table(List.of("seq", "recordedAt", "kind", "supplier", "part", "lot", "received",
                 "verdict", "inspected", "nonconforming", "severity", "supersedes", "hash"), table);
@@ -63,7 +67,7 @@ public final class HistoryRendering {
     public static String text(ListHistory.Result result) {
         return Text.of(out -> {
             List<LotRow> rows = result.rows();
-            out.println("History store " + result.store() + ": " + rows.size() + " records");
+            out.println("History store " + result.store() + ": " + lotgate.report.Words.count(rows.size(), "record"));
             out.printf("  %6s  %-12s  %-10s  %-28s %-12s %-14s %-7s %9s %6s  %-10s%n", "#", "chain hash",
                     "received", "supplier", "part", "lot", "verdict", "inspected", "found", "severity");
             for (LotRow row : rows) {

@@ -118,7 +118,7 @@ public final class SentenceRendering {
         node.put("plan", plan.name());
         node.put("planFingerprint", plan.fingerprint());
         node.put("inspected", point.inspected());
-        node.put("found", point.found());
+        node.put("nonconforming", point.found());
         node.put("step", point.step());
         if (point.acceptanceNumber() >= 0) {
             node.put("acceptanceNumber", point.acceptanceNumber());
@@ -160,7 +160,7 @@ public final class SentenceRendering {
             String counted = PlanWording.counted(plan.model(), (int) Math.min(Integer.MAX_VALUE, point.found()));
             String what = instruction(undecided);
             switch (format) {
-                case "csv" -> out.print(CsvTable.table(List.of("lot", "verdict", "inspected", "found", "step", "moreUnits",
+                case "csv" -> out.print(CsvTable.table(List.of("lot", "verdict", "inspected", "nonconforming", "step", "moreUnits",
                         "nextTotal", "planFingerprint"), List.of(List.of(lot.lot(), "continue", point.inspected(),
                         point.found(), point.step(), point.moreUnits(), pending.nextTotal(), plan.fingerprint()))));
                 default -> {
@@ -293,7 +293,7 @@ public final class SentenceRendering {
                     evidence.lotUpperBound() >= 0 ? evidence.lotUpperBound() : "", decision.sentence().verdict(),
                     decision.plan().fingerprint(), decision.sheetSha256()));
         }
-        return CsvTable.table(List.of("lot", "class", "sampleSize", "found", "acceptanceNumber", "rejectionNumber",
+        return CsvTable.table(List.of("lot", "class", "inspected", "nonconforming", "acceptanceNumber", "rejectionNumber",
                 "classVerdict", "pValueAtAql", "lowerBound", "upperBound", "lotUpperBound", "verdict", "planFingerprint",
                 "sheetSha256"), rows);
     }

@@ -10,6 +10,16 @@ public final class VerifyRendering {
     private VerifyRendering() {
     }
 
+    /** The verification as one CSV row, intact or not. */
+    public static String csv(VerifyStore.Result result) {
+        HistoryStore.Verification verification = result.verification();
+        return lotgate.report.CsvTable.table(java.util.List.of("store", "storeId", "intact", "records", "head",
+                "problem"), java.util.List.of(java.util.List.of(result.store(), verification.storeId() == null ? ""
+                        : verification.storeId(), verification.intact(), verification.records(),
+                        verification.head() == null ? "" : verification.head().toString(),
+                        verification.problem() == null ? "" : verification.problem())));
+    }
+
     /** The verification as JSON, intact or not. */
     public static ObjectNode json(VerifyStore.Result result) {
         HistoryStore.Verification verification = result.verification();
@@ -32,14 +42,15 @@ public final class VerifyRendering {
     /** What is wrong with a damaged store, in one line. */
     public static String damage(VerifyStore.Result result) {
         return "history store " + result.store() + " is damaged: " + result.verification().problem() + " ("
-                + result.verification().records() + " records before it are intact)";
+                + lotgate.report.Words.count(result.verification().records(), "record") + " before it "
+                + (result.verification().records() == 1 ? "is" : "are") + " intact)";
     }
 
     /** An intact store as text: its records, id and head, and the kept heads it still holds. */
     public static String text(VerifyStore.Result result) {
         HistoryStore.Verification verification = result.verification();
         return Text.of(out -> {
-            out.println("History store " + result.store() + ": " + verification.records() + " records, chain intact.");
+            out.println("History store " + result.store() + ": " + lotgate.report.Words.count(verification.records(), "record") + ", chain intact.");
             out.println("  store id: " + verification.storeId());
             out.println("  head:     " + verification.head() + "   (keep it; 'lotgate verify --expect "
                     + verification.head() + "' proves later that the store still holds it)");
