@@ -46,6 +46,8 @@ public final class SampleReader implements RowHandler {
     private final Set<DefectClass> classColumns = EnumSet.noneOf(DefectClass.class);
 
     private int units;
+    private int unitLimit = Integer.MAX_VALUE;
+    private boolean stoppedAtLimit;
     private int firstRow = -1;
     private int lastRow = -1;
     private final int[] unitCounts = new int[DefectClass.values().length];
@@ -86,6 +88,20 @@ public final class SampleReader implements RowHandler {
             throw new SheetException(source.file(), "the workbook has no sheets");
         }
         return names.stream().filter(n -> !n.equalsIgnoreCase(LotDetails.SHEET)).findFirst().orElse(names.get(0));
+    }
+
+    /**
+     * Stops reading once the sheet has shown more units than the limit: a sheet far larger than any sample of
+     * the plan is refused without reading its every row ({@link #stoppedAtLimit()} then says so).
+     */
+    public SampleReader stopAfter(int limit) {
+        unitLimit = limit;
+        return this;
+    }
+
+    /** Whether reading stopped past the unit limit, so that the sheet holds more units than that. */
+    public boolean stoppedAtLimit() {
+        return stoppedAtLimit;
     }
 
     /**
@@ -161,6 +177,10 @@ public final class SampleReader implements RowHandler {
                     + " rows than a spreadsheet has; name the sample's rows");
         }
         unit(row, cells);
+        if (units > unitLimit) {
+            stoppedAtLimit = true;
+            throw new RowHandler.Stop();
+        }
     }
 
     /** Notes a row passed over in the search for the header, for the message that no header was found. */

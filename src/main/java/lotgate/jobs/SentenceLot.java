@@ -6,6 +6,7 @@ import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.stream.IntStream;
 import lotgate.files.AtomicWrite;
 import lotgate.files.Sha256;
 import lotgate.files.StagedFiles;
@@ -260,8 +261,17 @@ public final class SentenceLot {
                 request.firstRow(), request.lastRow());
         if (plan.classes().stream().anyMatch(c -> c.plan() instanceof SequentialPlan)) {
             reader.keepSequence();
+        } else if (cutoffs.length > 0) {
+            reader.stopAfter(readingLimit(cutoffs));
         }
         InspectionSample sample = reader.read();
+        if (reader.stoppedAtLimit()) {
+            throw incomplete(request.sheetFile() + " holds more than " + (sample.units() - 1) + " units"
+                    + (request.firstRow() > 0 ? " in rows " + request.firstRow() + "-" + request.lastRow() : "")
+                    + " (reading stopped there), but plan " + plan.name() + " samples at most "
+                    + IntStream.of(cutoffs).max().orElseThrow() + "; name the sample's rows with --rows FIRST-LAST"
+                    + " (nothing was recorded)");
+        }
         Sentencer.Counts counts = counts(request, plan, sample);
         checkSampleSize(request, plan, sample, counts);
         Outcome outcome = Sentencer.sentence(plan, counts, lot.lotSize(), request.confidence());
@@ -400,6 +410,14 @@ public final class SentenceLot {
                     + plan.name() + " samples " + plan.sampleSize() + "; inspect every unit instead");
         }
         return new LotDetails(lot.lot(), lot.supplier(), lot.part(), size, lot.received(), lot.inspector());
+    }
+
+    /**
+     * How many units a sheet may show before reading stops: well past the plan's largest sample, so that a
+     * sheet a few units over is refused with its exact count, and one of a million rows without reading them all.
+     */
+    private static int readingLimit(int[] cutoffs) {
+        return 2 * IntStream.of(cutoffs).max().orElseThrow() + 100;
     }
 
     private static void checkSampleSize(Request request, SavedPlan plan, InspectionSample sample,

@@ -157,6 +157,22 @@ class SentenceCommandTest {
     }
 
     @Test
+    void aSheetFarLargerThanTheSampleIsRefusedWithoutReadingItAll() throws Exception {
+        Path file = folder.resolve("huge.csv");
+        StringBuilder text = new StringBuilder("unit,result\n");
+        for (int i = 1; i <= 20_000; i++) {
+            // A bad word far past the plan's sample: refused if it were read.
+            text.append("U").append(i).append(i == 19_000 ? ",maybe\n" : ",pass\n");
+        }
+        Files.writeString(file, text);
+        Cli.Result result = Cli.run("sentence", "--no-record", BOLTS, file.toString(), "--lot", "L-2");
+        assertEquals(ExitCode.INCOMPLETE_SAMPLE, result.exitCode(), result.err());
+        assertEquals("lotgate: " + file + " holds more than 364 units (reading stopped there), but plan"
+                + " arnwick-af-m8-40 samples at most 132; name the sample's rows with --rows FIRST-LAST (nothing was"
+                + " recorded)\n", result.err());
+    }
+
+    @Test
     void moreUnitsThanThePlanSamplesNeedTheRowsOfTheSample() throws Exception {
         Path file = sheet("long.xlsx", 140, 135);
         Cli.Result result = Cli.run("sentence", "--no-record", BOLTS, file.toString(), "--lot", "L-2");
