@@ -30,7 +30,7 @@ import lotgate.files.CanonicalJson;
  */
 public final class HistoryStore implements AutoCloseable {
     /** The schema version this lotgate writes; older stores are migrated when opened. */
-    public static final int SCHEMA_VERSION = 3;
+    public static final int SCHEMA_VERSION = 4;
     static final String GENESIS = "0".repeat(64);
 
     private final StoreLocation location;
@@ -580,7 +580,8 @@ public final class HistoryStore implements AutoCloseable {
     /** The lots and actions of a supplier (all when null) and part (all when null), in record order. */
     public List<LotRow> rows(String supplier, String part) {
         StringBuilder sql = new StringBuilder("SELECT seq, recorded_at, kind, supplier, part, lot, lot_size, received,"
-                + " verdict, inspected, nonconforming, severity, production, supersedes, hash FROM lot_record WHERE 1 = 1");
+                + " verdict, inspected, nonconforming, severity, production, supersedes, hash, "
+                + (version >= 4 ? "reinstates" : "0") + " FROM lot_record WHERE 1 = 1");
         List<String> values = new ArrayList<>();
         if (supplier != null) {
             sql.append(" AND supplier = ?");
@@ -612,7 +613,8 @@ public final class HistoryStore implements AutoCloseable {
         return new LotRow(result.getLong(1), Instant.parse(result.getString(2)), result.getString(3),
                 result.getString(4), result.getString(5), result.getString(6), result.getInt(7),
                 received == null ? null : LocalDate.parse(received), result.getString(9), result.getInt(10),
-                result.getInt(11), result.getString(12), result.getString(13), result.getLong(14), result.getString(15));
+                result.getInt(11), result.getString(12), result.getString(13), result.getLong(14), result.getString(15),
+                result.getInt(16) != 0);
     }
 
     /**

@@ -9,10 +9,12 @@ import java.time.LocalDate;
  *
  * @param supersedes the record this one corrects, or 0
  * @param hash       the record's chain hash, which with {@code seq} places it in the chain ({@code verify --expect})
+ * @param reinstatesNormal whether the lot was accepted with a count between a reduced plan's acceptance and
+ *                   rejection numbers, which reinstates normal inspection
  */
 public record LotRow(long seq, Instant recordedAt, String kind, String supplier, String part, String lot,
         int lotSize, LocalDate received, String verdict, int inspected, int nonconforming, String severity,
-        String production, long supersedes, String hash) {
+        String production, long supersedes, String hash, boolean reinstatesNormal) {
 
     public boolean accepted() {
         return "accept".equals(verdict);

@@ -22,7 +22,9 @@ import java.util.UUID;
  * <li>the records and the chain head;
  * <li>the severity and production columns, and the defect counts per record for the audit;
  * <li>the store's identity (a random id, to which a new store's chain is anchored) and the lot key,
- * unique among records, that holds each lot (supplier, part, lot id) to one current record.
+ * unique among records, that holds each lot (supplier, part, lot id) to one current record;
+ * <li>the column that marks a lot accepted with a count between a reduced plan's acceptance and rejection
+ * numbers, which reinstates normal inspection.
  * </ol>
  */
 final class Migrations {
@@ -34,6 +36,7 @@ final class Migrations {
             case 1 -> version1(connection);
             case 2 -> version2(connection);
             case 3 -> version3(connection);
+            case 4 -> version4(connection);
             default -> throw new IllegalArgumentException("no schema version " + version);
         }
     }
@@ -141,6 +144,33 @@ final class Migrations {
         }
     }
 
+    private static void version4(Connection connection) throws SQLException {
+        try (Statement statement = connection.createStatement()) {
+            statement.execute("ALTER TABLE lot_record ADD COLUMN reinstates INTEGER NOT NULL DEFAULT 0");
+        }
+        List<Long> marked = new ArrayList<>();
+        try (Statement statement = connection.createStatement();
+                ResultSet rows = statement.executeQuery("SELECT seq, content FROM lot_record ORDER BY seq")) {
+            while (rows.next()) {
+                long seq = rows.getLong(1);
+                if (reinstates(new StoredRecord(seq, null, rows.getString(2), null, null).json()) != 0) {
+                    marked.add(seq);
+                }
+            }
+        }
+        try (PreparedStatement update = connection.prepareStatement("UPDATE lot_record SET reinstates = 1 WHERE seq = ?")) {
+            for (long seq : marked) {
+                update.setLong(1, seq);
+                update.executeUpdate();
+            }
+        }
+    }
+
+    /** 1 for a lot whose content says it reinstates normal inspection, else 0. */
+    static int reinstates(JsonNode content) {
+        return content.path(RecordContent.REINSTATES_NORMAL).asBoolean(false) ? 1 : 0;
+    }
+
     /**
      * Replays one record into the current holders of lot keys: a correction frees the key of the record it
      * supersedes, and a lot takes its key when no current record holds it. (Before schema 3 a lot could be
@@ -201,6 +231,10 @@ final class Migrations {
                 columns += ", lot_key";
                 marks += ", ?";
             }
+            if (version >= 4) {
+                columns += ", reinstates";
+                marks += ", ?";
+            }
             record = connection.prepareStatement("INSERT INTO lot_record (" + columns + ") VALUES (" + marks + ")");
             defects = version >= 2 ? connection.prepareStatement("INSERT INTO defect_count (seq, supplier, part,"
                     + " defect, units) VALUES (?, ?, ?, ?, ?)") : null;
@@ -230,6 +264,9 @@ final class Migrations {
             }
             if (version >= 3) {
                 insert.setString(18, lotKey);
+            }
+            if (version >= 4) {
+                insert.setInt(19, reinstates(content));
             }
             insert.executeUpdate();
             if (version >= 2) {
@@ -278,7 +315,7 @@ final class Migrations {
     static String columns(int version) {
         return "seq, recorded_at, content, previous_hash, hash, kind, supplier, part, lot, verdict, inspected,"
                 + " nonconforming, supersedes, lot_size, received" + (version >= 2 ? ", severity, production" : "")
-                + (version >= 3 ? ", lot_key" : "");
+                + (version >= 3 ? ", lot_key" : "") + (version >= 4 ? ", reinstates" : "");
     }
 
     /** The index of lot_key among {@link #columns}. */
@@ -303,6 +340,9 @@ final class Migrations {
         if (version >= 2) {
             pairs.add(new String[] {"severity", text(content, "severity"), row.getString(16)});
             pairs.add(new String[] {"production", text(content, "production"), row.getString(17)});
+        }
+        if (version >= 4) {
+            pairs.add(new String[] {"reinstates", Integer.toString(reinstates(content)), row.getString(19)});
         }
         for (String[] pair : pairs) {
             if (pair[1] == null ? pair[2] != null : !pair[1].equals(pair[2])) {

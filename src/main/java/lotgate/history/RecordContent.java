@@ -11,6 +11,9 @@ import java.util.Map;
  * corrective action. The store hashes this content; its columns are copies for queries.
  */
 public final class RecordContent {
+    /** The field of a lot accepted with a count between a reduced plan's Ac and Re (present only then, as true). */
+    public static final String REINSTATES_NORMAL = "reinstatesNormal";
+
     private RecordContent() {
     }
 

@@ -45,13 +45,23 @@ public final class SeverityTracker {
      * @return the switch this lot caused, or null
      */
     public Switch lot(String lot, boolean accepted, long defectives, boolean steady) {
+        return lot(lot, accepted, false, defectives, steady);
+    }
+
+    /**
+     * Takes the outcome of a lot sentenced on original inspection.
+     *
+     * @param reinstatesNormal whether the lot was accepted with a count between the reduced plan's acceptance
+     *                         and rejection numbers, which ends reduced inspection
+     */
+    public Switch lot(String lot, boolean accepted, boolean reinstatesNormal, long defectives, boolean steady) {
         if (severity == Severity.DISCONTINUED) {
             throw new IllegalStateException("inspection is discontinued until a corrective action is recorded");
         }
         return switch (severity) {
             case NORMAL -> onNormal(lot, accepted, defectives, steady);
             case TIGHTENED -> onTightened(lot, accepted);
-            case REDUCED -> onReduced(lot, accepted, steady);
+            case REDUCED -> onReduced(lot, accepted, reinstatesNormal, steady);
             case DISCONTINUED -> null;
         };
     }
@@ -128,9 +138,13 @@ public final class SeverityTracker {
         return null;
     }
 
-    private Switch onReduced(String lot, boolean accepted, boolean steady) {
+    private Switch onReduced(String lot, boolean accepted, boolean reinstatesNormal, boolean steady) {
         if (!accepted) {
             return move(lot, Severity.NORMAL, "lot " + lot + " not accepted on reduced inspection");
+        }
+        if (reinstatesNormal) {
+            return move(lot, Severity.NORMAL, "lot " + lot + " accepted on reduced inspection with a count between"
+                    + " the acceptance and rejection numbers");
         }
         if (!steady) {
             return move(lot, Severity.NORMAL, "irregular production");

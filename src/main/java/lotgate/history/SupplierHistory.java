@@ -40,7 +40,8 @@ public final class SupplierHistory {
             if (row.isLot()) {
                 Severity under = tracker.severity();
                 SeverityTracker.Switch change = under == Severity.DISCONTINUED ? null
-                        : tracker.lot(effective.lot(), effective.accepted(), effective.nonconforming(), effective.steady());
+                        : tracker.lot(effective.lot(), effective.accepted(), effective.reinstatesNormal(),
+                                effective.nonconforming(), effective.steady());
                 entries.add(new Entry(effective, under, change));
                 if (change != null) {
                     switches.add(change);

@@ -171,7 +171,11 @@ final class Inspection implements AutoCloseable {
                 decision.lot().lotSize(), decision.lot().received(), decision.lot().inspector(),
                 decision.sentence().verdict(), decision.sample().units(), nonconforming, decision.sample().defectTypes(),
                 severity.label(), production, supersedes, reason);
-        StoredRecord stored = store.append(RecordContent.lot(content, DecisionJson.of(decision), "sentence"),
+        var record = RecordContent.lot(content, DecisionJson.of(decision), "sentence");
+        if (decision.sentence().reinstatesNormal()) {
+            record.put(RecordContent.REINSTATES_NORMAL, true);
+        }
+        StoredRecord stored = store.append(record,
                 Instant.now().truncatedTo(ChronoUnit.MILLIS), beforeCommit);
         SupplierHistory after = new SupplierHistory(store.rows(lot.supplier(), lot.part()), rules);
         SeverityTracker.Switch caused = null;

@@ -152,6 +152,19 @@ public final class SentenceText {
                         + where(verdict) + ", at or above the rejection number " + verdict.rejectionNumber());
             }
         }
+        if (rejected.isEmpty() && decision.sentence().reinstatesNormal()) {
+            List<String> between = new ArrayList<>();
+            for (ClassVerdict verdict : decision.sentence().classes()) {
+                if (verdict.reinstatesNormal()) {
+                    between.add((decision.plan().unclassified() ? "" : verdict.defectClass().label() + ": ")
+                            + counted(decision, verdict.found()) + " found in " + verdict.inspected() + " units, above"
+                            + " the acceptance number " + verdict.acceptanceNumber() + " and below the rejection number "
+                            + verdict.rejectionNumber());
+                }
+            }
+            return String.join("; ", between) + ": the lot is accepted, and normal inspection is reinstated for the"
+                    + " next lot";
+        }
         if (rejected.isEmpty()) {
             return decision.plan().unclassified()
                     ? counted(decision, decision.sentence().classes().get(0).found()) + " found in "

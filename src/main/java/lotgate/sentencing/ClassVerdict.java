@@ -15,4 +15,12 @@ import lotgate.sampling.Plan;
  */
 public record ClassVerdict(DefectClass defectClass, Plan plan, int inspected, int found, boolean accepted,
         Evidence evidence, int acceptanceNumber, int rejectionNumber, String step) {
+
+    /**
+     * Whether the class accepted the lot with a count above its acceptance number, as a reduced plan of the
+     * attribute tables allows below its rejection number: the lot is accepted, and normal inspection reinstated.
+     */
+    public boolean reinstatesNormal() {
+        return accepted && acceptanceNumber >= 0 && found > acceptanceNumber;
+    }
 }

@@ -96,6 +96,11 @@ public final class Stopping {
             if (found >= stage.r()) {
                 return new Point(Verdict.REJECT, total, found, stage.c(), stage.r(), step, 0);
             }
+            if (i == stages.size() - 1) {
+                // A reduced plan of the tables (Re > Ac + 1): a count between them accepts the lot, and the
+                // verdict's count above its acceptance number tells the switching rules to reinstate normal.
+                return new Point(Verdict.ACCEPT, total, found, stage.c(), stage.r(), step, 0);
+            }
             if (total == units) {
                 return new Point(Verdict.CONTINUE, total, found, stage.c(), stage.r(), step, stages.get(i + 1).n());
             }

@@ -135,4 +135,55 @@ class TableCommandsTest {
                 + " 'lotgate least-inspection --help')\n", average.err());
         assertFalse(Files.exists(folder.resolve("none.json")));
     }
+
+    private Path sheet(String name, int units, int... failing) throws Exception {
+        StringBuilder text = new StringBuilder("unit,result\n");
+        for (int i = 1; i <= units; i++) {
+            final int unit = i;
+            text.append("C").append(i).append(',')
+                    .append(java.util.Arrays.stream(failing).anyMatch(f -> f == unit) ? "fail" : "pass").append('\n');
+        }
+        Path file = folder.resolve(name);
+        Files.writeString(file, text.toString());
+        return file;
+    }
+
+    private Cli.Result sentence(Path family, String store, Path sheet, String lot) {
+        return Cli.run("sentence", family.toString(), sheet.toString(), "--lot", lot, "--supplier",
+                "Invented Clips Ltd (invented)", "--part", "CL-1", "--lot-size", "2000", "--store", store,
+                "--create-store");
+    }
+
+    @Test
+    void theSavedFamilySentencesALotAtOnceAndReducedInspectionReinstatesNormalBetweenAcAndRe() throws Exception {
+        Path family = folder.resolve("clips.json");
+        Cli.Result saved = Cli.run("lookup", "-N", "2000", "--aql", "0.65", "--save-family", family.toString());
+        assertEquals(0, saved.exitCode(), saved.err());
+        String store = folder.resolve("history.sqlite").toString();
+        // Normal inspection, K: 125 units, Ac 2 (MIL-STD-105E Table II-A, from memory): two failures accept.
+        Cli.Result first = sentence(family, store, sheet("l1.csv", 125, 23, 97), "L-1");
+        assertEquals(0, first.exitCode(), first.err());
+        assertTrue(first.out().startsWith("ACCEPT"), first.out());
+        // Ten accepted lots with steady production earn reduced inspection (the switching rules, from memory).
+        for (int lot = 2; lot <= 10; lot++) {
+            assertEquals(0, sentence(family, store, sheet("l" + lot + ".csv", 125), "L-" + lot).exitCode());
+        }
+        // Reduced, K: 50 units, Ac 1, Re 3 (Table II-C, from memory): two failures accept the lot and reinstate
+        // normal inspection.
+        Cli.Result between = sentence(family, store, sheet("l11.csv", 50, 5, 40), "L-11");
+        assertEquals(0, between.exitCode(), between.err());
+        assertTrue(between.out().startsWith("ACCEPT"), between.out());
+        assertTrue(between.out().contains("above the acceptance number 1 and below the rejection number 3: the lot is"
+                + " accepted, and normal inspection is reinstated for the next lot"), between.out());
+        assertTrue(between.out().contains("SWITCH: reduced to normal inspection for the next lot: lot L-11 accepted on"
+                + " reduced inspection with a count between the acceptance and rejection numbers"), between.out());
+        // The next lot is judged on the normal plan again: 125 units.
+        Cli.Result next = sentence(family, store, sheet("l12.csv", 125), "L-12");
+        assertEquals(0, next.exitCode(), next.err());
+        assertTrue(next.out().contains("normal"), next.out());
+        // Three failures in the reduced sample reject; shown with the plan alone (a trial, not recorded).
+        Cli.Result rejected = Cli.run("sentence", folder.resolve("clips-reduced.json").toString(),
+                sheet("l13.csv", 50, 1, 2, 3).toString(), "--lot", "L-13", "--no-record");
+        assertEquals(1, rejected.exitCode(), rejected.out() + rejected.err());
+    }
 }

@@ -127,6 +127,28 @@ class HistoryStoreTest {
 
     @ParameterizedTest
     @MethodSource("kinds")
+    void aLotThatReinstatesNormalInspectionIsMarkedAfterMigrationAndOnAppend(String kind) throws SQLException {
+        String location = Stores.fresh(kind, folder);
+        try (HistoryStore old = HistoryStore.open(location, 3)) {
+            old.append(Stores.lot("Invented Supplier", "P-1", "L-1", true, 2).put(RecordContent.REINSTATES_NORMAL, true),
+                    Stores.now());
+        }
+        try (HistoryStore store = HistoryStore.open(location)) {
+            store.append(Stores.lot("Invented Supplier", "P-1", "L-2", true, 2).put(RecordContent.REINSTATES_NORMAL, true),
+                    Stores.now());
+            store.append(Stores.lot("Invented Supplier", "P-1", "L-3", true, 0), Stores.now());
+            List<LotRow> rows = store.rows(null, null);
+            assertEquals(List.of(true, true, false), rows.stream().map(LotRow::reinstatesNormal).toList());
+            assertTrue(store.verify().intact(), store.verify().problem());
+        }
+        sql(location, "UPDATE lot_record SET reinstates = 0 WHERE lot = 'L-2'");
+        try (HistoryStore store = HistoryStore.open(location)) {
+            assertFalse(store.verify().intact(), "a changed column is found");
+        }
+    }
+
+    @ParameterizedTest
+    @MethodSource("kinds")
     void aNewerSchemaIsRefused(String kind) throws SQLException {
         String location = Stores.fresh(kind, folder);
         fill(location, 1);

@@ -52,6 +52,21 @@ class SeverityTrackerTest {
     }
 
     @Test
+    void aLotAcceptedBetweenTheReducedPlansAcceptanceAndRejectionNumbersReinstatesNormal() {
+        // ISO 2859-1 / MIL-STD-105E, reduced inspection (from memory): where the count exceeds Ac but not Re, the lot
+        // is accepted and normal inspection reinstated.
+        SeverityTracker tracker = new SeverityTracker(SwitchingRules.CURRENT);
+        feed(tracker, "aaaaaaaaaa");
+        assertEquals(Severity.REDUCED, tracker.severity());
+        assertNull(tracker.lot("L11", true, false, 1, true), "a count within Ac keeps reduced inspection");
+        SeverityTracker.Switch change = tracker.lot("L12", true, true, 2, true);
+        assertEquals(Severity.NORMAL, change.to());
+        assertEquals("lot L12 accepted on reduced inspection with a count between the acceptance and rejection"
+                + " numbers", change.reason());
+        assertNull(tracker.lot("L13", true, true, 2, true), "on normal inspection the mark changes nothing");
+    }
+
+    @Test
     void tenAcceptedLotsWithSteadyProductionEarnReducedInspection() {
         SeverityTracker tracker = new SeverityTracker(SwitchingRules.CURRENT);
         assertNull(feed(tracker, "aaaaaaaaa"));
