@@ -63,7 +63,8 @@ final class DemoCommand implements Runnable {
 
     private static final String[] SHEETS = {"arnwick-af2611.xlsx", "arnwick-af2618.csv", "arnwick-af2618.lot.csv",
             "kestrune-kc0907.xlsx", "mirelle-ms1130.csv", "mirelle-ms1130.lot.csv", "mirelle-ms1204-malformed.xlsx",
-            "lots-2025.csv", "quorrin-qp2611.csv", "quorrin-qp2611.lot.csv", "kestrune-kc0911-bore.csv",
+            "lots-2025.csv", "quorrin-qp2611.csv", "quorrin-qp2611.lot.csv",
+            "quorrin-qp2612.csv", "quorrin-qp2612.lot.csv", "kestrune-kc0911-bore.csv",
             "kestrune-kc0911-bore.lot.csv", "kestrune-kc0915-bore.csv", "kestrune-kc0915-bore.lot.csv"};
 
     /** Copies the invented inspection sheets that travel in the jar into the demo's folder. */
@@ -80,7 +81,7 @@ final class DemoCommand implements Runnable {
                 throw new Main.Failure(ExitCode.INTERNAL, "cannot read the demo sheet " + name + ": " + e.getMessage());
             }
         }
-        out.println("The invented inspection sheets of eight lots and last year's lot list are copied to " + target
+        out.println("The invented inspection sheets of nine lots and last year's lot list are copied to " + target
                 + " (the same as demo-data/ in the repository).");
         out.println();
         return target.toString();

@@ -155,7 +155,22 @@ final class DemoTour {
         step("19. All suppliers ranked; Quorrin's four lots leave it a wide interval (the audits of Kestrune,"
                         + " with its mean and s charts of the bores, and of Quorrin are in the reports folder too):",
                 "suppliers", "--store", store, "--report", reports + "/ranking.html");
-        step("20. Nothing in the history was altered or removed:", "verify", "--store", store);
+        step("20. Quorrin's new purchase order asks for attribute sampling at general inspection level II, AQL 0.65."
+                        + " The engineer looks the plan up in the published tables for lots of 2000, sees the risks the"
+                        + " tables do not print, and saves the normal, tightened and reduced plans with the switching"
+                        + " rules as one family:",
+                "lookup", "--lot-size", "2000", "--level", "II", "--aql", "0.65", "--save-family",
+                plans + "/quorrin-qp-7-tables.json", "--replace-family", "--family-description",
+                "Invented demo: Quorrin Plastics snap clip QP-7, purchase order level II, AQL 0.65");
+        step("    Lot QP-2612 is sentenced with the family at once; the history says which plan applies:",
+                "sentence", plans + "/quorrin-qp-7-tables.json", sheets + "/quorrin-qp2612.csv", "--store", store);
+        step("21. Arnwick's bolts are also inspected in the plant with rectification (rejected lots screened"
+                        + " 100%). The plan that inspects least at Arnwick's process average of 0.5%, with an LTPD of 5%"
+                        + " for lots of 5000:",
+                "least-inspection", "--lot-size", "5000", "--ltpd", "5%", "--process-average", "0.5%", "--save",
+                plans + "/arnwick-af-m8-40-least.json", "--replace", "--description",
+                "Invented demo: Arnwick Fasteners M8 flange bolt AF-M8-40, least inspection with rectification");
+        step("22. Nothing in the history was altered or removed:", "verify", "--store", store);
         return List.copyOf(steps);
     }
 

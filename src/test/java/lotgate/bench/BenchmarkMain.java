@@ -17,17 +17,21 @@ import org.openjdk.jmh.runner.options.TimeValue;
  * benchmarks to run (a regular expression, e.g. DesignBenchmark).
  */
 public final class BenchmarkMain {
+    /** Every benchmark, and then the workbench's load test. */
+    private static final String ALL = "lotgate.bench.*Benchmark";
+
     private BenchmarkMain() {
     }
 
     public static void main(String[] args) throws Exception {
-        String include = args.length > 0 ? args[0] : "lotgate.bench.*Benchmark";
+        String include = args.length > 0 && !args[0].isBlank() ? args[0] : ALL;
         if (include.equals("WorkbenchLoad")) {
             WorkbenchLoad.run();
             return;
         }
         ChainedOptionsBuilder options = new OptionsBuilder().include(include);
-        if (include.contains("DesignBenchmark") || include.contains("StagedBenchmark") || include.endsWith("*Benchmark")) {
+        if (include.contains("DesignBenchmark") || include.contains("StagedBenchmark")
+                || include.contains("TablesBenchmark") || include.endsWith("*Benchmark")) {
             // Design cases take milliseconds: short timed iterations. The sentencing benchmark sets its own.
             options = options.warmupTime(TimeValue.seconds(1)).measurementTime(TimeValue.seconds(1));
         }
@@ -74,6 +78,23 @@ public final class BenchmarkMain {
                     / scores.get(staged + "doubleDesign"));
             System.out.println();
         }
+        String tables = TablesBenchmark.class.getName() + ".";
+        if (scores.containsKey(tables + "design")) {
+            double baseline = scores.get(tables + "design");
+            System.out.println("Plans from the tables and least-inspection plans against the single-plan design"
+                    + " (binomial, AQL 1%, LTPD 5%) of the same run (ms per call)");
+            System.out.printf("%-52s %10.3f%n", "single-plan design (baseline)", baseline);
+            String[][] cases = {
+                    {"tableLookupSingle", "table look-up with risks, single (target < 10 ms)"},
+                    {"tableLookupDouble", "table look-up with risks, double (target < 10 ms)"},
+                    {"leastInspectionLtpd", "least ATI, N = 10^6, LTPD 1% (target < 50 ms)"},
+                    {"leastInspectionAoql", "least ATI, N = 10^6, AOQL 1% (target < 50 ms)"}};
+            for (String[] entry : cases) {
+                double score = scores.get(tables + entry[0]);
+                System.out.printf("%-52s %10.3f   ratio to design %8.2f%n", entry[1], score, score / baseline);
+            }
+            System.out.println();
+        }
         String history = HistoryBenchmark.class.getName() + ".";
         if (scores.containsKey(history + "ranking")) {
             System.out.println("Supplier reports over " + HistoryBenchmark.LOTS + " lots of " + HistoryBenchmark.SUPPLIERS
@@ -105,7 +126,7 @@ public final class BenchmarkMain {
             System.out.printf("%-44s %12.0f%n", "bare POI SAX pass counting cells", bare);
             System.out.printf("%-44s %12.2f   (target: at most 1.30)%n", "ratio sentence / bare pass", sentence / bare);
         }
-        if (args.length == 0) {
+        if (include.equals(ALL)) {
             // The workbench's bounded load test on loopback runs after the JMH benchmarks.
             System.out.println();
             WorkbenchLoad.run();

@@ -17,6 +17,7 @@ class DemoDataTest {
             "plans/mirelle-ms-22.json, demo-data/mirelle-ms1204-malformed.xlsx, 3",
             "plans/quorrin-qp-7-double.json, demo-data/quorrin-qp2611.csv, 0",
             "plans/quorrin-qp-7-sequential.json, demo-data/quorrin-qp2611.csv, 0",
+            "plans/quorrin-qp-7-tables-normal.json, demo-data/quorrin-qp2612.csv, 0",
             "plans/kestrune-kc-114-bore.json, demo-data/kestrune-kc0911-bore.csv, 0",
             "plans/kestrune-kc-114-bore.json, demo-data/kestrune-kc0915-bore.csv, 0",
     })

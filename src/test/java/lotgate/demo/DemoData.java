@@ -32,6 +32,7 @@ public final class DemoData {
         mirelleMalformed(folder.resolve("mirelle-ms1204-malformed.xlsx"));
         pastYear(folder.resolve("lots-2025.csv"));
         quorrinClips(folder.resolve("quorrin-qp2611.csv"));
+        quorrinTablesLot(folder.resolve("quorrin-qp2612.csv"));
         kestruneBores(folder.resolve("kestrune-kc0911-bore.csv"), "KC-0911", false, 911);
         kestruneBores(folder.resolve("kestrune-kc0915-bore.csv"), "KC-0915", true, 915);
     }
@@ -84,6 +85,21 @@ public final class DemoData {
         }
         csv(file, ',', false, rows);
         lotFile(file, "QP-2611", "Quorrin Plastics (invented)", "QP-7", 2000, "2026-11-24", "R. Okafor (invented)");
+    }
+
+    /**
+     * Quorrin lot QP-2612, sampled under the purchase order's tables plan (level II, AQL 0.65, lot of 2000: code
+     * letter K, n = 125, Ac 2): 125 snap clips, one fails (unit 61), so the lot is accepted on normal inspection.
+     */
+    static void quorrinTablesLot(Path file) throws IOException {
+        List<List<Object>> rows = new ArrayList<>();
+        rows.add(row("unit", "result", "defect", "note"));
+        for (int i = 1; i <= 125; i++) {
+            String unit = String.format("QP2612-%03d", i);
+            rows.add(i == 61 ? row(unit, "fail", "latch cracked", "broke at 38 N") : row(unit, "pass", null, null));
+        }
+        csv(file, ',', false, rows);
+        lotFile(file, "QP-2612", "Quorrin Plastics (invented)", "QP-7", 2000, "2026-12-01", "R. Okafor (invented)");
     }
 
     /**
