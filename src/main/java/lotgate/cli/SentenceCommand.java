@@ -135,7 +135,7 @@ final class SentenceCommand implements Runnable {
 
     @Override
     public void run() {
-        int[] range = rowRange();
+        int[] range = Values.rowRange(spec, rows);
         SentenceLot.Request request = new SentenceLot.Request(planFile, sheetFile, sheet.name, columns(),
                 range[0], range[1], givenDetails(), lotFile, confidence.level, !noRecord, supersedes, reason, production,
                 storeOption.location(), new SentenceLot.Outputs(record.file, chart.file(), reports.files));
@@ -150,24 +150,6 @@ final class SentenceCommand implements Runnable {
         if (!((SentenceLot.Decided) result).accepted()) {
             throw new Main.Failure(ExitCode.REJECTED, null);
         }
-    }
-
-    private int[] rowRange() {
-        if (rows == null) {
-            return new int[] {0, 0};
-        }
-        String[] parts = rows.trim().split("-", -1);
-        try {
-            int first = Integer.parseInt(parts[0].trim());
-            int last = Integer.parseInt(parts[1].trim());
-            if (parts.length == 2 && first >= 1 && last >= first && last <= 1_048_576) {
-                return new int[] {first, last};
-            }
-        } catch (NumberFormatException | ArrayIndexOutOfBoundsException e) {
-            // Falls through to the message below.
-        }
-        throw new ParameterException(spec.commandLine(), "--rows " + rows + ": give the first and last sheet row of"
-                + " the sample, as in 2-126 (rows 1 to 1048576, the first no later than the last)");
     }
 
     private LotDetails givenDetails() {

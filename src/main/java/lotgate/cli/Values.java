@@ -2,11 +2,13 @@ package lotgate.cli;
 
 import lotgate.jobs.TypedValues;
 import picocli.CommandLine.ITypeConverter;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.TypeConversionException;
 
 /**
  * Parsing of the values a quality engineer types: quality levels and risks as "1%", "0.5%" or a
- * fraction such as "0.01", and whole numbers.
+ * fraction such as "0.01", whole numbers, and sheet row ranges.
  */
 final class Values {
     private Values() {
@@ -24,6 +26,25 @@ final class Values {
         } catch (IllegalArgumentException e) {
             throw new TypeConversionException(e.getMessage());
         }
+    }
+
+    /** The first and last sheet row of --rows FIRST-LAST, or {0, 0} when the option is not given. */
+    static int[] rowRange(CommandSpec spec, String rows) {
+        if (rows == null) {
+            return new int[] {0, 0};
+        }
+        String[] parts = rows.trim().split("-", -1);
+        try {
+            int first = Integer.parseInt(parts[0].trim());
+            int last = Integer.parseInt(parts[1].trim());
+            if (parts.length == 2 && first >= 1 && last >= first && last <= 1_048_576) {
+                return new int[] {first, last};
+            }
+        } catch (NumberFormatException | ArrayIndexOutOfBoundsException e) {
+            // Falls through to the message below.
+        }
+        throw new ParameterException(spec.commandLine(), "--rows " + rows + ": give the first and last sheet row of"
+                + " the sample, as in 2-126 (rows 1 to 1048576, the first no later than the last)");
     }
 
     /** Quality levels: fractions nonconforming, or nonconformities per unit for the Poisson model. */
