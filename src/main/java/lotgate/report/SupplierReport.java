@@ -542,15 +542,15 @@ public final class SupplierReport {
                 .append("@page { size: A4; margin: 12mm; }\n")
                 .append("body { font: 10pt/1.35 system-ui, sans-serif; color: #222; max-width: 190mm; margin: 0 auto; }\n")
                 .append("h1 { font-size: 14pt; } h2 { font-size: 11pt; margin: 10pt 0 3pt; break-after: avoid; }\n")
-                .append("tr, svg { break-inside: avoid; }\n")
+                .append("tr, svg, .keep { break-inside: avoid; }\n")
                 .append("table { border-collapse: collapse; } td, th { border-bottom: 1px solid #ccc; padding: 2pt 6pt;")
                 .append(" text-align: left; } th { background: #f0f0f0; } td.n { text-align: right; }\n")
-                .append("svg { width: 100%; height: auto; } td:nth-child(-n+5) { white-space: nowrap; }\n")
+                .append("svg { width: 100%; height: auto; } table.lots td:nth-child(-n+5), table.timeline td:nth-child(-n+3) { white-space: nowrap; }\n")
                 .append("</style></head><body>\n<h1>").append(LotReportHtml.escape(title(audit))).append("</h1>\n<ul>\n");
         for (String line : summary(audit)) {
             html.append("<li>").append(LotReportHtml.escape(line)).append("</li>\n");
         }
-        html.append("</ul>\n<h2>Severity timeline</h2>\n<table><tr><th>Part</th><th>After lot</th><th>Switch</th>"
+        html.append("</ul>\n<h2>Severity timeline</h2>\n<table class=\"timeline\"><tr><th>Part</th><th>After lot</th><th>Switch</th>"
                 + "<th>Reason</th></tr>\n");
         for (SupplierAudit.Part part : audit.parts()) {
             if (part.switches().isEmpty()) {
@@ -585,7 +585,14 @@ public final class SupplierReport {
                     .append(svg(Charts.control("Standard deviations of " + what(charts), deviationPoints(audit),
                             "s" + unit), 900, 360)).append('\n');
         }
-        html.append("<h2>Rejected lots</h2>\n<table><tr><th>Record</th><th>Lot</th><th>Part</th><th>Received</th>"
+        // A short list of rejected lots stays with its heading, on one page.
+        boolean keep = audit.rejectedLots().size() <= 12;
+        html.append(keep ? "<div class=\"keep\">" : "").append("<h2>Rejected lots</h2>\n");
+        if (audit.rejectedLots().isEmpty()) {
+            html.append("<p>none in this period</p>\n</div>\n</body></html>\n");
+            return html.toString();
+        }
+        html.append("<table class=\"lots\"><tr><th>Record</th><th>Lot</th><th>Part</th><th>Received</th>"
                 + "<th>Found</th><th>Evidence</th></tr>\n");
         for (int i = 0; i < audit.rejectedLots().size(); i++) {
             LotRow lot = audit.rejectedLots().get(i);
@@ -595,7 +602,7 @@ public final class SupplierReport {
                     .append(lot.nonconforming()).append(" of ").append(lot.inspected()).append("</td><td>")
                     .append(LotReportHtml.escape(evidence.get(i))).append("</td></tr>\n");
         }
-        html.append("</table>\n</body></html>\n");
+        html.append("</table>\n").append(keep ? "</div>\n" : "").append("</body></html>\n");
         return html.toString();
     }
 

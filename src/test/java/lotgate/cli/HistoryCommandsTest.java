@@ -71,6 +71,27 @@ class HistoryCommandsTest {
     }
 
     @Test
+    void programsReadOneVocabularyFromSentenceHistoryVerifyAndCorrectiveAction() throws Exception {
+        JsonNode decision = JSON.readTree(sentence(BOLTS, "V1", 132, 2).out());
+        JsonNode verdict = decision.get("classes").get(0);
+        assertEquals(132, verdict.get("inspected").asInt());
+        assertEquals(2, verdict.get("nonconforming").asInt());
+        JsonNode listed = JSON.readTree(Cli.run("history", "--store", store, "--format", "json").out())
+                .get("records").get(0);
+        assertEquals(132, listed.get("inspected").asInt());
+        assertEquals(2, listed.get("nonconforming").asInt());
+        assertTrue(listed.get("supersedes").isNull(), "a record that corrects none supersedes null, not 0");
+        Cli.Result action = Cli.run("corrective-action", "--supplier", "Invented Works", "--part", "IW-1", "--reason",
+                "new heading die (invented)", "--store", store, "--format", "json");
+        assertEquals(0, action.exitCode(), action.err());
+        assertEquals(2, JSON.readTree(action.out()).get("seq").asInt());
+        Cli.Result verified = Cli.run("verify", "--store", store, "--format", "csv");
+        assertEquals(0, verified.exitCode(), verified.err());
+        assertTrue(verified.out().startsWith("store,storeId,intact,records,head,problem"), verified.out());
+        assertTrue(verified.out().contains(",true,2,2:"), verified.out());
+    }
+
+    @Test
     void aFamilyAppliesTheVariantTheHistoryCallsFor() throws Exception {
         Path tightened = folder.resolve("tightened.json");
         assertEquals(0, Cli.run("design", "--aql", "0.65%", "--ltpd", "4%", "--save", tightened.toString()).exitCode());
