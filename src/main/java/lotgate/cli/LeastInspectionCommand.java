@@ -17,7 +17,8 @@ import picocli.CommandLine.Option;
                         + " P(reject) at the supplier's process average, among the plans that protect lot quality"
                         + " (--ltpd: P(accept) at the LTPD at most --beta) or the average outgoing quality (--aoql: the"
                         + " AOQL at most the target). These are the plans Dodge and Romig tabled, computed exactly for"
-                        + " the lot size (hypergeometric by default).",
+                        + " the lot size (hypergeometric by default). --lot-size (up to 1,000,000) and"
+                        + " --process-average are required.",
                 "",
                 "The plan 'design' gives for the same protection is shown beside it, with its ATI.",
                 ""})

@@ -20,7 +20,8 @@ import picocli.CommandLine.TypeConversionException;
                         + " where the cell holds none, and gives the plan of the tables (MIL-STD-105E, kept by the"
                         + " later civil standards) for the AQL and severity. Then what the tables do not print: the"
                         + " exact producer's risk at the AQL, the LTPD at a consumer's risk of 10%% and 5%%, the"
-                        + " quality accepted half the time, the AOQL for the lot size, and the ASN of a double plan.",
+                        + " quality accepted half the time, the AOQL for the lot size, and the ASN of a double plan."
+                        + " --lot-size is required: the code letter depends on it.",
                 "",
                 "--save-family writes the normal, tightened and reduced plans with the switching rules in one step;"
                         + " 'lotgate sentence FAMILY SHEET' then applies the one the supplier's history calls for.",
