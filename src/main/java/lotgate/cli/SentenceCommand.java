@@ -142,7 +142,11 @@ final class SentenceCommand implements Runnable {
         if (!noRecord) {
             storeOption.prepareForRecording();
         }
-        SentenceLot.Result result = SentenceLot.run(request);
+        SentenceLot.Result result;
+        try (Progress reading = Progress.onTerminal("sentence: reading sheet rows", 0,
+                format.kind == OutputFormat.Kind.text)) {
+            result = SentenceLot.run(request, reading::at);
+        }
         format.print(result, SentenceRendering::text, SentenceRendering::json, SentenceRendering::csv);
         if (result instanceof SentenceLot.Undecided) {
             throw new Main.Failure(ExitCode.NOT_DECIDED, null);

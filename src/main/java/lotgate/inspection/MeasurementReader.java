@@ -14,6 +14,7 @@ import java.util.Map;
  * value is refused with its range.
  */
 public final class MeasurementReader implements RowHandler {
+    private java.util.function.LongConsumer rowsRead = row -> { };
     private final SheetSource source;
     private final String sheet;
     private final Columns columns;
@@ -96,6 +97,12 @@ public final class MeasurementReader implements RowHandler {
         }
     }
 
+    /** Tells {@code rowsRead} the number of each sheet row read, for a progress line. */
+    public MeasurementReader telling(java.util.function.LongConsumer rowsRead) {
+        this.rowsRead = rowsRead;
+        return this;
+    }
+
     public Measurements read() {
         if (!source.sheetNames().contains(sheet)) {
             throw new SheetException(source.file(), "no sheet named '" + sheet + "'; the sheets are "
@@ -156,6 +163,7 @@ public final class MeasurementReader implements RowHandler {
 
     @Override
     public void row(int row, List<Cell> cells) {
+        rowsRead.accept(row);
         lastRowSeen = row;
         if (headerRow < 0) {
             List<String> texts = cells.stream().map(Cell::text).toList();

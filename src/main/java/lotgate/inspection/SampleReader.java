@@ -19,6 +19,7 @@ import lotgate.plan.DefectClass;
  * with its range.
  */
 public final class SampleReader implements RowHandler {
+    private java.util.function.LongConsumer rowsRead = row -> { };
     /** Nonconforming units kept for reports; the counts cover all of them. */
     public static final int KEPT_UNITS = 1000;
     /** Distinct defect types kept; more are counted under "(other types)". */
@@ -80,6 +81,12 @@ public final class SampleReader implements RowHandler {
         if (columns.delimiter() != null) {
             source.useDelimiter(columns.delimiter());
         }
+    }
+
+    /** Tells {@code rowsRead} the number of each sheet row read, for a progress line. */
+    public SampleReader telling(java.util.function.LongConsumer rowsRead) {
+        this.rowsRead = rowsRead;
+        return this;
     }
 
     private static String defaultSheet(SheetSource source) {
@@ -153,6 +160,7 @@ public final class SampleReader implements RowHandler {
 
     @Override
     public void row(int row, List<Cell> cells) {
+        rowsRead.accept(row);
         lastRowSeen = row;
         if (headerRow < 0) {
             List<String> texts = cells.stream().map(Cell::text).toList();

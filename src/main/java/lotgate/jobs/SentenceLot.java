@@ -6,6 +6,7 @@ import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.function.LongConsumer;
 import java.util.stream.IntStream;
 import lotgate.files.AtomicWrite;
 import lotgate.files.Sha256;
@@ -113,6 +114,11 @@ public final class SentenceLot {
 
     /** Sentences the lot, records it unless asked not to, and writes the outputs asked for. */
     public static Result run(Request request) {
+        return run(request, row -> { });
+    }
+
+    /** As {@link #run(Request)}, telling {@code rowsRead} each sheet row read (for a face's progress line). */
+    public static Result run(Request request, LongConsumer rowsRead) {
         checkOutputs(request.outputs());
         if (!request.production().equals("steady") && !request.production().equals("irregular")) {
             throw JobException.invalid("production", "--production " + request.production() + ": give steady or"
@@ -156,8 +162,8 @@ public final class SentenceLot {
             lot = checkLot(request, lot, plan, notices);
             Path appliedPlan = inspection == null ? request.planFile() : inspection.planFile();
             Judged judged = plan.measurement() != null
-                    ? measured(request, plan, appliedPlan, source, lot, notices)
-                    : counted(request, plan, appliedPlan, source, lot, notices);
+                    ? measured(request, plan, appliedPlan, source, lot, notices, rowsRead)
+                    : counted(request, plan, appliedPlan, source, lot, notices, rowsRead);
             if (judged instanceof UndecidedLot undecided) {
                 return undecided.undecided();
             }
@@ -177,8 +183,8 @@ public final class SentenceLot {
         SheetSource source = SheetSource.open(request.sheetFile());
         List<String> notices = new ArrayList<>();
         Judged judged = plan.measurement() != null
-                ? measured(request, plan, request.planFile(), source, lot, notices)
-                : counted(request, plan, request.planFile(), source, lot, notices);
+                ? measured(request, plan, request.planFile(), source, lot, notices, row -> { })
+                : counted(request, plan, request.planFile(), source, lot, notices, row -> { });
         if (judged instanceof DecidedLot decided) {
             return decided.decision();
         }
@@ -250,7 +256,7 @@ public final class SentenceLot {
 
     /** A lot judged by counts: a single plan, a plan in stages or a sequential plan. */
     private static Judged counted(Request request, SavedPlan plan, Path appliedPlan, SheetSource source,
-            LotDetails lot, List<String> notices) {
+            LotDetails lot, List<String> notices, LongConsumer rowsRead) {
         if (request.outputs().chart() != null && !plan.unclassified()) {
             throw JobException.invalid("chart", "--sampling-chart draws the sampling chart of a plan without"
                     + " defect classes; plan " + plan.name() + " has criteria per class");
@@ -258,7 +264,7 @@ public final class SentenceLot {
         int[] cutoffs = plan.classes().stream().flatMap(c -> Stopping.boundaries(c.plan()).stream())
                 .mapToInt(Integer::intValue).distinct().toArray();
         SampleReader reader = new SampleReader(source, request.sheet(), request.columns(), cutoffs,
-                request.firstRow(), request.lastRow());
+                request.firstRow(), request.lastRow()).telling(rowsRead);
         if (plan.classes().stream().anyMatch(c -> c.plan() instanceof SequentialPlan)) {
             reader.keepSequence();
         } else if (cutoffs.length > 0) {
@@ -298,7 +304,7 @@ public final class SentenceLot {
 
     /** A lot judged on measurements by a variables plan. */
     private static Judged measured(Request request, SavedPlan plan, Path appliedPlan, SheetSource source,
-            LotDetails lot, List<String> notices) {
+            LotDetails lot, List<String> notices, LongConsumer rowWatcher) {
         if (request.outputs().chart() != null) {
             throw JobException.invalid("chart", "--sampling-chart draws the sampling chart of an attribute plan;"
                     + " plan " + plan.name() + " judges measurements (its report shows them)");
@@ -308,7 +314,7 @@ public final class SentenceLot {
         VariablesPlan variables = (VariablesPlan) plan.plan();
         Measurement spec = plan.measurement();
         MeasurementReader.Measurements measurements = new MeasurementReader(source, request.sheet(),
-                request.columns(), request.firstRow(), request.lastRow()).read();
+                request.columns(), request.firstRow(), request.lastRow()).telling(rowWatcher).read();
         int wanted = variables.n();
         if (measurements.count() != wanted) {
             String rowsRead = measurements.count() == 0 ? "" : ", rows " + measurements.firstRow() + " to "

@@ -177,6 +177,17 @@ class JobsTest {
     }
 
     @Test
+    void sentencingTellsTheFaceEachSheetRowItReads() {
+        List<Long> rows = new java.util.ArrayList<>();
+        SentenceLot.run(sentence("arnwick-af2611.xlsx", false, null, SentenceLot.Outputs.NONE), rows::add);
+        assertEquals(1L, rows.get(0), "the header search starts at the first row");
+        assertTrue(rows.size() >= 133, "the header and the 132 units: " + rows.size());
+        for (int i = 1; i < rows.size(); i++) {
+            assertTrue(rows.get(i) > rows.get(i - 1), "rows in order");
+        }
+    }
+
+    @Test
     void aLotAlreadyRecordedIsAConflict() {
         String store = newStore();
         SentenceLot.run(sentence("arnwick-af2611.xlsx", true, store, SentenceLot.Outputs.NONE));
