@@ -72,6 +72,24 @@ class HistoryJobsTest {
     }
 
     @Test
+    void aDecisionRecordOfTheFirstVersionIsReadUnderItsOldNames() throws Exception {
+        // Version 1 of the decision record named the counts "found" and "sampleSize"; version 2 names them
+        // "nonconforming" and "inspected". Stores keep version-1 records for ever, so the audit reads both.
+        String body = "{\"class\": \"any\", \"verdict\": \"reject\", %s, \"rejectionNumber\": 4,"
+                + " \"evidence\": {\"pValueAtAql\": 0.01, \"interval\": \"Clopper-Pearson\", \"lowerBound\": 0.01,"
+                + " \"upperBound\": 0.09}}";
+        String record = "{\"kind\": \"lot\", \"decision\": {\"plan\": {\"name\": \"bolts\"}, \"classes\": [" + body
+                + "]}}";
+        var json = new com.fasterxml.jackson.databind.ObjectMapper();
+        String first = AuditSupplier.evidenceOf(json.readTree(String.format(record,
+                "\"found\": 5, \"sampleSize\": 132")));
+        String second = AuditSupplier.evidenceOf(json.readTree(String.format(record,
+                "\"nonconforming\": 5, \"inspected\": 132")));
+        assertTrue(first.startsWith("any: 5 found in 132 (reject at 4)"), first);
+        assertEquals(first, second);
+    }
+
+    @Test
     void auditingASupplierGivesItsLotsAndProcessAverage() {
         String store = importedStore();
         AuditSupplier.Result result = AuditSupplier.run(new AuditSupplier.Request(ARNWICK, null, null, null,
