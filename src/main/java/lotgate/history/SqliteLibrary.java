@@ -75,8 +75,7 @@ final class SqliteLibrary {
             return null;
         }
         String name = System.mapLibraryName("sqlitejdbc").replace(".jnilib", ".dylib");
-        String resource = "/org/sqlite/native/" + org.sqlite.util.OSInfo.getNativeLibFolderPathForCurrentOS() + "/"
-                + name;
+        String resource = "/org/sqlite/native/" + platformFolder() + "/" + name;
         URL url = org.sqlite.JDBC.class.getResource(resource);
         if (url == null || !(url.openConnection() instanceof JarURLConnection jar)) {
             return null;
@@ -109,6 +108,25 @@ final class SqliteLibrary {
             Files.deleteIfExists(part);
         }
         return library;
+    }
+
+    /**
+     * The driver's folder name for this platform. The driver's own answer starts a process on Linux
+     * (to rule out Android) that costs a short command 10 ms; on the common desktop and server
+     * platforms the name follows from the system properties and the C library's loader.
+     */
+    static String platformFolder() {
+        String os = System.getProperty("os.name", "");
+        String arch = System.getProperty("os.arch", "");
+        boolean android = System.getProperty("java.vm.vendor", "").contains("Android");
+        if (os.equals("Linux") && !android) {
+            String folder = arch.equals("amd64") || arch.equals("x86_64") ? "x86_64"
+                    : arch.equals("aarch64") ? "aarch64" : null;
+            if (folder != null && !Files.exists(Path.of("/lib/ld-musl-" + folder + ".so.1"))) {
+                return "Linux/" + folder;
+            }
+        }
+        return org.sqlite.util.OSInfo.getNativeLibFolderPathForCurrentOS();
     }
 
     private static void createPrivately(Path folder) throws IOException {

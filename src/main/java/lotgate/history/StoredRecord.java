@@ -1,7 +1,6 @@
 package lotgate.history;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 import java.time.Instant;
 
 /**
@@ -9,12 +8,10 @@ import java.time.Instant;
  * content and the hashes that chain it to the record before.
  */
 public record StoredRecord(long seq, Instant recordedAt, String content, String previousHash, String hash) {
-    private static final ObjectMapper JSON = new ObjectMapper();
-
     public JsonNode json() {
         try {
-            return JSON.readTree(content);
-        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+            return lotgate.files.JsonTree.lenient(content);
+        } catch (java.io.IOException e) {
             throw new StoreException("record " + seq + " holds malformed content", e);
         }
     }

@@ -1,11 +1,6 @@
 package lotgate.plan;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.core.StreamReadFeature;
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
-import com.fasterxml.jackson.databind.json.JsonMapper;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
@@ -15,6 +10,7 @@ import java.nio.file.Path;
 import java.util.Map;
 import lotgate.files.AtomicWrite;
 import lotgate.files.InputFileException;
+import lotgate.files.JsonTree;
 
 /**
  * A plan family (format "lotgate-plan-family", version 1): the normal, tightened and reduced variants
@@ -25,9 +21,6 @@ import lotgate.files.InputFileException;
  */
 public record PlanFamily(Path file, Map<String, SavedPlan> variants, Map<String, Path> files, JsonNode switching) {
     public static final String FORMAT = "lotgate-plan-family";
-    private static final ObjectMapper JSON = JsonMapper.builder()
-            .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
-            .enable(SerializationFeature.INDENT_OUTPUT).build();
     private static final String[] SEVERITIES = {"normal", "tightened", "reduced"};
 
     /** Whether a JSON file is a plan family rather than a plan. */
@@ -36,7 +29,7 @@ public record PlanFamily(Path file, Map<String, SavedPlan> variants, Map<String,
             if (!Files.isRegularFile(file) || Files.size(file) > (1 << 20)) {
                 return false;
             }
-            return FORMAT.equals(JSON.readTree(PlanFormat.withoutByteOrderMark(Files.readString(file))).path("format").asText());
+            return FORMAT.equals(JsonTree.strict(PlanFormat.withoutByteOrderMark(Files.readString(file))).path("format").asText());
         } catch (IOException e) {
             return false;
         }
@@ -59,18 +52,14 @@ public record PlanFamily(Path file, Map<String, SavedPlan> variants, Map<String,
             entry.put("fingerprint", saved.fingerprint());
         }
         root.set("switching", switching);
-        try {
-            AtomicWrite.writeString(file, JSON.writeValueAsString(root) + "\n");
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException(e);
-        }
+        AtomicWrite.writeString(file, JsonTree.indented(root) + "\n");
     }
 
     /** Reads a family and every plan it names, checking each plan's fingerprint against the family's. */
     public static PlanFamily read(Path file) {
         JsonNode root;
         try {
-            root = JSON.readTree(PlanFormat.withoutByteOrderMark(Files.readString(file)));
+            root = JsonTree.strict(PlanFormat.withoutByteOrderMark(Files.readString(file)));
         } catch (NoSuchFileException e) {
             throw new InputFileException(file, "no such plan family file");
         } catch (IOException e) {

@@ -1,13 +1,7 @@
 package lotgate.plan;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.core.StreamReadFeature;
-import com.fasterxml.jackson.core.json.JsonReadFeature;
-import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
-import com.fasterxml.jackson.databind.json.JsonMapper;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
@@ -23,6 +17,7 @@ import java.util.Set;
 import lotgate.files.AtomicWrite;
 import lotgate.files.CanonicalJson;
 import lotgate.files.InputFileException;
+import lotgate.files.JsonTree;
 import lotgate.sampling.OcModel;
 import lotgate.sampling.Plan;
 import lotgate.sampling.PlanRisks;
@@ -52,12 +47,6 @@ public final class PlanFormat {
     /** Relative agreement required between recorded and recomputed risks. */
     private static final double RISK_TOLERANCE = 1e-9;
 
-    private static final ObjectMapper JSON = JsonMapper.builder()
-            .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
-            .disable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
-            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
-            .enable(SerializationFeature.INDENT_OUTPUT)
-            .build();
     private static final Set<String> TOP_FIELDS_V1 = Set.of("format", "formatVersion", "name", "description",
             "created", "plan", "model", "lotSize", "designedFor", "achieved", "fingerprint");
     private static final Set<String> TOP_FIELDS_V2 = Set.of("format", "formatVersion", "name", "description",
@@ -108,11 +97,7 @@ public final class PlanFormat {
 
     /** The file's text: indented JSON ending in a newline. */
     public static String toText(SavedPlan plan) {
-        try {
-            return JSON.writeValueAsString(toJson(plan)) + "\n";
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException(e);
-        }
+        return JsonTree.indented(toJson(plan)) + "\n";
     }
 
     static ObjectNode toJson(SavedPlan saved) {
@@ -245,7 +230,7 @@ public final class PlanFormat {
             if (Files.size(file) > LARGEST_FILE) {
                 throw new InputFileException(file, "too large to be a plan file (over 1 MiB)");
             }
-            root = JSON.readTree(withoutByteOrderMark(Files.readString(file, StandardCharsets.UTF_8)));
+            root = JsonTree.strict(withoutByteOrderMark(Files.readString(file, StandardCharsets.UTF_8)));
         } catch (NoSuchFileException e) {
             throw new InputFileException(file, "no such plan file");
         } catch (JsonProcessingException e) {

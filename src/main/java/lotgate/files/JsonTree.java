@@ -1,0 +1,174 @@
+package lotgate.files;
+
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.core.JsonParseException;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.core.StreamReadFeature;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.MissingNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.io.StringWriter;
+import java.io.UncheckedIOException;
+import java.util.Map;
+import java.util.TreeMap;
+
+/**
+ * JSON text to Jackson trees and back through Jackson's streaming parser and generator alone. The
+ * trees, numbers and layout are those of Jackson's data-binding mapper ({@code readTree},
+ * {@code writeValueAsString} with or without indentation), but the mapper's start-up (35 ms, a fifth
+ * of a short command) is not paid: lotgate's files are trees, never bound to classes.
+ */
+public final class JsonTree {
+    private static final JsonFactory STRICT = JsonFactory.builder()
+            .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION).build();
+    private static final JsonFactory LENIENT = JsonFactory.builder().build();
+    private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
+
+    private JsonTree() {
+    }
+
+    /**
+     * The tree of a text that must hold exactly one JSON value with no name given twice in an
+     * object; an empty text is the missing node.
+     *
+     * @throws JsonParseException at the place where the text breaks one of these rules
+     */
+    public static JsonNode strict(String text) throws IOException {
+        return read(STRICT, text, true);
+    }
+
+    /** The tree of the first JSON value in a text, as the mapper reads it: a repeated name keeps its last value. */
+    public static JsonNode lenient(String text) throws IOException {
+        return read(LENIENT, text, false);
+    }
+
+    /** The tree as compact text, no white space. */
+    public static String compact(JsonNode node) {
+        return write(node, false, false);
+    }
+
+    /** The tree as indented text, as the mapper indents it (no final line break). */
+    public static String indented(JsonNode node) {
+        return write(node, true, false);
+    }
+
+    /** The tree as compact text with the names of every object in sorted order, at every level. */
+    public static String sortedCompact(JsonNode node) {
+        return write(node, false, true);
+    }
+
+    private static JsonNode read(JsonFactory factory, String text, boolean whole) throws IOException {
+        try (JsonParser parser = factory.createParser(text)) {
+            JsonToken first = parser.nextToken();
+            if (first == null) {
+                return MissingNode.getInstance();
+            }
+            JsonNode root = value(parser, first);
+            if (whole) {
+                JsonToken trailing = parser.nextToken();
+                if (trailing != null) {
+                    throw new JsonParseException(parser, "Trailing token (of type " + trailing
+                            + ") found after value: not allowed");
+                }
+            }
+            return root;
+        }
+    }
+
+    private static JsonNode value(JsonParser parser, JsonToken token) throws IOException {
+        switch (token) {
+            case START_OBJECT -> {
+                ObjectNode object = NODES.objectNode();
+                for (String name = parser.nextFieldName(); name != null; name = parser.nextFieldName()) {
+                    object.set(name, value(parser, parser.nextToken()));
+                }
+                return object;
+            }
+            case START_ARRAY -> {
+                ArrayNode array = NODES.arrayNode();
+                for (JsonToken next = parser.nextToken(); next != JsonToken.END_ARRAY; next = parser.nextToken()) {
+                    array.add(value(parser, next));
+                }
+                return array;
+            }
+            case VALUE_STRING -> {
+                return NODES.textNode(parser.getText());
+            }
+            case VALUE_NUMBER_INT -> {
+                return switch (parser.getNumberType()) {
+                    case INT -> NODES.numberNode(parser.getIntValue());
+                    case LONG -> NODES.numberNode(parser.getLongValue());
+                    default -> NODES.numberNode(parser.getBigIntegerValue());
+                };
+            }
+            case VALUE_NUMBER_FLOAT -> {
+                return NODES.numberNode(parser.getDoubleValue());
+            }
+            case VALUE_TRUE, VALUE_FALSE -> {
+                return NODES.booleanNode(token == JsonToken.VALUE_TRUE);
+            }
+            case VALUE_NULL -> {
+                return NODES.nullNode();
+            }
+            default -> throw new JsonParseException(parser, "Unexpected token (" + token + ")");
+        }
+    }
+
+    private static String write(JsonNode node, boolean indent, boolean sorted) {
+        StringWriter text = new StringWriter();
+        try (JsonGenerator generator = LENIENT.createGenerator(text)) {
+            if (indent) {
+                generator.useDefaultPrettyPrinter();
+            }
+            write(generator, node, sorted);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return text.toString();
+    }
+
+    private static void write(JsonGenerator out, JsonNode node, boolean sorted) throws IOException {
+        switch (node.getNodeType()) {
+            case OBJECT -> {
+                out.writeStartObject();
+                Iterable<Map.Entry<String, JsonNode>> fields = node.properties();
+                if (sorted) {
+                    Map<String, JsonNode> byName = new TreeMap<>();
+                    fields.forEach(e -> byName.put(e.getKey(), e.getValue()));
+                    fields = byName.entrySet();
+                }
+                for (Map.Entry<String, JsonNode> field : fields) {
+                    out.writeFieldName(field.getKey());
+                    write(out, field.getValue(), sorted);
+                }
+                out.writeEndObject();
+            }
+            case ARRAY -> {
+                out.writeStartArray();
+                for (JsonNode element : node) {
+                    write(out, element, sorted);
+                }
+                out.writeEndArray();
+            }
+            case STRING -> out.writeString(node.textValue());
+            case NUMBER -> {
+                switch (node.numberType()) {
+                    case INT -> out.writeNumber(node.intValue());
+                    case LONG -> out.writeNumber(node.longValue());
+                    case BIG_INTEGER -> out.writeNumber(node.bigIntegerValue());
+                    case FLOAT -> out.writeNumber(node.floatValue());
+                    case BIG_DECIMAL -> out.writeNumber(node.decimalValue());
+                    default -> out.writeNumber(node.doubleValue());
+                }
+            }
+            case BOOLEAN -> out.writeBoolean(node.booleanValue());
+            case NULL -> out.writeNull();
+            default -> throw new IllegalArgumentException("not a JSON value: " + node.getNodeType());
+        }
+    }
+}
