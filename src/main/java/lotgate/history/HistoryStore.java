@@ -6,7 +6,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.sql.Connection;
-import java.sql.DriverManager;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
@@ -117,7 +116,7 @@ public final class HistoryStore implements AutoCloseable {
         Connection connection;
         try {
             if (location.postgres()) {
-                connection = DriverManager.getConnection(location.url(), location.postgresProperties(environment));
+                connection = new org.postgresql.Driver().connect(location.url(), location.postgresProperties(environment));
             } else {
                 SqliteLibrary.prepare();
                 Properties properties = new Properties();
@@ -125,7 +124,12 @@ public final class HistoryStore implements AutoCloseable {
                 properties.setProperty("synchronous", "FULL");
                 properties.setProperty("busy_timeout", "60000");
                 properties.setProperty("foreign_keys", "true");
-                connection = DriverManager.getConnection(location.url(), properties);
+                // The driver itself rather than DriverManager, which would first load and start every JDBC
+                // driver on the class path (PostgreSQL's and its logging: 15 ms of a short command).
+                connection = new org.sqlite.JDBC().connect(location.url(), properties);
+            }
+            if (connection == null) {
+                throw new SQLException("the driver does not accept the address " + location.url());
             }
             // SQLite: lotgate begins each transaction itself (the driver would otherwise begin the next one at
             // once after every commit and, for writes, hold the lock for as long as the connection is open).
