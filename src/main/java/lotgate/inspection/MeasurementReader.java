@@ -22,9 +22,8 @@ public final class MeasurementReader implements RowHandler {
     private final int toRow;
 
     private final int givenHeaderRow;
+    private final SampleRows sampleRows;
     private int headerRow = -1;
-    private int lastRowSeen;
-    private final List<String> looked = new ArrayList<>();
     private int valueColumn = -1;
     private int unitColumn = -1;
     private final List<String> headers = new ArrayList<>();
@@ -82,16 +81,14 @@ public final class MeasurementReader implements RowHandler {
 
     public MeasurementReader(SheetSource source, String sheet, Columns columns, int fromRow, int toRow) {
         this.source = source;
-        List<String> names = source.sheetNames();
-        if (names.isEmpty()) {
-            throw new SheetException(source.file(), "the workbook has no sheets");
-        }
-        this.sheet = sheet != null ? sheet : names.stream().filter(n -> !n.equalsIgnoreCase(LotDetails.SHEET))
-                .findFirst().orElse(names.get(0));
+        String first = source.firstSampleSheet(); // refuses a workbook without sheets, whatever sheet is named
+        this.sheet = sheet != null ? sheet : first;
         this.columns = columns;
         this.fromRow = fromRow;
         this.toRow = toRow;
         this.givenHeaderRow = columns.headerRow();
+        this.sampleRows = new SampleRows(source, this.sheet, new SampleRows.Header(this::isHeader,
+                "a '" + columns.nameOf(Columns.Role.VALUE) + "' column", "value=Diameter", false), columns, fromRow, toRow);
         if (columns.delimiter() != null) {
             source.useDelimiter(columns.delimiter());
         }
@@ -104,42 +101,20 @@ public final class MeasurementReader implements RowHandler {
     }
 
     public Measurements read() {
-        if (!source.sheetNames().contains(sheet)) {
-            throw new SheetException(source.file(), "no sheet named '" + sheet + "'; the sheets are "
-                    + SheetSource.quoted(source.sheetNames()));
-        }
-        source.findHeader(this::isHeader);
-        source.read(sheet, this);
+        sampleRows.read(this);
         if (headerRow < 0) {
-            if (looked.isEmpty()) {
+            if (givenHeaderRow > 0 || sampleRows.rowsLookedAt() == 0) {
                 throw new SheetException(source.file(), "sheet '" + sheet + "' is empty: there is no header row");
             }
-            throw noHeader();
+            throw sampleRows.headerNotFound();
         }
         confirmRepeats();
         return new Measurements(source.file(), sheet, headerRow, Arrays.copyOf(values, count),
                 Arrays.copyOf(rows, count), Map.copyOf(units), List.copyOf(headers));
     }
 
-    private String where() {
-        return source instanceof CsvSheets ? "the file" : "sheet '" + sheet + "'";
-    }
-
     private boolean isHeader(List<String> texts) {
         return texts.stream().anyMatch(t -> columns.roleOf(t) == Columns.Role.VALUE);
-    }
-
-    private SheetException noHeader() {
-        if (givenHeaderRow > 0) {
-            return new SheetException(source.file(), source.whereRow(sheet, givenHeaderRow) + ", given as the header"
-                    + " row, is empty");
-        }
-        List<String> shown = looked.subList(0, Math.min(6, looked.size()));
-        return new SheetException(source.file(), "no header row: none of rows 1 to "
-                + Math.min(lastRowSeen, SheetSource.HEADER_SEARCH) + " of " + where() + " has a '"
-                + columns.nameOf(Columns.Role.VALUE) + "' column; the rows looked at are " + String.join("; ", shown)
-                + (looked.size() > shown.size() ? "; and " + (looked.size() - shown.size()) + " more" : "")
-                + " (name your own headers with --columns, e.g. value=Diameter, or give the header row with --header-row)");
     }
 
     @Override
@@ -147,7 +122,7 @@ public final class MeasurementReader implements RowHandler {
         if (headerRow < 0) {
             return;
         }
-        int last = toRow > 0 ? Math.min(toRow, lastRowSeen) : lastRowSeen;
+        int last = toRow > 0 ? Math.min(toRow, sampleRows.lastRowSeen()) : sampleRows.lastRowSeen();
         for (MergedRange range : ranges) {
             int row = Math.max(Math.max(headerRow + 1, fromRow), range.firstRow());
             if (!range.hides(row, valueColumn)) {
@@ -164,26 +139,15 @@ public final class MeasurementReader implements RowHandler {
     @Override
     public void row(int row, List<Cell> cells) {
         rowsRead.accept(row);
-        lastRowSeen = row;
-        if (headerRow < 0) {
-            List<String> texts = cells.stream().map(Cell::text).toList();
-            if (givenHeaderRow > 0 ? row > givenHeaderRow : row > SheetSource.HEADER_SEARCH) {
-                throw noHeader();
+        switch (sampleRows.kind(row, cells)) {
+            case HEADER -> header(row, cells);
+            case UNIT -> unit(row, cells);
+            default -> {
             }
-            if (givenHeaderRow > 0 ? row == givenHeaderRow : isHeader(texts)) {
-                header(row, cells);
-            } else if (givenHeaderRow == 0) {
-                looked.add("row " + row + ": " + String.join(", ", texts.subList(0, Math.min(4, texts.size())))
-                        + (texts.size() > 4 ? ", …" : ""));
-            }
-            return;
         }
-        if (toRow > 0 && row > toRow) {
-            throw new RowHandler.Stop();
-        }
-        if (fromRow > 0 && row < fromRow) {
-            return;
-        }
+    }
+
+    private void unit(int row, List<Cell> cells) {
         if (count >= Cell.MAX_ROW) {
             throw new SheetException(source.file(), "sheet '" + sheet + "' holds more than " + Cell.MAX_ROW
                     + " measurements, more rows than a spreadsheet has; name the sample's rows");

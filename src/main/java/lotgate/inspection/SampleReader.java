@@ -33,13 +33,10 @@ public final class SampleReader implements RowHandler {
     private final int[] cutoffs;
     private final int fromRow;
     private final int toRow;
-    private final int givenHeaderRow;
     private final ResultWords words;
 
+    private final SampleRows rows;
     private int headerRow = -1;
-    private int lastRowSeen;
-    private final List<String> looked = new ArrayList<>();
-    private int lookedRows;
     private final List<String> headers = new ArrayList<>();
     private Columns.Role[] roleByColumn = new Columns.Role[0];
     private final Map<Columns.Role, Integer> columnByRole = new HashMap<>();
@@ -71,13 +68,14 @@ public final class SampleReader implements RowHandler {
      */
     public SampleReader(SheetSource source, String sheet, Columns columns, int[] cutoffs, int fromRow, int toRow) {
         this.source = source;
-        this.sheet = sheet != null ? sheet : defaultSheet(source);
+        this.sheet = sheet != null ? sheet : source.firstSampleSheet();
         this.columns = columns;
         this.cutoffs = cutoffs.clone();
         this.fromRow = fromRow;
         this.toRow = toRow;
-        this.givenHeaderRow = columns.headerRow();
         this.words = columns.resultWords();
+        this.rows = new SampleRows(source, this.sheet, new SampleRows.Header(this::isHeader, wanted(), "result=Outcome",
+                true), columns, fromRow, toRow);
         if (columns.delimiter() != null) {
             source.useDelimiter(columns.delimiter());
         }
@@ -87,14 +85,6 @@ public final class SampleReader implements RowHandler {
     public SampleReader telling(java.util.function.LongConsumer rowsRead) {
         this.rowsRead = rowsRead;
         return this;
-    }
-
-    private static String defaultSheet(SheetSource source) {
-        List<String> names = source.sheetNames();
-        if (names.isEmpty()) {
-            throw new SheetException(source.file(), "the workbook has no sheets");
-        }
-        return names.stream().filter(n -> !n.equalsIgnoreCase(LotDetails.SHEET)).findFirst().orElse(names.get(0));
     }
 
     /**
@@ -122,17 +112,12 @@ public final class SampleReader implements RowHandler {
 
     /** Reads the whole sheet and checks unit identifiers for repeats. */
     public InspectionSample read() {
-        if (!source.sheetNames().contains(sheet)) {
-            throw new SheetException(source.file(), "no sheet named '" + sheet + "'; the sheets are "
-                    + SheetSource.quoted(source.sheetNames()));
-        }
-        source.findHeader(this::isHeader);
-        source.read(sheet, this);
+        rows.read(this);
         if (headerRow < 0) {
-            if (lookedRows == 0) {
+            if (rows.rowsLookedAt() == 0) {
                 throw new SheetException(source.file(), where() + " is empty: there is no header row");
             }
-            throw noHeader();
+            throw rows.headerNotFound();
         }
         confirmRepeats();
         return new InspectionSample(source.file(), sheet, headerRow, List.copyOf(headers), passFail,
@@ -143,7 +128,7 @@ public final class SampleReader implements RowHandler {
     }
 
     private String where() {
-        return source.sheetNames().size() == 1 && source instanceof CsvSheets ? "the file" : "sheet '" + sheet + "'";
+        return rows.where();
     }
 
     /** Whether a row's cell texts name a result column or a defect class count column. */
@@ -161,25 +146,15 @@ public final class SampleReader implements RowHandler {
     @Override
     public void row(int row, List<Cell> cells) {
         rowsRead.accept(row);
-        lastRowSeen = row;
-        if (headerRow < 0) {
-            List<String> texts = cells.stream().map(Cell::text).toList();
-            if (givenHeaderRow > 0 ? row > givenHeaderRow : row > SheetSource.HEADER_SEARCH) {
-                throw noHeader();
+        switch (rows.kind(row, cells)) {
+            case HEADER -> header(row, cells);
+            case UNIT -> unitRow(row, cells);
+            default -> {
             }
-            if (givenHeaderRow > 0 ? row == givenHeaderRow : isHeader(texts)) {
-                header(row, cells);
-            } else {
-                look(row, texts);
-            }
-            return;
         }
-        if (toRow > 0 && row > toRow) {
-            throw new RowHandler.Stop();
-        }
-        if (fromRow > 0 && row < fromRow) {
-            return;
-        }
+    }
+
+    private void unitRow(int row, List<Cell> cells) {
         if (units >= Cell.MAX_ROW) {
             throw new SheetException(source.file(), where() + " holds more than " + Cell.MAX_ROW + " units, more"
                     + " rows than a spreadsheet has; name the sample's rows");
@@ -191,36 +166,10 @@ public final class SampleReader implements RowHandler {
         }
     }
 
-    /** Notes a row passed over in the search for the header, for the message that no header was found. */
-    private void look(int row, List<String> texts) {
-        lookedRows++;
-        if (givenHeaderRow > 0 || looked.size() >= 6) {
-            return;
-        }
-        List<String> shown = new ArrayList<>();
-        for (String text : texts.subList(0, Math.min(4, texts.size()))) {
-            String trimmed = text.trim().replaceAll("\\s+", " ");
-            shown.add(trimmed.length() > 24 ? trimmed.substring(0, 23) + "…" : trimmed);
-        }
-        looked.add("row " + row + ": " + String.join(", ", shown) + (texts.size() > 4 ? ", …" : ""));
-    }
-
     private String wanted() {
         return "a '" + columns.nameOf(Columns.Role.RESULT) + "' column or defect class count columns ("
                 + columns.nameOf(Columns.Role.CRITICAL) + ", " + columns.nameOf(Columns.Role.MAJOR) + ", "
                 + columns.nameOf(Columns.Role.MINOR) + ")";
-    }
-
-    private SheetException noHeader() {
-        if (givenHeaderRow > 0) {
-            return new SheetException(source.file(), source.whereRow(sheet, givenHeaderRow) + ", given as the header"
-                    + " row, is empty");
-        }
-        int last = Math.min(lastRowSeen, SheetSource.HEADER_SEARCH);
-        return new SheetException(source.file(), "no header row: none of rows 1 to " + last + " of " + where()
-                + " has " + wanted() + "; the rows looked at are " + String.join("; ", looked)
-                + (lookedRows > looked.size() ? "; and " + (lookedRows - looked.size()) + " more" : "")
-                + " (name your own headers with --columns, e.g. result=Outcome, or give the header row with --header-row)");
     }
 
     private void header(int row, List<Cell> cells) {
@@ -273,7 +222,7 @@ public final class SampleReader implements RowHandler {
             return;
         }
         int first = Math.max(headerRow + 1, fromRow);
-        int last = toRow > 0 ? Math.min(toRow, lastRowSeen) : lastRowSeen;
+        int last = toRow > 0 ? Math.min(toRow, rows.lastRowSeen()) : rows.lastRowSeen();
         for (MergedRange range : ranges) {
             for (int column = range.firstColumn(); column <= range.lastColumn() && column < roleByColumn.length;
                     column++) {

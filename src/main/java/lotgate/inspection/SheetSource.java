@@ -47,6 +47,25 @@ public interface SheetSource {
         return "sheet '" + sheet + "' row " + row;
     }
 
+    /**
+     * The sheet a reader takes when none is named: the first not named "lot" (a lot's details), else the first.
+     */
+    default String firstSampleSheet() {
+        List<String> names = sheetNames();
+        if (names.isEmpty()) {
+            throw new SheetException(file(), "the workbook has no sheets");
+        }
+        return names.stream().filter(n -> !n.equalsIgnoreCase(LotDetails.SHEET)).findFirst().orElse(names.get(0));
+    }
+
+    /** Refuses a sheet name that the file does not have, naming the sheets it has. */
+    default void requireSheet(String sheet) {
+        if (!sheetNames().contains(sheet)) {
+            throw new SheetException(file(), "no sheet named '" + sheet + "'; the sheets are "
+                    + quoted(sheetNames()));
+        }
+    }
+
     /** Sheet names for messages: 'Sample', 'lot'. */
     static String quoted(List<String> names) {
         return String.join(", ", names.stream().map(n -> "'" + n + "'").toList());

@@ -14,17 +14,9 @@ import org.apache.poi.ss.usermodel.Row;
 import org.apache.poi.ss.usermodel.Sheet;
 
 /** Reads the rows of an old-style .xls workbook (at most 65,536 rows a sheet) through POI's HSSF. */
-final class XlsSheets implements SheetSource {
-    private final Path file;
-    private List<String> sheetNames;
-
+final class XlsSheets extends WorkbookSheets {
     XlsSheets(Path file) {
-        this.file = file;
-    }
-
-    @Override
-    public Path file() {
-        return file;
+        super(file);
     }
 
     /** An old-style workbook is read whole; 32 MB is many times a full sheet of 65,536 units. */
@@ -48,15 +40,7 @@ final class XlsSheets implements SheetSource {
     }
 
     @Override
-    public List<String> sheetNames() {
-        if (sheetNames == null) {
-            sheetNames = List.copyOf(readSheetNames());
-        }
-        return sheetNames;
-    }
-
-    /** Opening the file is the costly part; a sentence asks for the names several times. */
-    private List<String> readSheetNames() {
+    List<String> readSheetNames() {
         try (HSSFWorkbook workbook = open()) {
             List<String> names = new ArrayList<>();
             for (int i = 0; i < workbook.getNumberOfSheets(); i++) {

@@ -29,12 +29,9 @@ import org.xml.sax.helpers.DefaultHandler;
  * run or fetched; POI's guards against zip bombs stay on, and the shared strings, cell formats and cell
  * texts are held within caps of their own (see {@link SharedText}, {@link DateStyles}).
  */
-final class XlsxSheets implements SheetSource {
-    private final Path file;
-    private List<String> sheetNames;
-
+final class XlsxSheets extends WorkbookSheets {
     XlsxSheets(Path file) {
-        this.file = file;
+        super(file);
     }
 
     static boolean isEncrypted(Path file) {
@@ -43,11 +40,6 @@ final class XlsxSheets implements SheetSource {
         } catch (IOException | RuntimeException e) {
             return false;
         }
-    }
-
-    @Override
-    public Path file() {
-        return file;
     }
 
     private interface PackageWork<T> {
@@ -88,15 +80,7 @@ final class XlsxSheets implements SheetSource {
     }
 
     @Override
-    public List<String> sheetNames() {
-        if (sheetNames == null) {
-            sheetNames = List.copyOf(readSheetNames());
-        }
-        return sheetNames;
-    }
-
-    /** Opening the file is the costly part; a sentence asks for the names several times. */
-    private List<String> readSheetNames() {
+    List<String> readSheetNames() {
         return withPackage(pkg -> {
             List<String> names = new ArrayList<>();
             XSSFReader.SheetIterator sheets = (XSSFReader.SheetIterator) new XSSFReader(pkg).getSheetsData();
@@ -120,7 +104,9 @@ final class XlsxSheets implements SheetSource {
                     String name = sheets.getSheetName();
                     seen.add(name);
                     if (sheet == null || sheet.equals(name)) {
-                        SheetHandler rows = new SheetHandler(file, name, sharedText(pkg), dateStyles(pkg), handler);
+                        SheetHandler rows = new SheetHandler(file, name,
+                                part(pkg, XSSFRelation.SHARED_STRINGS, SharedText::read, SharedText.empty()),
+                                part(pkg, XSSFRelation.STYLES, DateStyles::read, DateStyles.none()), handler);
                         XMLReader xml = XMLHelper.newXMLReader();
                         xml.setContentHandler(rows);
                         xml.parse(new InputSource(in));
@@ -134,23 +120,19 @@ final class XlsxSheets implements SheetSource {
         });
     }
 
-    private SharedText sharedText(OPCPackage pkg) throws IOException, SAXException, ParserConfigurationException {
-        List<PackagePart> parts = pkg.getPartsByContentType(XSSFRelation.SHARED_STRINGS.getContentType());
-        if (parts.isEmpty()) {
-            return SharedText.empty();
-        }
-        try (InputStream in = parts.get(0).getInputStream()) {
-            return SharedText.read(file, in);
-        }
+    private interface PartReader<T> {
+        T read(Path file, InputStream in) throws IOException, SAXException, ParserConfigurationException;
     }
 
-    private DateStyles dateStyles(OPCPackage pkg) throws IOException, SAXException, ParserConfigurationException {
-        List<PackagePart> parts = pkg.getPartsByContentType(XSSFRelation.STYLES.getContentType());
+    /** The workbook's first part of a kind (shared strings, styles) as read, or {@code absent} without one. */
+    private <T> T part(OPCPackage pkg, XSSFRelation kind, PartReader<T> reader, T absent)
+            throws IOException, SAXException, ParserConfigurationException {
+        List<PackagePart> parts = pkg.getPartsByContentType(kind.getContentType());
         if (parts.isEmpty()) {
-            return DateStyles.none();
+            return absent;
         }
         try (InputStream in = parts.get(0).getInputStream()) {
-            return DateStyles.read(file, in);
+            return reader.read(file, in);
         }
     }
 
