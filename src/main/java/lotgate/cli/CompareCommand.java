@@ -20,7 +20,7 @@ final class CompareCommand implements Runnable {
     @Override
     public void run() {
         format.print(ComparePlans.run(new ComparePlans.Request(plans, models.named(), models.lotSize,
-                levels.aql, levels.ltpd, chart.file(), asnChart.file)), CompareRendering::text, CompareRendering::json, CompareRendering::csv);
+                aql.level, ltpd.level, chart.file(), asnChart.file)), CompareRendering::text, CompareRendering::json, CompareRendering::csv);
     }
 
     @Parameters(arity = "2..*", paramLabel = "PLAN", description = "Two or more plans: plans/*.json files or n,c.")
@@ -30,7 +30,10 @@ final class CompareCommand implements Runnable {
     ModelOptions models;
 
     @Mixin
-    SharedOptions.MarkedLevels levels;
+    SharedOptions.Aql aql;
+
+    @Mixin
+    SharedOptions.Ltpd ltpd;
 
     @Mixin
     SharedOptions.OcCurvesChart chart;

@@ -22,21 +22,20 @@ import picocli.CommandLine.Parameters;
 final class CurveCommand implements Runnable {
     @Override
     public void run() {
-        format.print(EvaluatePlan.run(new EvaluatePlan.Request(planFile, defectClass, sampleSize,
-                acceptance, models.named(), models.lotSize, levels.aql, levels.ltpd, upTo, steps,
-                new EvaluatePlan.ChartFiles(chart.file(), ocChart, aoqChart, atiChart, asnChart.file), curtailed.on)), CurveRendering::text, CurveRendering::json, CurveRendering::csv);
+        format.print(EvaluatePlan.run(new EvaluatePlan.Request(planFile, defectClass, sampleSize.n, acceptance.c,
+                models.named(), models.lotSize, aql.level, ltpd.level, upTo, steps, new EvaluatePlan.ChartFiles(
+                chart.file(), ocChart, aoqChart, atiChart, asnChart.file), curtailed.on)),
+                CurveRendering::text, CurveRendering::json, CurveRendering::csv);
     }
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "PLAN", description = "A saved plan file (plans/*.json).")
     Path planFile;
 
-    @Option(names = {"-n", "--sample-size"}, paramLabel = "N", converter = Values.Count.class,
-            description = "Sample size of a plan given directly.")
-    Integer sampleSize;
+    @Mixin
+    SharedOptions.SampleSize sampleSize;
 
-    @Option(names = {"-c", "--acceptance"}, paramLabel = "C", converter = Values.Acceptance.class,
-            description = "Acceptance number of a plan given directly.")
-    Integer acceptance;
+    @Mixin
+    SharedOptions.Acceptance acceptance;
 
     @Mixin
     ModelOptions models;
@@ -46,7 +45,10 @@ final class CurveCommand implements Runnable {
     String defectClass;
 
     @Mixin
-    SharedOptions.MarkedLevels levels;
+    SharedOptions.Aql aql;
+
+    @Mixin
+    SharedOptions.Ltpd ltpd;
 
     @Option(names = "--up-to", paramLabel = "LEVEL", converter = Values.Quality.class,
             description = "Highest incoming quality in the table and charts (default: a round level just past"

@@ -38,33 +38,27 @@ final class DesignCommand implements Runnable {
     @Spec
     CommandSpec spec;
 
-    @Option(names = "--aql", paramLabel = "LEVEL", converter = Values.Quality.class,
-            description = "Acceptable quality level: lots this good should pass (e.g. 1%%).")
-    Double aql;
+    @Mixin
+    SharedOptions.Aql aql;
 
     @Option(names = "--alpha", paramLabel = "RISK", defaultValue = "5%", converter = Values.Risk.class,
             description = "Producer's risk: the largest allowed P(reject) at the AQL (default ${DEFAULT-VALUE}).")
     double alpha;
 
-    @Option(names = "--ltpd", paramLabel = "LEVEL", converter = Values.Quality.class,
-            description = "Lot tolerance percent defective: lots this bad should fail (e.g. 5%%).")
-    Double ltpd;
+    @Mixin
+    SharedOptions.Ltpd ltpd;
 
-    @Option(names = "--beta", paramLabel = "RISK", defaultValue = "10%", converter = Values.Risk.class,
-            description = "Consumer's risk: the largest allowed P(accept) at the LTPD (default ${DEFAULT-VALUE}).")
-    double beta;
+    @Mixin
+    SharedOptions.ConsumerRisk beta;
 
     @Mixin
     ModelOptions models;
 
-    @Option(names = {"-c", "--acceptance"}, paramLabel = "C", converter = Values.Acceptance.class,
-            description = "Fix the acceptance number (e.g. 0 for a zero-acceptance plan) and find the smallest n"
-                    + " that meets the LTPD point.")
-    Integer acceptance;
+    @Mixin
+    SharedOptions.Acceptance acceptance;
 
-    @Option(names = {"-n", "--sample-size"}, paramLabel = "N", converter = Values.Count.class,
-            description = "With --acceptance: evaluate this plan instead of designing one.")
-    Integer sampleSize;
+    @Mixin
+    SharedOptions.SampleSize sampleSize;
 
     @Option(names = "--class", paramLabel = "CLASS:SPEC",
             description = "Criteria for one defect class instead of --aql and --ltpd, repeatable: critical, major"
@@ -153,21 +147,22 @@ final class DesignCommand implements Runnable {
     }
 
     private DesignSinglePlan.Criteria plainCriteria() {
-        if (aql == null || ltpd == null) {
+        if (aql.level == null || ltpd.level == null) {
             throw new ParameterException(spec.commandLine(), "give --aql and --ltpd (or criteria per defect class"
                     + " with --class)");
         }
-        return new DesignSinglePlan.Criteria(DefectClass.ANY, null, aql, alpha, ltpd, beta, acceptance, sampleSize);
+        return new DesignSinglePlan.Criteria(DefectClass.ANY, null, aql.level, alpha, ltpd.level, beta.beta,
+                acceptance.c, sampleSize.n);
     }
 
     private List<DesignSinglePlan.Criteria> classCriteria() {
-        if (aql != null || ltpd != null || acceptance != null || sampleSize != null) {
+        if (aql.level != null || ltpd.level != null || acceptance.c != null || sampleSize.n != null) {
             throw new ParameterException(spec.commandLine(), "with --class, give aql=, ltpd=, c= and n= inside each"
                     + " class's criteria, not as --aql, --ltpd, --acceptance or --sample-size");
         }
         List<DesignSinglePlan.Criteria> criteria = new ArrayList<>();
         for (String text : classSpecs) {
-            criteria.add(ClassSpec.parse(spec, text, alpha, beta));
+            criteria.add(ClassSpec.parse(spec, text, alpha, beta.beta));
         }
         return criteria;
     }

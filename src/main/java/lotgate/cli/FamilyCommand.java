@@ -6,6 +6,7 @@ import java.util.List;
 import lotgate.jobs.MakePlanFamily;
 import lotgate.report.results.FamilyRendering;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -29,9 +30,8 @@ final class FamilyCommand implements Runnable {
     @Option(names = "--reduced", paramLabel = "PLAN", description = "The plan for reduced inspection (optional).")
     Path reduced;
 
-    @Option(names = "--switching", paramLabel = "EDITION", defaultValue = "current",
-            description = "The switching rules' edition: current (default) or older; see the README.")
-    String edition;
+    @Mixin
+    SharedOptions.Switching switching;
 
     @Option(names = "--rule", paramLabel = "NAME=NUMBER",
             description = "A site's own number for one rule, repeatable: tightenRejected, tightenWithin,"
@@ -48,7 +48,7 @@ final class FamilyCommand implements Runnable {
     @Override
     public void run() {
         MakePlanFamily.Result result = MakePlanFamily.run(new MakePlanFamily.Request(file, normal, tightened, reduced,
-                edition, rules, replace));
+                switching.rules, rules, replace));
         PrintWriter out = spec.commandLine().getOut();
         out.print(FamilyRendering.text(result));
         out.flush();

@@ -77,8 +77,8 @@ final class SchemeDesign {
         List<Stage> stages = scheme.equals("sequential") ? List.of() : stages(command);
         DoublePlanDesigner.Space space = isDouble && stages.isEmpty() ? space(command) : null;
         DesignStagedPlan.Result result = DesignStagedPlan.run(new DesignStagedPlan.Request(
-                DesignStagedPlan.Scheme.valueOf(scheme.toUpperCase(Locale.ROOT)), model, lotSize, command.aql,
-                command.alpha, command.ltpd, command.beta, stages, space, command.staged.asnAt, command.staged.truncateAt,
+                DesignStagedPlan.Scheme.valueOf(scheme.toUpperCase(Locale.ROOT)), model, lotSize, command.aql.level,
+                command.alpha, command.ltpd.level, command.beta.beta, stages, space, command.staged.asnAt, command.staged.truncateAt,
                 command.staged.plainWald, command.staged.curtailed.on, command.saveTarget()));
         if (result.noPlanReason() != null) {
             command.noPlan(result.noPlanReason(), model, lotSize);
@@ -92,7 +92,7 @@ final class SchemeDesign {
             throw usage(command, "--class: criteria per defect class are for single plans; a " + scheme + " plan counts every"
                     + " nonconformity alike");
         }
-        if (command.acceptance != null || command.sampleSize != null) {
+        if (command.acceptance.c != null || command.sampleSize.n != null) {
             throw usage(command, "--acceptance and --sample-size are for single plans; give the stages of a " + scheme
                     + " plan with --stage");
         }

@@ -123,12 +123,39 @@ final class SharedOptions {
         boolean on;
     }
 
-    /** --aql and --ltpd where they mark levels on a plan's curves rather than design it. */
-    static final class MarkedLevels {
+    /** --aql: the acceptable quality level a plan is designed for, or marked on its curves. */
+    static final class Aql {
         @Option(names = "--aql", paramLabel = "LEVEL", converter = Values.Quality.class)
-        Double aql;
+        Double level;
+    }
 
+    /** --ltpd: the lot tolerance percent defective a plan protects against, or marked on its curves. */
+    static final class Ltpd {
         @Option(names = "--ltpd", paramLabel = "LEVEL", converter = Values.Quality.class)
-        Double ltpd;
+        Double level;
+    }
+
+    /** --beta: the consumer's risk, the largest P(accept) allowed at the LTPD. */
+    static final class ConsumerRisk {
+        @Option(names = "--beta", paramLabel = "RISK", defaultValue = "10%", converter = Values.Risk.class)
+        double beta;
+    }
+
+    /** -n, --sample-size: the sample size of a plan given as numbers. */
+    static final class SampleSize {
+        @Option(names = {"-n", "--sample-size"}, paramLabel = "N", converter = Values.Count.class)
+        Integer n;
+    }
+
+    /** -c, --acceptance: the acceptance number of a plan given as numbers, or fixed in a design. */
+    static final class Acceptance {
+        @Option(names = {"-c", "--acceptance"}, paramLabel = "C", converter = Values.Acceptance.class)
+        Integer c;
+    }
+
+    /** --switching: the edition of the switching rules, or (where a command says so) a plan family's rules. */
+    static final class Switching {
+        @Option(names = "--switching", paramLabel = "RULES", defaultValue = "current")
+        String rules;
     }
 }

@@ -17,7 +17,7 @@ import picocli.CommandLine.Parameters;
 final class SupplierCommand implements Runnable {
     @Override
     public void run() {
-        format.print(AuditSupplier.run(new AuditSupplier.Request(supplier, part.name, from, to, switching,
+        format.print(AuditSupplier.run(new AuditSupplier.Request(supplier, part.name, from, to, switching.rules,
                 confidence.level, reports.files, storeOption.location())), AuditRendering::text, AuditRendering::json, AuditRendering::csv);
     }
 
@@ -33,9 +33,8 @@ final class SupplierCommand implements Runnable {
     @Option(names = "--to", paramLabel = "DATE", converter = Values.Day.class, description = "Last received date of the period.")
     LocalDate to;
 
-    @Option(names = "--switching", paramLabel = "EDITION-OR-FAMILY", defaultValue = "current",
-            description = "The switching rules to replay: current (default), older, or a plan family file's rules.")
-    String switching;
+    @Mixin
+    SharedOptions.Switching switching;
 
     @Mixin
     SharedOptions.Confidence confidence;

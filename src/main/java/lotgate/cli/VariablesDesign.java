@@ -58,16 +58,17 @@ final class VariablesDesign {
     }
 
     static void run(DesignCommand command, OcModel model, int lotSize) {
-        if (!command.classSpecs.isEmpty() || command.acceptance != null || command.staged.given()) {
+        if (!command.classSpecs.isEmpty() || command.acceptance.c != null || command.staged.given()) {
             throw new ParameterException(command.spec.commandLine(), "--scheme variables takes the risks, --lower"
                     + " and/or --upper, --sigma, --limits, --unit, --characteristic, and --sample-size with --k for a"
                     + " given plan; --class, --acceptance, --stage and the double and sequential options are for"
                     + " attribute plans");
         }
         DesignVariablesPlan.Result result = DesignVariablesPlan.run(new DesignVariablesPlan.Request(model, lotSize,
-                command.aql, command.alpha, command.ltpd, command.beta, command.variables.lower, command.variables.upper, command.variables.sigma,
-                command.variables.limits, command.variables.characteristic, command.variables.unit, command.variables.lowerAql, command.variables.lowerLtpd,
-                command.sampleSize, command.variables.kValue, command.saveTarget()));
+                command.aql.level, command.alpha, command.ltpd.level, command.beta.beta, command.variables.lower,
+                command.variables.upper, command.variables.sigma, command.variables.limits,
+                command.variables.characteristic, command.variables.unit, command.variables.lowerAql,
+                command.variables.lowerLtpd, command.sampleSize.n, command.variables.kValue, command.saveTarget()));
         if (result.noPlanReason() != null) {
             command.noPlan(result.noPlanReason(), model, lotSize);
         }
