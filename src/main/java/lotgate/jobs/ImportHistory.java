@@ -233,10 +233,16 @@ public final class ImportHistory {
 
     private static RecordContent.Lot lot(Path file, SheetSource source, String sheetName, int row, List<Cell> cells,
             Map<String, Integer> columns) {
-        Map<Integer, Cell> byColumn = new HashMap<>();
-        cells.forEach(c -> byColumn.put(c.column(), c));
-        Function<String, Cell> cell = name -> columns.containsKey(name)
-                ? byColumn.get(columns.get(name)) : null;
+        int widest = 0;
+        for (Cell c : cells) {
+            widest = Math.max(widest, c.column());
+        }
+        Cell[] byColumn = new Cell[widest + 1];
+        cells.forEach(c -> byColumn[c.column()] = c);
+        Function<String, Cell> cell = name -> {
+            Integer column = columns.get(name);
+            return column == null || column >= byColumn.length ? null : byColumn[column];
+        };
         BiFunction<String, String, SheetException> bad = (name, problem) -> new SheetException(file,
                 source.where(sheetName, row, columns.get(name)) + ": " + problem);
         for (String name : REQUIRED) {
