@@ -37,18 +37,38 @@ final class EscapingWriter extends FilterWriter {
         }
     }
 
+    /** Runs of characters that pass unchanged go out in one piece; the others one by one, as above. */
     @Override
     public void write(char[] buffer, int offset, int length) throws IOException {
-        for (int i = offset; i < offset + length; i++) {
-            write(buffer[i]);
+        int end = offset + length;
+        int run = offset;
+        for (int i = offset; i < end; i++) {
+            if (special(buffer[i])) {
+                out.write(buffer, run, i - run);
+                write(buffer[i]);
+                run = i + 1;
+            }
         }
+        out.write(buffer, run, end - run);
     }
 
     @Override
     public void write(String text, int offset, int length) throws IOException {
-        for (int i = offset; i < offset + length; i++) {
-            write(text.charAt(i));
+        int end = offset + length;
+        int run = offset;
+        for (int i = offset; i < end; i++) {
+            if (special(text.charAt(i))) {
+                out.write(text, run, i - run);
+                write(text.charAt(i));
+                run = i + 1;
+            }
         }
+        out.write(text, run, end - run);
+    }
+
+    /** Whether a character cannot simply be passed on: a return, the character after one, or a control. */
+    private boolean special(char c) {
+        return pendingReturn || c == '\r' || (c != '\n' && c != '\t' && Identifiers.isControl(c));
     }
 
     @Override

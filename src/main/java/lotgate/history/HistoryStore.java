@@ -20,6 +20,7 @@ import java.util.Map;
 import java.util.Properties;
 import java.util.TreeMap;
 import lotgate.files.CanonicalJson;
+import lotgate.files.IsoText;
 
 /**
  * The lot history: an append-only chain of records in an embedded SQLite file or a shared
@@ -586,15 +587,7 @@ public final class HistoryStore implements AutoCloseable {
         StringBuilder sql = new StringBuilder("SELECT seq, recorded_at, kind, supplier, part, lot, lot_size, received,"
                 + " verdict, inspected, nonconforming, severity, production, supersedes, hash, "
                 + (version >= 4 ? "reinstates" : "0") + " FROM lot_record WHERE 1 = 1");
-        List<String> values = new ArrayList<>();
-        if (supplier != null) {
-            sql.append(" AND supplier = ?");
-            values.add(supplier);
-        }
-        if (part != null) {
-            sql.append(" AND part = ?");
-            values.add(part);
-        }
+        List<String> values = ofSupplierAndPart(sql, supplier, part);
         sql.append(" ORDER BY seq");
         return read("read the lots", () -> {
             List<LotRow> rows = new ArrayList<>();
@@ -612,11 +605,42 @@ public final class HistoryStore implements AutoCloseable {
         });
     }
 
+    /** Whether the store holds any record of the supplier and part (null: any), as {@link #rows} would list. */
+    public boolean holdsRecordsOf(String supplier, String part) {
+        StringBuilder sql = new StringBuilder("SELECT 1 FROM lot_record WHERE 1 = 1");
+        List<String> values = ofSupplierAndPart(sql, supplier, part);
+        sql.append(" LIMIT 1");
+        return read("read the lots", () -> {
+            try (PreparedStatement query = connection.prepareStatement(sql.toString())) {
+                for (int i = 0; i < values.size(); i++) {
+                    query.setString(i + 1, values.get(i));
+                }
+                try (ResultSet result = query.executeQuery()) {
+                    return result.next();
+                }
+            }
+        });
+    }
+
+    /** Adds the conditions on supplier and part (null: any) to a query and returns the values they take. */
+    private static List<String> ofSupplierAndPart(StringBuilder sql, String supplier, String part) {
+        List<String> values = new ArrayList<>();
+        if (supplier != null) {
+            sql.append(" AND supplier = ?");
+            values.add(supplier);
+        }
+        if (part != null) {
+            sql.append(" AND part = ?");
+            values.add(part);
+        }
+        return values;
+    }
+
     private static LotRow row(ResultSet result) throws SQLException {
         String received = result.getString(8);
-        return new LotRow(result.getLong(1), Instant.parse(result.getString(2)), result.getString(3),
+        return new LotRow(result.getLong(1), IsoText.instant(result.getString(2)), result.getString(3),
                 result.getString(4), result.getString(5), result.getString(6), result.getInt(7),
-                received == null ? null : LocalDate.parse(received), result.getString(9), result.getInt(10),
+                received == null ? null : IsoText.day(received), result.getString(9), result.getInt(10),
                 result.getInt(11), result.getString(12), result.getString(13), result.getLong(14), result.getString(15),
                 result.getInt(16) != 0);
     }

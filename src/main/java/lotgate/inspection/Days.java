@@ -1,7 +1,8 @@
 package lotgate.inspection;
 
-import java.time.LocalDate;
 import java.time.DateTimeException;
+import java.time.LocalDate;
+import lotgate.files.IsoText;
 import org.apache.poi.ss.usermodel.DateUtil;
 
 /**
@@ -35,7 +36,7 @@ public final class Days {
                     + " the date as 2026-03-14 or format the cell as a date");
         } else {
             try {
-                day = parse(cell.text().trim());
+                day = IsoText.day(cell.text().trim());
             } catch (DateTimeException e) {
                 throw new IllegalArgumentException(what + " '" + cell.text().trim() + "' is not a date such as"
                         + " 2026-03-14");
@@ -45,34 +46,5 @@ public final class Days {
             throw new IllegalArgumentException(what + " " + day + " is outside " + FIRST + " to " + LAST);
         }
         return day;
-    }
-
-    /**
-     * A day written as 2026-03-14, read directly: the general ISO parser costs an import of a hundred
-     * thousand lots half a second. Other forms the parser accepts go to it.
-     */
-    private static LocalDate parse(String text) {
-        if (text.length() == 10 && text.charAt(4) == '-' && text.charAt(7) == '-') {
-            int year = digits(text, 0, 4);
-            int month = digits(text, 5, 7);
-            int day = digits(text, 8, 10);
-            if (year >= 0 && month >= 0 && day >= 0) {
-                return LocalDate.of(year, month, day);
-            }
-        }
-        return LocalDate.parse(text);
-    }
-
-    /** The number the characters from start to end write in decimal digits, or -1 when one is not a digit. */
-    private static int digits(String text, int start, int end) {
-        int value = 0;
-        for (int i = start; i < end; i++) {
-            char ch = text.charAt(i);
-            if (ch < '0' || ch > '9') {
-                return -1;
-            }
-            value = value * 10 + (ch - '0');
-        }
-        return value;
     }
 }

@@ -20,7 +20,7 @@ final class RecordedNames {
 
     /** The recorded names for the typed ones (each may be null: any), or the typed ones when none match. */
     static Names of(HistoryStore store, String supplier, String part) {
-        if (supplier == null && part == null || !store.rows(supplier, part).isEmpty()) {
+        if (supplier == null && part == null || store.holdsRecordsOf(supplier, part)) {
             return new Names(supplier, part, true);
         }
         String recordedSupplier = supplier;
@@ -37,7 +37,7 @@ final class RecordedNames {
                 return new Names(recordedSupplier, part, false);
             }
         }
-        return new Names(recordedSupplier, recordedPart, !store.rows(recordedSupplier, recordedPart).isEmpty());
+        return new Names(recordedSupplier, recordedPart, store.holdsRecordsOf(recordedSupplier, recordedPart));
     }
 
     /** Every supplier the store has lots of. */
