@@ -113,59 +113,67 @@ public final class NoncentralT {
         double scale = delta / Math.sqrt(2);
         double sum = p * betaP + scale * q * betaQ;
         // Forward from the mode.
-        double fp = p;
-        double fq = q;
-        double fBetaP = betaP;
-        double fBetaQ = betaQ;
-        double fgP = gP;
-        double fgQ = gQ;
+        Series fP = new Series(p, betaP, gP);
+        Series fQ = new Series(q, betaQ, gQ);
         for (int i = mode + 1; i < mode + MOST_TERMS; i++) {
-            fBetaP -= fgP;
-            fBetaQ -= fgQ;
+            fP.beta -= fP.step;
+            fQ.beta -= fQ.step;
             double aPrev = i - 1 + 0.5;
-            fgP *= x * (aPrev + b) / (aPrev + 1);
-            fgQ *= x * (i + b) / (i + 1);
-            fp *= lambda / i;
-            fq *= lambda / (i + 0.5);
-            double term = fp * Math.max(0, fBetaP) + scale * fq * Math.max(0, fBetaQ);
+            fP.step *= x * (aPrev + b) / (aPrev + 1);
+            fQ.step *= x * (i + b) / (i + 1);
+            fP.weight *= lambda / i;
+            fQ.weight *= lambda / (i + 0.5);
+            double term = fP.weight * Math.max(0, fP.beta) + scale * fQ.weight * Math.max(0, fQ.beta);
             sum += term;
             // Past the mode the weights fall at least geometrically, by lambda / (i + 1), and I_x falls as a
             // grows: what is left is at most the next weights' geometric sum times I_x here.
             double ratio = lambda / (i + 1);
             if (ratio < 1) {
-                double left = (fp + Math.abs(scale) * fq) / (1 - ratio) * Math.max(fBetaP, fBetaQ);
+                double left = (fP.weight + Math.abs(scale) * fQ.weight) / (1 - ratio) * Math.max(fP.beta, fQ.beta);
                 if (left <= EPSILON * Math.abs(sum) || left < 1e-300) {
                     break;
                 }
             }
-            if (fp == 0 && fq == 0) {
+            if (fP.weight == 0 && fQ.weight == 0) {
                 break;
             }
         }
         // Backward from the mode down to 0.
-        double bp = p;
-        double bq = q;
-        double bBetaP = betaP;
-        double bBetaQ = betaQ;
-        double bgP = gP;
-        double bgQ = gQ;
+        Series bP = new Series(p, betaP, gP);
+        Series bQ = new Series(q, betaQ, gQ);
         for (int i = mode - 1; i >= 0; i--) {
             double aP1 = i + 0.5;
             double aQ1 = i + 1.0;
             // g(a - 1) = g(a) (a) / (x (a - 1 + b))
-            bgP *= (aP1 + 1) / (x * (aP1 + b));
-            bgQ *= (aQ1 + 1) / (x * (aQ1 + b));
-            bBetaP += bgP;
-            bBetaQ += bgQ;
-            bp *= (i + 1) / lambda;
-            bq *= (i + 1.5) / lambda;
-            double term = bp * Math.min(1, bBetaP) + scale * bq * Math.min(1, bBetaQ);
+            bP.step *= (aP1 + 1) / (x * (aP1 + b));
+            bQ.step *= (aQ1 + 1) / (x * (aQ1 + b));
+            bP.beta += bP.step;
+            bQ.beta += bQ.step;
+            bP.weight *= (i + 1) / lambda;
+            bQ.weight *= (i + 1.5) / lambda;
+            double term = bP.weight * Math.min(1, bP.beta) + scale * bQ.weight * Math.min(1, bQ.beta);
             sum += term;
-            if (Math.abs(term) < EPSILON * Math.abs(sum) && bp < EPSILON) {
+            if (Math.abs(term) < EPSILON * Math.abs(sum) && bP.weight < EPSILON) {
                 break;
             }
         }
         double result = lower + 0.5 * sum;
         return Math.min(1.0, Math.max(0.0, result));
+    }
+
+    /**
+     * One of the two series of the sum, walked away from the mode: its Poisson-type weight, I_x(a, b), and the
+     * step g(a) between I_x(a, b) and I_x(a + 1, b).
+     */
+    private static final class Series {
+        double weight;
+        double beta;
+        double step;
+
+        Series(double weight, double beta, double step) {
+            this.weight = weight;
+            this.beta = beta;
+            this.step = step;
+        }
     }
 }

@@ -11,70 +11,45 @@ final class SequentialLattice {
 
     static Stages.Outcome walk(SequentialPlan plan, OcModel model, double quality, int lotSize) {
         int top = plan.rejectionNumber(plan.truncation());
-        double[] going = new double[top + 1];
-        double[] next = new double[top + 1];
-        going[0] = 1.0;
-        int low = 0;
-        int high = 0;
-        double accept = 0;
-        double reject = 0;
-        double sample = 0;
-        double outgoing = 0;
-        double inspectedWhenAccepted = 0;
-        int lotDefectives = model instanceof OcModel.Hypergeometric h ? h.defectives(quality) : -1;
-        if (model instanceof OcModel.Hypergeometric h) {
-            lotSize = h.lotSize();
-        }
+        LatticeWalk walk = new LatticeWalk(model, quality, lotSize, top);
+        int lotDefectives = walk.lotDefectives;
         UnitCounts counts = UnitCounts.of(model, quality, top);
-        for (int m = 0; m < plan.truncation() && low <= high; m++) {
+        for (int m = 0; m < plan.truncation() && walk.undecided(); m++) {
             int unit = m + 1;
             int acceptUpTo = plan.acceptanceNumber(unit);
             int rejectFrom = plan.rejectionNumber(unit);
-            int nextLow = Integer.MAX_VALUE;
-            int nextHigh = -1;
-            for (int d = low; d <= high; d++) {
-                double weight = going[d];
+            for (int d = walk.low; d <= walk.high; d++) {
+                double weight = walk.going[d];
                 if (weight == 0) {
                     continue;
                 }
-                sample += weight;
+                walk.sample += weight;
                 // Counts reaching the rejection number go straight to the rejection tail.
                 int room = rejectFrom - 1 - d;
-                reject += weight * counts.moreThan(room, m, d, lotDefectives, lotSize);
+                walk.reject += weight * counts.moreThan(room, m, d, lotDefectives, walk.lotSize);
                 for (int x = 0; x <= room; x++) {
-                    double p = counts.exactly(x, m, d, lotDefectives, lotSize);
+                    double p = counts.exactly(x, m, d, lotDefectives, walk.lotSize);
                     if (p == 0) {
                         continue;
                     }
                     int total = d + x;
                     double mass = weight * p;
                     if (total <= acceptUpTo) {
-                        accept += mass;
-                        inspectedWhenAccepted += mass * unit;
+                        walk.accept += mass;
+                        walk.inspectedWhenAccepted += mass * unit;
                         if (lotDefectives >= 0) {
-                            outgoing += mass * (lotDefectives - total);
+                            walk.outgoingOfLot(mass, total);
                         } else {
-                            outgoing += mass * quality * (lotSize == 0 ? 1.0 : (lotSize - unit) / (double) lotSize);
+                            walk.outgoingOfProcess(mass, unit);
                         }
                     } else {
-                        next[total] += mass;
-                        nextLow = Math.min(nextLow, total);
-                        nextHigh = Math.max(nextHigh, total);
+                        walk.carry(total, mass);
                     }
                 }
             }
-            // Keep the invariant that the array to be filled next holds only zeros.
-            java.util.Arrays.fill(going, low, high + 1, 0.0);
-            double[] swap = going;
-            going = next;
-            next = swap;
-            low = nextLow;
-            high = nextHigh;
+            walk.nextStage();
         }
-        if (lotDefectives >= 0) {
-            outgoing /= lotSize;
-        }
-        return new Stages.Outcome(accept, reject, sample, outgoing, inspectedWhenAccepted);
+        return walk.outcome();
     }
 
     /** The count one more unit adds, under each model. */

@@ -61,70 +61,44 @@ final class Stages {
      * @param lotSize the lot size for AOQ, or 0 for the limit of a very large lot
      */
     static Outcome walk(List<Stage> stages, OcModel model, double quality, int lotSize) {
-        int top = stages.get(stages.size() - 1).r();
-        double[] going = new double[top + 1];
-        double[] next = new double[top + 1];
-        going[0] = 1.0;
-        int low = 0;
-        int high = 0;
+        LatticeWalk walk = new LatticeWalk(model, quality, lotSize, stages.get(stages.size() - 1).r());
         int drawn = 0;
-        double accept = 0;
-        double reject = 0;
-        double sample = 0;
-        double outgoing = 0;
-        double inspectedWhenAccepted = 0;
-        int lotDefectives = model instanceof OcModel.Hypergeometric h ? h.defectives(quality) : -1;
-        if (model instanceof OcModel.Hypergeometric h) {
-            lotSize = h.lotSize();
-        }
         for (Stage stage : stages) {
             int n = stage.n();
             int after = drawn + n;
-            java.util.Arrays.fill(next, 0.0);
-            int nextLow = Integer.MAX_VALUE;
-            int nextHigh = -1;
             double reaching = 0;
-            for (int d = low; d <= high; d++) {
-                double weight = going[d];
+            for (int d = walk.low; d <= walk.high; d++) {
+                double weight = walk.going[d];
                 if (weight == 0) {
                     continue;
                 }
                 reaching += weight;
                 double accepted = weight * model.atMostAfter(drawn, d, n, stage.c() - d, quality);
-                accept += accepted;
-                reject += weight * model.moreThanAfter(drawn, d, n, stage.r() - 1 - d, quality);
-                inspectedWhenAccepted += accepted * after;
-                if (lotDefectives >= 0) {
+                walk.accept += accepted;
+                walk.reject += weight * model.moreThanAfter(drawn, d, n, stage.r() - 1 - d, quality);
+                walk.inspectedWhenAccepted += accepted * after;
+                if (walk.lotDefectives >= 0) {
                     for (int x = 0; x <= stage.c() - d; x++) {
-                        outgoing += weight * model.exactlyAfter(drawn, d, n, x, quality) * (lotDefectives - d - x);
+                        walk.outgoingOfLot(weight * model.exactlyAfter(drawn, d, n, x, quality), d + x);
                     }
                 } else {
-                    outgoing += accepted * quality * (lotSize == 0 ? 1.0 : (lotSize - after) / (double) lotSize);
+                    walk.outgoingOfProcess(accepted, after);
                 }
                 for (int total = Math.max(d, stage.c() + 1); total < stage.r(); total++) {
                     double p = model.exactlyAfter(drawn, d, n, total - d, quality);
                     if (p > 0) {
-                        next[total] += weight * p;
-                        nextLow = Math.min(nextLow, total);
-                        nextHigh = Math.max(nextHigh, total);
+                        walk.carry(total, weight * p);
                     }
                 }
             }
-            sample += reaching * n;
-            double[] swap = going;
-            going = next;
-            next = swap;
-            low = nextLow;
-            high = nextHigh;
+            walk.sample += reaching * n;
+            walk.nextStage();
             drawn = after;
-            if (nextHigh < 0) {
+            if (!walk.undecided()) {
                 break;
             }
         }
-        if (lotDefectives >= 0) {
-            outgoing /= lotSize;
-        }
-        return new Outcome(accept, reject, sample, outgoing, inspectedWhenAccepted);
+        return walk.outcome();
     }
 
     /** The average total inspection: accepted lots stop at their stage, rejected lots are inspected in full. */

@@ -113,36 +113,29 @@ public record VariablesPlan(int n, double k, boolean sigmaKnown) implements Plan
 
     @Override
     public double acceptance(OcModel model, double quality) {
-        checkModel(model);
-        if (quality <= 0) {
-            return 1.0;
-        }
-        if (quality >= 1) {
-            return 0.0;
-        }
-        double z = standardDistance(quality);
-        double root = Math.sqrt(n);
-        if (sigmaKnown) {
-            return NoncentralT.phi(root * (z - k));
-        }
-        return NoncentralT.survival(k * root, n - 1, root * z);
+        return tail(model, quality, true);
     }
 
     @Override
     public double rejection(OcModel model, double quality) {
+        return tail(model, quality, false);
+    }
+
+    /** P(accept) or P(reject), each computed as its own tail of the statistic's distribution. */
+    private double tail(OcModel model, double quality, boolean accepting) {
         checkModel(model);
         if (quality <= 0) {
-            return 0.0;
+            return accepting ? 1.0 : 0.0;
         }
         if (quality >= 1) {
-            return 1.0;
+            return accepting ? 0.0 : 1.0;
         }
         double z = standardDistance(quality);
         double root = Math.sqrt(n);
         if (sigmaKnown) {
-            return NoncentralT.phi(root * (k - z));
+            return NoncentralT.phi(accepting ? root * (z - k) : root * (k - z));
         }
-        return NoncentralT.cdf(k * root, n - 1, root * z);
+        return accepting ? NoncentralT.survival(k * root, n - 1, root * z) : NoncentralT.cdf(k * root, n - 1, root * z);
     }
 
     @Override
