@@ -83,8 +83,10 @@
 
   /**
    * Draws a chart of lines into host. spec: {title, xLabel, yLabel, xFormat, yFormat ("percent" or
-   * "number"), yMin, yMax, series: [{name, x: [], y: [], labels: [] (read-out text), markers, step,
-   * flags: [] (true: drawn hollow-red, out of limits)}], marks: [{x, label}], yTicks: [{v, label}]}.
+   * "number"), yMin, yMax, series: [{name, x: [], y: [], labels: [] (read-out text), markers, markEvery (a
+   * marker on every so many points), step, flags: [] (true: drawn hollow-red, out of limits), points: [{x, y,
+   * label}] (design points, drawn large and hollow in the series' shape)}], marks: [{x, label}],
+   * yTicks: [{v, label}]}.
    */
   LG.chart = function (host, spec) {
     LEFT = spec.left || 70;
@@ -149,12 +151,19 @@
         "data-series": s.name }, root);
       if (s.markers) {
         for (var j = 0; j < s.x.length; j++) {
-          if (s.y[j] === null || !isFinite(s.y[j])) { continue; }
+          // Several marked series start their markers a little apart, so that they do not stack where lines meet.
+          var every = s.markEvery || 1;
+          if (s.y[j] === null || !isFinite(s.y[j]) || (j + i * Math.floor(every / 3)) % every !== 0) { continue; }
           var flagged = s.flags && s.flags[j];
           marker(flagged ? "diamond" : SHAPES[i % 6], px(s.x[j]), py(s.y[j]), flagged ? 5.5 : 3.4,
             flagged ? "#a32020" : colour, root, !flagged);
         }
       }
+      (s.points || []).forEach(function (p) {
+        var node = marker(SHAPES[i % 6], px(p.x), py(p.y), 6, colour, root, false);
+        node.setAttribute("data-point", s.name || "");
+        svg("title", { text: p.label }, node);
+      });
     });
 
     var guide = svg("line", { y1: TOP, y2: H - BOTTOM, stroke: "#d38400", "stroke-width": 1.2, visibility: "hidden" }, root);

@@ -67,11 +67,18 @@ LG.showErrors = function (form, errors) {
   form.querySelectorAll(".bad").forEach(function (node) { node.classList.remove("bad"); });
   var general = form.querySelector(".form-error");
   if (general) { general.textContent = ""; }
+  // Where two parts of a form carry a field of one name, the one shown gets the error.
+  function shown(selector) {
+    var nodes = Array.prototype.filter.call(form.querySelectorAll(selector), function (node) {
+      return !node.closest(".hidden");
+    });
+    return nodes.length ? nodes[0] : null;
+  }
   (errors || []).forEach(function (error) {
-    var slot = error.field ? form.querySelector('[data-error-for="' + CSS.escape(error.field) + '"]') : null;
+    var slot = error.field ? shown('[data-error-for="' + CSS.escape(error.field) + '"]') : null;
     if (slot) {
       slot.textContent = error.message;
-      var input = form.querySelector('[name="' + CSS.escape(error.field) + '"]');
+      var input = shown('[name="' + CSS.escape(error.field) + '"]');
       if (input) { input.classList.add("bad"); }
     } else if (general) {
       general.textContent = (general.textContent ? general.textContent + " " : "") + error.message;

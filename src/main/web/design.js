@@ -20,10 +20,14 @@
     asn: { yLabel: "ASN (units)", yFormat: "number" }
   };
 
+  /** Shows the inputs of the chosen scheme only; the others' are disabled, so that they are not sent. */
   function showScheme() {
     var scheme = form.elements.scheme.value;
     form.querySelectorAll("[data-for-scheme]").forEach(function (part) {
-      part.classList.toggle("hidden", part.getAttribute("data-for-scheme") !== scheme);
+      part.classList.toggle("hidden", part.getAttribute("data-for-scheme").split(" ").indexOf(scheme) < 0);
+    });
+    form.querySelectorAll("input, select, textarea").forEach(function (field) {
+      if (field.name !== "scheme") { field.disabled = field.closest("[data-for-scheme].hidden") !== null; }
     });
   }
 
@@ -31,11 +35,17 @@
     if (!current) { LG.clear(curveHost); return; }
     var look = CURVES[curve];
     var series = [];
+    // A plan per defect class draws one line per class, with markers and its design points on the OC curve.
     pinned.concat([current]).forEach(function (plan) {
-      var c = plan.curves[curve];
-      if (c) {
-        series.push({ name: plan.label, x: plan.curves.x, y: c.y, labels: c.labels, step: plan.curves.step });
-      }
+      var classed = plan.curves.series.length > 1;
+      plan.curves.series.forEach(function (one) {
+        var c = one[curve];
+        if (c) {
+          series.push({ name: classed && pinned.length ? plan.label + ", " + one.name : one.name, x: plan.curves.x,
+            y: c.y, labels: c.labels, step: plan.curves.step, markers: classed, markEvery: classed ? 15 : 1,
+            points: classed && curve === "oc" ? one.points : null });
+        }
+      });
     });
     if (!series.length) {
       LG.clear(curveHost).appendChild(LG.el("p", { "class": "status", text: curve === "ati"
@@ -53,6 +63,12 @@
   function show(reply, note) {
     if (!reply.ok) {
       LG.showErrors(form, reply.errors);
+      // An error about a folded-away input unfolds it.
+      form.querySelectorAll("details").forEach(function (more) {
+        Array.prototype.forEach.call(more.querySelectorAll(".field-error"), function (slot) {
+          if (slot.textContent) { more.open = true; }
+        });
+      });
       status.textContent = "";
       return;
     }

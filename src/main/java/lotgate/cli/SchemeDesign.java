@@ -134,20 +134,12 @@ final class SchemeDesign {
     }
 
     private static DoublePlanDesigner.Space space(DesignCommand command) {
-        Double ratio;
-        if (command.staged.secondRatio.trim().equalsIgnoreCase("free")) {
-            ratio = null;
-        } else {
-            try {
-                ratio = Double.parseDouble(command.staged.secondRatio.trim());
-            } catch (NumberFormatException e) {
-                throw usage(command, "--second-ratio " + command.staged.secondRatio + ": give a number such as 1 or 2, or 'free'");
-            }
-            if (!(ratio >= 0.25 && ratio <= 10)) {
-                throw usage(command, "--second-ratio " + command.staged.secondRatio + ": give a ratio from 0.25 to 10, or 'free'");
-            }
+        try {
+            return new DoublePlanDesigner.Space(TypedValues.secondRatio(command.staged.secondRatio),
+                    command.staged.firstRejection);
+        } catch (IllegalArgumentException e) {
+            throw usage(command, e.getMessage());
         }
-        return new DoublePlanDesigner.Space(ratio, command.staged.firstRejection);
     }
 
     /** The --stage options as stages: N:C:R, with C "-" for none and R = C + 1 allowed to be left out last. */

@@ -16,16 +16,19 @@ final class Values {
 
     /** The most steps a curve table takes. */
     static final int MAX_STEPS = 10_000;
-    /** The most units a sequential plan may be truncated at: its exact lattice stays within memory. */
-    static final int MAX_TRUNCATION = 1_000_000;
 
-    /** A fraction from "1%" or "0.01"; a bare value of 1 or more is refused with a hint. */
-    static double fraction(String text) {
+    /** A value read by the parser every face shares; its refusal becomes picocli's, which names the option. */
+    private static <T> T typed(java.util.function.Supplier<T> read) {
         try {
-            return TypedValues.fraction(text);
+            return read.get();
         } catch (IllegalArgumentException e) {
             throw new TypeConversionException(e.getMessage());
         }
+    }
+
+    /** A fraction from "1%" or "0.01"; a bare value of 1 or more is refused with a hint. */
+    static double fraction(String text) {
+        return typed(() -> TypedValues.fraction(text));
     }
 
     /** The first and last sheet row of --rows FIRST-LAST, or {0, 0} when the option is not given. */
@@ -59,11 +62,7 @@ final class Values {
     static final class Risk implements ITypeConverter<Double> {
         @Override
         public Double convert(String text) {
-            try {
-                return TypedValues.risk(text);
-            } catch (IllegalArgumentException e) {
-                throw new TypeConversionException(e.getMessage());
-            }
+            return typed(() -> TypedValues.risk(text));
         }
     }
 
@@ -103,11 +102,19 @@ final class Values {
         }
     }
 
-    /** The truncation of a sequential plan: 1 to {@link #MAX_TRUNCATION} units. */
+    /** The truncation of a sequential plan: 1 to {@link TypedValues#MOST_TRUNCATION} units. */
     static final class Truncation implements ITypeConverter<Integer> {
         @Override
         public Integer convert(String text) {
-            return atMost(text, MAX_TRUNCATION, "is more than " + MAX_TRUNCATION + " units");
+            return typed(() -> TypedValues.truncation(text));
+        }
+    }
+
+    /** Limits, measurements and constants in the characteristic's own unit: finite numbers. */
+    static final class Measure implements ITypeConverter<Double> {
+        @Override
+        public Double convert(String text) {
+            return typed(() -> TypedValues.number(text));
         }
     }
 
@@ -129,10 +136,6 @@ final class Values {
     }
 
     private static int wholeNumber(String text, int least) {
-        try {
-            return TypedValues.wholeNumber(text, least);
-        } catch (IllegalArgumentException e) {
-            throw new TypeConversionException(e.getMessage());
-        }
+        return typed(() -> TypedValues.wholeNumber(text, least));
     }
 }

@@ -10,15 +10,17 @@ import picocli.CommandLine.ParameterException;
 final class VariablesDesign {
     /** The options of variables plans. */
     static final class Options {
-        @Option(names = "--sigma", paramLabel = "VALUE",
+        @Option(names = "--sigma", paramLabel = "VALUE", converter = Values.Measure.class,
                 description = "Variables plans: the known process standard deviation, in the measurement's unit (leave it"
                         + " out when sigma is estimated from each sample).")
         Double sigma;
 
-        @Option(names = "--lower", paramLabel = "LIMIT", description = "Variables plans: the lower specification limit.")
+        @Option(names = "--lower", paramLabel = "LIMIT", converter = Values.Measure.class,
+                description = "Variables plans: the lower specification limit.")
         Double lower;
 
-        @Option(names = "--upper", paramLabel = "LIMIT", description = "Variables plans: the upper specification limit.")
+        @Option(names = "--upper", paramLabel = "LIMIT", converter = Values.Measure.class,
+                description = "Variables plans: the upper specification limit.")
         Double upper;
 
         @Option(names = "--limits", paramLabel = "HOW",
@@ -27,7 +29,7 @@ final class VariablesDesign {
                         + " same AQL, or the lower limit's own with --lower-aql and --lower-ltpd).")
         String limits;
 
-        @Option(names = "--k", paramLabel = "K",
+        @Option(names = "--k", paramLabel = "K", converter = Values.Measure.class,
                 description = "Variables plans: with --sample-size, evaluate the plan (n, k) you already have.")
         Double kValue;
 

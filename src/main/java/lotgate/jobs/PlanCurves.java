@@ -26,8 +26,21 @@ public final class PlanCurves {
     }
 
     public static Result run(Request request) {
-        OperatingCharacteristic oc = new OperatingCharacteristic(request.plan(), request.model(), request.lotSize());
-        double upTo = oc.suggestedRange(request.ltpd() == null ? 0 : request.ltpd());
+        return run(request, range(request));
+    }
+
+    /** The curves up to a range the face chose, such as the widest of several plans drawn on one axis. */
+    public static Result run(Request request, double upTo) {
+        OperatingCharacteristic oc = oc(request);
         return new Result(oc.curve(upTo, request.steps()), upTo, KeyLevels.of(oc));
+    }
+
+    /** The range the curve command would choose for this plan: past its LTPD and its OC curve's fall. */
+    public static double range(Request request) {
+        return oc(request).suggestedRange(request.ltpd() == null ? 0 : request.ltpd());
+    }
+
+    private static OperatingCharacteristic oc(Request request) {
+        return new OperatingCharacteristic(request.plan(), request.model(), request.lotSize());
     }
 }

@@ -73,6 +73,52 @@ public final class TypedValues {
         }
     }
 
+    /** The most units a sequential plan may be truncated at: its exact lattice stays within memory. */
+    public static final int MOST_TRUNCATION = 1_000_000;
+
+    /** The truncation of a sequential plan: a whole number of units from 1 to {@link #MOST_TRUNCATION}. */
+    public static int truncation(String text) {
+        int value = wholeNumber(text, 1);
+        if (value > MOST_TRUNCATION) {
+            throw new IllegalArgumentException("'" + text + "' is more than " + MOST_TRUNCATION + " units");
+        }
+        return value;
+    }
+
+    /**
+     * A double plan's second sample as a multiple of the first, 0.25 to 10, or null for 'free' (every second
+     * sample size searched); the message names the option as the command line writes it.
+     */
+    public static Double secondRatio(String text) {
+        String trimmed = text.trim();
+        if (trimmed.equalsIgnoreCase("free")) {
+            return null;
+        }
+        double ratio;
+        try {
+            ratio = Double.parseDouble(trimmed);
+        } catch (NumberFormatException e) {
+            throw new IllegalArgumentException("--second-ratio " + text + ": give a number such as 1 or 2, or 'free'");
+        }
+        if (!(ratio >= 0.25 && ratio <= 10)) {
+            throw new IllegalArgumentException("--second-ratio " + text + ": give a ratio from 0.25 to 10, or 'free'");
+        }
+        return ratio;
+    }
+
+    /** A measurement or limit in the characteristic's own unit: any finite number, such as 12.5 or -0.02. */
+    public static double number(String text) {
+        try {
+            double value = Double.parseDouble(text.trim());
+            if (Double.isFinite(value)) {
+                return value;
+            }
+        } catch (NumberFormatException e) {
+            // Falls through to the message below.
+        }
+        throw new IllegalArgumentException("'" + text + "' is not a number");
+    }
+
     /**
      * The stages of a double or multiple plan, each written N:C:R (C may be - where the stage cannot accept; the
      * last may be N:C, its R then C + 1); the message names the stage as the command line writes it.

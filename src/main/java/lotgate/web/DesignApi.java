@@ -19,6 +19,7 @@ import lotgate.jobs.SaveTarget;
 import lotgate.jobs.SavedPlans;
 import lotgate.jobs.ShowPlan;
 import lotgate.jobs.TypedValues;
+import lotgate.plan.ClassPlan;
 import lotgate.plan.DefectClass;
 import lotgate.plan.SavedPlan;
 import lotgate.report.Percent;
@@ -28,9 +29,12 @@ import lotgate.report.results.StagedDesignRendering;
 import lotgate.report.results.VariablesDesignRendering;
 import lotgate.sampling.CurvePoint;
 import lotgate.sampling.DoublePlan;
+import lotgate.sampling.DoublePlanDesigner;
 import lotgate.sampling.MultiplePlan;
 import lotgate.sampling.OcModel;
+import lotgate.sampling.OperatingCharacteristic;
 import lotgate.sampling.Plan;
+import lotgate.sampling.RiskPoints;
 import lotgate.sampling.SequentialPlan;
 import lotgate.sampling.SinglePlan;
 import lotgate.sampling.Stage;
@@ -64,9 +68,13 @@ final class DesignApi {
         return plans.resolve(name + ".json");
     }
 
-    /** A designed plan as the page shows it. */
-    private record Designed(String label, String text, List<Map<String, String>> tiles, Plan plan, OcModel model,
-            int lotSize, Double aql, Double ltpd, SavedPlan saved) {
+    /** A designed plan as the page shows it: one drawn plan, or one per defect class. */
+    private record Designed(String label, String text, List<Map<String, String>> tiles, List<Drawn> drawn,
+            OcModel model, int lotSize, SavedPlan saved) {
+    }
+
+    /** A plan whose curves the page draws, with its defect class (null: the lot's one plan) and design points. */
+    private record Drawn(DefectClass defectClass, Plan plan, Double aql, Double ltpd) {
     }
 
     Reply design(Map<String, String> fields) {
@@ -103,11 +111,16 @@ final class DesignApi {
             Path file = planFile(settings.plans(), name);
             ShowPlan.Result shown = ShowPlan.run(new ShowPlan.Request(file));
             SavedPlan saved = shown.plan();
-            Plan plan = saved.plan();
-            Double aql = saved.designedFor() == null ? null : saved.designedFor().aql();
-            Double ltpd = saved.designedFor() == null ? null : saved.designedFor().ltpd();
-            return designed(new Designed(saved.name(), PlanFileRendering.text(shown).replace(file.toString(), file.getFileName().toString()), tiles(plan, saved.achieved()),
-                    plan, saved.model(), saved.lotSize(), aql, ltpd, saved));
+            List<Drawn> drawn = new ArrayList<>();
+            for (ClassPlan criteria : saved.classes()) {
+                RiskPoints points = criteria.designedFor();
+                drawn.add(new Drawn(saved.unclassified() ? null : criteria.defectClass(), criteria.plan(),
+                        points == null ? null : points.aql(), points == null ? null : points.ltpd()));
+            }
+            List<Map<String, String>> tiles = saved.unclassified() ? tiles(saved.plan(), saved.achieved())
+                    : classTiles(saved.sampleSize(), drawn);
+            return designed(new Designed(saved.name(), PlanFileRendering.text(shown).replace(file.toString(),
+                    file.getFileName().toString()), tiles, drawn, saved.model(), saved.lotSize(), saved));
         });
     }
 
@@ -159,9 +172,53 @@ final class DesignApi {
         members.put("label", designed.label());
         members.put("tiles", designed.tiles());
         members.put("text", designed.text());
-        PlanCurves.Result curves = PlanCurves.run(new PlanCurves.Request(designed.plan(), designed.model(),
-                designed.lotSize(), designed.ltpd(), CURVE_STEPS));
+        List<Drawn> drawn = designed.drawn();
+        List<PlanCurves.Request> requests = new ArrayList<>();
+        for (Drawn plan : drawn) {
+            requests.add(new PlanCurves.Request(plan.plan(), designed.model(), designed.lotSize(), plan.ltpd(),
+                    CURVE_STEPS));
+        }
+        // Several classes on one quality axis: the widest range any of them asks for.
+        double upTo = 0;
+        if (requests.size() > 1) {
+            for (PlanCurves.Request request : requests) {
+                upTo = Math.max(upTo, PlanCurves.range(request));
+            }
+        }
+        List<Map<String, Object>> series = new ArrayList<>();
         List<Double> x = new ArrayList<>();
+        for (int i = 0; i < drawn.size(); i++) {
+            PlanCurves.Result curves = upTo > 0 ? PlanCurves.run(requests.get(i), upTo)
+                    : PlanCurves.run(requests.get(i));
+            series.add(series(drawn.get(i), designed, curves, i == 0 ? x : null));
+        }
+        Map<String, Object> curveMembers = new LinkedHashMap<>();
+        curveMembers.put("x", x);
+        curveMembers.put("xLabel", designed.model().countsUnits() ? "incoming quality (fraction nonconforming)"
+                : "incoming quality (nonconformities per unit)");
+        curveMembers.put("step", designed.model() instanceof OcModel.Hypergeometric);
+        curveMembers.put("series", series);
+        members.put("curves", curveMembers);
+        List<Map<String, Object>> marks = new ArrayList<>();
+        Drawn only = drawn.get(0);
+        if (drawn.size() == 1 && only.aql() != null) {
+            marks.add(Map.of("x", only.aql(), "label", "AQL " + Percent.level(only.aql())));
+        }
+        if (drawn.size() == 1 && only.ltpd() != null) {
+            marks.add(Map.of("x", only.ltpd(), "label", "LTPD " + Percent.level(only.ltpd())));
+        }
+        members.put("marks", marks);
+        if (designed.saved() != null) {
+            members.put("fingerprint", designed.saved().shortFingerprint());
+        }
+        return members;
+    }
+
+    /**
+     * One drawn plan's curves over the common axis (its quality values added to {@code x} when given), named
+     * after its class, with its design points on the OC curve.
+     */
+    private static Map<String, Object> series(Drawn drawn, Designed designed, PlanCurves.Result curves, List<Double> x) {
         List<Double> oc = new ArrayList<>();
         List<String> ocText = new ArrayList<>();
         List<Double> aoq = new ArrayList<>();
@@ -171,7 +228,9 @@ final class DesignApi {
         List<Double> asn = new ArrayList<>();
         List<String> asnText = new ArrayList<>();
         for (CurvePoint point : curves.points()) {
-            x.add(point.quality());
+            if (x != null) {
+                x.add(point.quality());
+            }
             oc.add(point.acceptance());
             ocText.add(Percent.probability(point.acceptance()));
             aoq.add(point.aoq());
@@ -181,34 +240,32 @@ final class DesignApi {
             asn.add(point.asn());
             asnText.add(String.format(Locale.ROOT, "%.1f units", point.asn()));
         }
-        Map<String, Object> curveMembers = new LinkedHashMap<>();
-        curveMembers.put("x", x);
-        curveMembers.put("xLabel", designed.model().countsUnits() ? "incoming quality (fraction nonconforming)"
-                : "incoming quality (nonconformities per unit)");
-        curveMembers.put("step", designed.model() instanceof OcModel.Hypergeometric);
-        curveMembers.put("oc", Map.of("y", oc, "labels", ocText));
-        curveMembers.put("aoq", Map.of("y", aoq, "labels", aoqText));
+        Map<String, Object> series = new LinkedHashMap<>();
+        series.put("name", drawn.defectClass() == null ? designed.label()
+                : drawn.defectClass().label() + ": " + label(drawn.plan()));
+        series.put("oc", Map.of("y", oc, "labels", ocText));
+        series.put("aoq", Map.of("y", aoq, "labels", aoqText));
         if (designed.lotSize() > 0) {
-            curveMembers.put("ati", Map.of("y", ati, "labels", atiText));
+            series.put("ati", Map.of("y", ati, "labels", atiText));
         }
-        if (!(designed.plan() instanceof SinglePlan) && !(designed.plan() instanceof VariablesPlan)) {
-            curveMembers.put("asn", Map.of("y", asn, "labels", asnText));
-        } else {
-            curveMembers.put("asn", Map.of("y", asn, "labels", asnText));
+        series.put("asn", Map.of("y", asn, "labels", asnText));
+        List<Map<String, Object>> points = new ArrayList<>();
+        if (drawn.defectClass() != null) {
+            designPoint(points, drawn, designed.model(), "AQL", drawn.aql());
+            designPoint(points, drawn, designed.model(), "LTPD", drawn.ltpd());
         }
-        members.put("curves", curveMembers);
-        List<Map<String, Object>> marks = new ArrayList<>();
-        if (designed.aql() != null) {
-            marks.add(Map.of("x", designed.aql(), "label", "AQL " + Percent.level(designed.aql())));
+        series.put("points", points);
+        return series;
+    }
+
+    /** A class's design point on its OC curve, marked on the chart with its P(accept). */
+    private static void designPoint(List<Map<String, Object>> points, Drawn drawn, OcModel model, String name,
+            Double quality) {
+        if (quality != null) {
+            double accept = OperatingCharacteristic.acceptance(drawn.plan(), model, quality);
+            points.add(Map.of("x", quality, "y", accept, "label", drawn.defectClass().label() + " " + name + " "
+                    + Percent.level(quality) + ": P(accept) " + Percent.probability(accept)));
         }
-        if (designed.ltpd() != null) {
-            marks.add(Map.of("x", designed.ltpd(), "label", "LTPD " + Percent.level(designed.ltpd())));
-        }
-        members.put("marks", marks);
-        if (designed.saved() != null) {
-            members.put("fingerprint", designed.saved().shortFingerprint());
-        }
-        return members;
     }
 
     /** The form read and designed by the job for its scheme; saved when a target is given. */
@@ -246,47 +303,81 @@ final class DesignApi {
                     throw new NoPlan(result.noPlanReason());
                 }
                 SinglePlan plan = result.classes().get(0).found().plan();
-                return designed(new Designed("n = " + plan.n() + ", c = " + plan.c(), DesignRendering.text(result),
-                        tiles(plan, result.classes().get(0).found().risks()), plan, model, n0, aql, ltpd,
-                        result.saved()));
+                return designed(new Designed(label(plan), DesignRendering.text(result),
+                        tiles(plan, result.classes().get(0).found().risks()), List.of(new Drawn(null, plan, aql, ltpd)),
+                        model, n0, result.saved()));
             }
             case "double", "multiple", "sequential" -> {
-                List<Stage> stages = scheme.equals("sequential") ? List.of() : stages(text(fields, "stages"));
-                if (scheme.equals("multiple") && stages.size() < 2) {
-                    throw new FieldError("stages", "--scheme multiple needs its stages: give 2 to "
-                            + MultiplePlan.MOST_STAGES + " --stage options, e.g. --stage 20:-:3 --stage 20:1:4"
-                            + " --stage 20:3:4");
-                }
-                DesignStagedPlan.Result result = DesignStagedPlan.run(new DesignStagedPlan.Request(
-                        DesignStagedPlan.Scheme.valueOf(scheme.toUpperCase(Locale.ROOT)), model, n0, aql, alpha, ltpd,
-                        beta, stages, scheme.equals("double") && stages.isEmpty()
-                                ? new lotgate.sampling.DoublePlanDesigner.Space(1.0, null) : null,
-                        null, null, false, false, save));
+                DesignStagedPlan.Result result = DesignStagedPlan.run(staged(scheme, fields, model, n0, aql, alpha,
+                        ltpd, beta, save));
                 if (result.noPlanReason() != null) {
                     throw new NoPlan(result.noPlanReason());
                 }
                 return designed(new Designed(label(result.plan()), StagedDesignRendering.text(result),
-                        tiles(result.plan(), result.risks()), result.plan(), model, n0, aql, ltpd, result.saved()));
+                        tiles(result.plan(), result.risks()), List.of(new Drawn(null, result.plan(), aql, ltpd)), model,
+                        n0, result.saved()));
             }
             case "variables" -> {
-                Double lower = measure(fields, "lower");
-                Double upper = measure(fields, "upper");
-                Double sigma = measure(fields, "sigma");
                 DesignVariablesPlan.Result result = DesignVariablesPlan.run(new DesignVariablesPlan.Request(model, n0,
-                        aql, alpha, ltpd, beta, lower, upper, sigma, null, null, null, null, null, null, null, save));
+                        aql, alpha, ltpd, beta, measure(fields, "lower"), measure(fields, "upper"),
+                        measure(fields, "sigma"), text(fields, "limits"), text(fields, "characteristic"),
+                        text(fields, "unit"), level(fields, "lower-aql"), level(fields, "lower-ltpd"),
+                        count(fields, "sample-size", 1), measure(fields, "k"), save));
                 if (result.noPlanReason() != null) {
                     throw new NoPlan(result.noPlanReason());
                 }
                 VariablesPlan plan = result.design().plan();
                 return designed(new Designed(label(plan), VariablesDesignRendering.text(result),
-                        tiles(plan, result.design().risks()), plan, model, n0, aql, ltpd, result.saved()));
+                        tiles(plan, result.design().risks()), List.of(new Drawn(null, plan, aql, ltpd)), model, n0,
+                        result.saved()));
             }
             default -> throw new FieldError("scheme", "--scheme " + scheme + ": give single, double, multiple,"
                     + " sequential or variables");
         }
     }
 
-    /** A plan with criteria per defect class, one line of the classes field each; the chart shows the first class. */
+    /**
+     * The request for a plan in stages or a sequential plan, from the fields its scheme shows: the double plan's
+     * design space or given stages, where its ASN is minimised and whether it is curtailed, the sequential
+     * plan's truncation and lines. The checks are the design command's, in its words.
+     */
+    private static DesignStagedPlan.Request staged(String scheme, Map<String, String> fields, OcModel model, int lotSize,
+            Double aql, double alpha, Double ltpd, double beta, SaveTarget save) {
+        boolean isDouble = scheme.equals("double");
+        List<Stage> stages = scheme.equals("sequential") ? List.of() : stages(text(fields, "stages"));
+        if (scheme.equals("multiple") && stages.size() < 2) {
+            throw new FieldError("stages", "--scheme multiple needs its stages: give 2 to "
+                    + MultiplePlan.MOST_STAGES + " --stage options, e.g. --stage 20:-:3 --stage 20:1:4"
+                    + " --stage 20:3:4");
+        }
+        String ratio = text(fields, "second-ratio");
+        Integer firstRejection = count(fields, "first-rejection", 1);
+        Double asnAt = level(fields, "asn-at");
+        DoublePlanDesigner.Space space = null;
+        if (isDouble && stages.isEmpty()) {
+            try {
+                space = new DoublePlanDesigner.Space(TypedValues.secondRatio(ratio == null ? "1" : ratio),
+                        firstRejection);
+            } catch (IllegalArgumentException e) {
+                throw new FieldError("second-ratio", e.getMessage());
+            }
+        } else if (isDouble && (firstRejection != null || asnAt != null || (ratio != null && !ratio.equals("1")))) {
+            throw new FieldError("stages", "--first-rejection, --asn-at and --second-ratio shape a design; with"
+                    + " --stage the plan is given");
+        }
+        String truncation = text(fields, "truncate-at");
+        Integer truncateAt;
+        try {
+            truncateAt = truncation == null ? null : TypedValues.truncation(truncation);
+        } catch (IllegalArgumentException e) {
+            throw new FieldError("truncate-at", invalid("truncate-at", e));
+        }
+        return new DesignStagedPlan.Request(DesignStagedPlan.Scheme.valueOf(scheme.toUpperCase(Locale.ROOT)), model,
+                lotSize, aql, alpha, ltpd, beta, stages, space, asnAt, truncateAt, "yes".equals(fields.get("plain-wald")),
+                "yes".equals(fields.get("curtailed")), save);
+    }
+
+    /** A plan with criteria per defect class, one line of the classes field each; the chart draws every class. */
     private Map<String, Object> classed(String classes, OcModel model, int lotSize, double alpha, double beta,
             SaveTarget save) {
         List<DesignSinglePlan.Criteria> criteria = new ArrayList<>();
@@ -305,17 +396,24 @@ final class DesignApi {
         if (result.noPlanReason() != null) {
             throw new NoPlan(result.noPlanReason());
         }
-        DesignSinglePlan.ClassOutcome first = result.classes().get(0);
-        SinglePlan plan = first.found().plan();
-        List<Map<String, String>> tiles = new ArrayList<>();
-        tiles.add(tile("n", Integer.toString(result.sampleSize())));
+        List<Drawn> drawn = new ArrayList<>();
         for (DesignSinglePlan.ClassOutcome outcome : result.classes()) {
-            tiles.add(tile(outcome.defectClass().label(), "n " + outcome.found().plan().n() + ", c "
-                    + outcome.found().plan().c()));
+            drawn.add(new Drawn(outcome.defectClass(), outcome.found().plan(), outcome.points().aql(),
+                    outcome.points().ltpd()));
         }
-        return designed(new Designed(first.defectClass().label() + " n = " + plan.n() + ", c = " + plan.c(),
-                DesignRendering.text(result), tiles, plan, model, lotSize, first.points().aql(), first.points().ltpd(),
-                result.saved()));
+        return designed(new Designed("classes, n = " + result.sampleSize(), DesignRendering.text(result),
+                classTiles(result.sampleSize(), drawn), drawn, model, lotSize, result.saved()));
+    }
+
+    /** The tiles of a plan per defect class: the lot's sample, then each class's plan. */
+    private static List<Map<String, String>> classTiles(int sampleSize, List<Drawn> drawn) {
+        List<Map<String, String>> tiles = new ArrayList<>();
+        tiles.add(tile("n", Integer.toString(sampleSize)));
+        for (Drawn plan : drawn) {
+            tiles.add(tile(plan.defectClass().label(), plan.plan() instanceof SinglePlan single
+                    ? "n " + single.n() + ", c " + single.c() : label(plan.plan())));
+        }
+        return tiles;
     }
 
     private static String label(Plan plan) {
@@ -412,14 +510,10 @@ final class DesignApi {
 
     private static Double measure(Map<String, String> fields, String name) {
         String value = text(fields, name);
-        if (value == null) {
-            return null;
-        }
         try {
-            return Double.parseDouble(value);
-        } catch (NumberFormatException e) {
-            throw new FieldError(name, "Invalid value for option '--" + name + "': '" + value + "' is not a"
-                    + " number");
+            return value == null ? null : TypedValues.number(value);
+        } catch (IllegalArgumentException e) {
+            throw new FieldError(name, invalid(name, e));
         }
     }
 

@@ -8,9 +8,30 @@ final class Pages {
     }
 
     private static String field(String name, String label, String value, String hint) {
-        return "<label for=\"f-" + name + "\">" + label + (hint.isEmpty() ? "" : " <span class=\"hint\">" + hint + "</span>")
-                + "</label><input type=\"text\" id=\"f-" + name + "\" name=\"" + name + "\" value=\"" + escape(value)
+        return field("f-" + name, name, label, value, hint);
+    }
+
+    /** A text field with an id of its own, for a field name that two schemes' parts both carry. */
+    private static String field(String id, String name, String label, String value, String hint) {
+        return "<label for=\"" + id + "\">" + label + (hint.isEmpty() ? "" : " <span class=\"hint\">" + hint + "</span>")
+                + "</label><input type=\"text\" id=\"" + id + "\" name=\"" + name + "\" value=\"" + escape(value)
                 + "\" autocomplete=\"off\" spellcheck=\"false\">" + errorSlot(name);
+    }
+
+    private static String checkbox(String name, String label) {
+        return "<label><input type=\"checkbox\" id=\"f-" + name + "\" name=\"" + name + "\" value=\"yes\"> " + label
+                + "</label>" + errorSlot(name);
+    }
+
+    private static String pair(String left, String right) {
+        return "<div class=\"pair\"><div>" + left + "</div><div>" + right + "</div></div>";
+    }
+
+    /** The inputs of one scheme (or several, space-separated), with its less-used ones folded away. */
+    private static String forScheme(String schemes, String shown, String folded) {
+        return "<div data-for-scheme=\"" + schemes + "\" class=\"hidden\">" + shown + (folded.isEmpty() ? ""
+                : "<details class=\"more\"><summary>More for " + schemes + " plans</summary>" + folded + "</details>")
+                + "</div>";
     }
 
     private static String errorSlot(String name) {
@@ -49,11 +70,23 @@ final class Pages {
                 + "</div><div>" + field("lot-size", "Lot size N", "", "(optional)") + "</div></div>"
                 + "<div class=\"pair\" data-for-scheme=\"single\"><div>" + field("acceptance", "Acceptance number c", "", "(fix it)")
                 + "</div><div>" + field("sample-size", "Sample size n", "", "(evaluate)") + "</div></div>"
-                + "<div data-for-scheme=\"multiple\" class=\"hidden\">" + field("stages", "Stages", "", "N:C:R each, e.g. 50:-:3 50:1:4 50:3")
-                + "</div>"
-                + "<div data-for-scheme=\"variables\" class=\"hidden\"><div class=\"pair\"><div>"
-                + field("lower", "Lower limit", "", "") + "</div><div>" + field("upper", "Upper limit", "", "")
-                + "</div></div>" + field("sigma", "Known sigma", "", "(leave empty when unknown)") + "</div>"
+                + forScheme("double", pair(field("second-ratio", "Second sample", "1", "(times n1, or free)"),
+                        field("asn-at", "Least ASN at", "", "(default: the AQL)")),
+                        pair(field("first-rejection", "First rejection r1", "", "(default: c2 + 1)"),
+                                checkbox("curtailed", "curtailed ASN (stop at rejection)"))
+                        + field("f-double-stages", "stages", "Given stages", "", "N:C:R twice, e.g. 50:1:4 100:3"))
+                + forScheme("multiple", field("stages", "Stages", "", "N:C:R each, e.g. 50:-:3 50:1:4 50:3"), "")
+                + forScheme("sequential", field("truncate-at", "Truncate at", "", "(units; default: 3 times the single n)"),
+                        checkbox("plain-wald", "keep Wald's lines as asked (risks may then exceed them)"))
+                + forScheme("variables", field("characteristic", "Characteristic", "", "(e.g. bore diameter)")
+                        + pair(field("lower", "Lower limit", "", ""), field("upper", "Upper limit", "", ""))
+                        + pair(field("unit", "Unit", "", "(e.g. mm)"), field("sigma", "Known sigma", "",
+                                "(empty: unknown, from each sample)")),
+                        select("limits", "Both limits", "|combined (M-method)", "separate|separate (k-method at each)")
+                        + pair(field("lower-aql", "Lower limit's AQL", "", "(separate)"),
+                                field("lower-ltpd", "Lower limit's LTPD", "", "(separate)"))
+                        + pair(field("f-variables-n", "sample-size", "Sample size n", "", "(evaluate)"),
+                                field("k", "Constant k", "", "(with n)")))
                 + "<div data-for-scheme=\"single\"><label for=\"f-classes\">Defect classes <span class=\"hint\">one a line,"
                 + " e.g. critical:c=0,aql=0.1%,ltpd=1%</span></label><textarea id=\"f-classes\" name=\"classes\""
                 + " spellcheck=\"false\"></textarea>" + errorSlot("classes") + "</div>"

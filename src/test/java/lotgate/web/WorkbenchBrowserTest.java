@@ -20,9 +20,9 @@ class WorkbenchBrowserTest {
     Path folder;
 
     /** A tile's text, read in one step in the page so that a redraw between finding and reading cannot intervene. */
-    private static String tile(Browser browser, String key) {
+    static String tile(Browser browser, String key) {
         Object text = browser.driver.executeScript("var e = document.querySelector(arguments[0]);"
-                + " return e == null ? '' : e.innerText.trim();", "#tiles [data-key='" + key + "'] .v");
+                + " return e == null ? '' : e.innerText.trim();", "#tiles [data-key=\"" + key + "\"] .v");
         return String.valueOf(text);
     }
 
