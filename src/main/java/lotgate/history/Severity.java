@@ -1,21 +1,16 @@
 package lotgate.history;
 
-import java.util.Locale;
+import lotgate.plan.Words;
 
 /** The inspection severity a supplier's part is under, set by the switching rules. */
 public enum Severity {
     NORMAL, TIGHTENED, REDUCED, DISCONTINUED;
 
     public String label() {
-        return name().toLowerCase(Locale.ROOT);
+        return Words.of(this);
     }
 
     public static Severity of(String label) {
-        for (Severity severity : values()) {
-            if (severity.label().equals(label)) {
-                return severity;
-            }
-        }
-        throw new IllegalArgumentException("unknown severity '" + label + "'");
+        return Words.orRefused(Words.named(values(), label), "unknown severity '" + label + "'");
     }
 }

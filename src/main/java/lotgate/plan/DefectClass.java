@@ -1,7 +1,5 @@
 package lotgate.plan;
 
-import java.util.Locale;
-
 /**
  * The class of a nonconformity, by seriousness: critical (can hurt someone or stop the product
  * working), major, minor; "any" stands for a plan that counts every nonconformity alike.
@@ -11,16 +9,11 @@ public enum DefectClass {
 
     /** The name in plan files, sheets and output: any, critical, major, minor. */
     public String label() {
-        return name().toLowerCase(Locale.ROOT);
+        return Words.of(this);
     }
 
     /** The class a label names, or null. */
     public static DefectClass of(String label) {
-        for (DefectClass value : values()) {
-            if (value.label().equals(label.trim().toLowerCase(Locale.ROOT))) {
-                return value;
-            }
-        }
-        return null;
+        return Words.read(values(), label);
     }
 }

@@ -102,14 +102,9 @@ final class NativeCharts {
     static void addLine(XDDFLineChartData data, XDDFDataSource<?> categories, XDDFNumericalDataSource<Double> values,
             String title, Look look) {
         XDDFLineChartData.Series series = (XDDFLineChartData.Series) data.addSeries(categories, values);
-        series.setTitle(title, null);
         series.setSmooth(false);
-        series.setLineProperties(look.line() ? WorkbookLayout.line(look.colour(), look.width(), look.dash())
-                : WorkbookLayout.noLine());
         series.setMarkerStyle(look.marker());
-        if (look.marker() != MarkerStyle.NONE) {
-            markerColour(series.getCTLineSer().getMarker(), look.colour(), look.markerSize());
-        }
+        drawAs(series, title, look, () -> series.getCTLineSer().getMarker());
     }
 
     static XDDFScatterChartData scatter(XSSFChart chart, XDDFValueAxis bottom, XDDFValueAxis left) {
@@ -121,13 +116,19 @@ final class NativeCharts {
     static void addScatter(XDDFScatterChartData data, XDDFNumericalDataSource<Double> x,
             XDDFNumericalDataSource<Double> y, String title, Look look) {
         XDDFScatterChartData.Series series = (XDDFScatterChartData.Series) data.addSeries(x, y);
-        series.setTitle(title, null);
         series.setSmooth(false);
+        series.setMarkerStyle(look.marker());
+        drawAs(series, title, look, () -> series.getCTScatterSer().getMarker());
+    }
+
+    /** Gives a series of lines or points its title, its line and its marker's colour, as the look says. */
+    private static void drawAs(XDDFChartData.Series series, String title, Look look,
+            java.util.function.Supplier<CTMarker> marker) {
+        series.setTitle(title, null);
         series.setLineProperties(look.line() ? WorkbookLayout.line(look.colour(), look.width(), look.dash())
                 : WorkbookLayout.noLine());
-        series.setMarkerStyle(look.marker());
         if (look.marker() != MarkerStyle.NONE) {
-            markerColour(series.getCTScatterSer().getMarker(), look.colour(), look.markerSize());
+            markerColour(marker.get(), look.colour(), look.markerSize());
         }
     }
 
