@@ -29,6 +29,10 @@ public final class BenchmarkMain {
             WorkbenchLoad.run();
             return;
         }
+        if (include.equals("DesignLatency")) {
+            DesignLatency.run();
+            return;
+        }
         ChainedOptionsBuilder options = new OptionsBuilder().include(include);
         if (include.contains("DesignBenchmark") || include.contains("StagedBenchmark")
                 || include.contains("TablesBenchmark") || include.endsWith("*Benchmark")) {
