@@ -31,7 +31,7 @@ LG.clear = function (node) {
 LG.formText = function (form) {
   var params = new URLSearchParams();
   Array.prototype.forEach.call(form.elements, function (field) {
-    if (!field.name || field.disabled) { return; }
+    if (!field.name || field.disabled || field.type === "file") { return; }
     if ((field.type === "checkbox" || field.type === "radio") && !field.checked) { return; }
     params.append(field.name, field.value);
   });

@@ -4,7 +4,7 @@
   var form = document.getElementById("lot");
   var bench = document.getElementById("bench");
   var planSelect = document.getElementById("f-plan");
-  var fileInput = document.getElementById("f-sheet");
+  var fileInput = document.getElementById("f-sheet-file");
   var drop = document.getElementById("drop");
   var verdict = document.getElementById("verdict");
   var status = document.getElementById("sentence-status");
@@ -36,6 +36,17 @@
     }
   });
 
+  /** Errors beside their fields; a folded part of the form that holds one is opened. */
+  function showErrors(errors) {
+    LG.showErrors(form, errors);
+    form.querySelectorAll("details.more").forEach(function (part) {
+      var holds = Array.prototype.some.call(part.querySelectorAll("[data-error-for]"), function (slot) {
+        return slot.textContent !== "";
+      });
+      if (holds) { part.open = true; }
+    });
+  }
+
   function showVerdict(reply) {
     LG.clear(verdict);
     verdict.appendChild(LG.el("div", { "class": "verdict " + reply.decision, id: "decision", text: reply.headline }));
@@ -64,18 +75,18 @@
     event.preventDefault();
     var file = dropped || fileInput.files[0];
     if (!file) {
-      LG.showErrors(form, [{ field: "sheet", message: "choose the inspection sheet (.xlsx, .xls or .csv)" }]);
+      showErrors([{ field: "sheet-file", message: "choose the inspection sheet (.xlsx, .xls or .csv)" }]);
       return;
     }
     var query = LG.formText(form) + "&file=" + encodeURIComponent(file.name);
     status.textContent = "Sentencing " + file.name + "...";
     LG.post("/api/sentence?" + query, file, "application/octet-stream").then(function (reply) {
       if (!reply.ok) {
-        LG.showErrors(form, reply.errors);
+        showErrors(reply.errors);
         status.textContent = "";
         return;
       }
-      LG.showErrors(form, []);
+      showErrors([]);
       status.textContent = "";
       showVerdict(reply);
     }).catch(function () {

@@ -106,7 +106,7 @@ final class SentenceCommand implements Runnable {
     @Option(names = "--no-record", description = "Do not add this lot to the history store (a trial run).")
     boolean noRecord;
 
-    @Option(names = "--supersedes", paramLabel = "SEQ",
+    @Option(names = "--supersedes", paramLabel = "SEQ", converter = Values.Sequence.class,
             description = "This sentence corrects the history record SEQ (give --reason); the old record stays.")
     Long supersedes;
 
@@ -135,7 +135,7 @@ final class SentenceCommand implements Runnable {
 
     @Override
     public void run() {
-        int[] range = Values.rowRange(spec, rows);
+        int[] range = SheetOptions.rowRange(spec, rows);
         SentenceLot.Request request = new SentenceLot.Request(planFile, sheetFile, sheet.name, columns(),
                 range[0], range[1], givenDetails(), lotFile, confidence.level, !noRecord, supersedes, reason, production,
                 storeOption.location(), new SentenceLot.Outputs(record.file, chart.file(), reports.files));

@@ -1,61 +1,44 @@
 package lotgate.cli;
 
-import java.util.Locale;
-import lotgate.inspection.ResultWords;
 import lotgate.inspection.Columns;
+import lotgate.inspection.ResultWords;
+import lotgate.jobs.SheetLayout;
+import lotgate.jobs.TypedValues;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.ParameterException;
 
-/** The options that say how to read an inspection sheet, turned into what the readers take. */
+/** The options that say how to read an inspection sheet, turned into what the readers take (jobs.SheetLayout). */
 final class SheetOptions {
     private SheetOptions() {
     }
 
     /** The standard result words, with the site's (LOTGATE_RESULT_WORDS) and then the option's added. */
     static ResultWords resultWords(CommandSpec spec, String option) {
-        ResultWords words = ResultWords.standard();
-        String site = System.getenv(ResultWords.SITE_VARIABLE);
-        if (site != null && !site.isBlank()) {
-            try {
-                words = words.with(site);
-            } catch (IllegalArgumentException e) {
-                throw new ParameterException(spec.commandLine(), ResultWords.SITE_VARIABLE + ": " + e.getMessage());
-            }
-        }
-        if (option != null) {
-            try {
-                words = words.with(option);
-            } catch (IllegalArgumentException e) {
-                throw new ParameterException(spec.commandLine(), "--result-words: " + e.getMessage());
-            }
-        }
-        return words;
+        return SheetLayout.resultWords(option);
     }
 
     /** The column names of --columns, with the header row, separator and result words of the other options. */
     static Columns columns(CommandSpec spec, String mapping, Integer headerRow, String delimiter, String words) {
-        Columns columns;
-        try {
-            columns = mapping == null ? Columns.standard() : Columns.mapped(mapping);
-        } catch (IllegalArgumentException e) {
-            throw new ParameterException(spec.commandLine(), "--columns: " + e.getMessage());
-        }
-        if (headerRow != null) {
-            columns = columns.withHeaderRow(headerRow);
-        }
+        Character separator = null;
         if (delimiter != null) {
-            columns = columns.withDelimiter(delimiter(spec, delimiter));
+            try {
+                separator = TypedValues.delimiter(delimiter);
+            } catch (IllegalArgumentException e) {
+                throw new ParameterException(spec.commandLine(), "--delimiter " + delimiter + ": " + e.getMessage());
+            }
         }
-        return columns.withResultWords(resultWords(spec, words));
+        return SheetLayout.columns(mapping, headerRow, separator, words);
     }
 
-    private static char delimiter(CommandSpec spec, String option) {
-        return switch (option.trim().toLowerCase(Locale.ROOT)) {
-            case "comma", "," -> ',';
-            case "semicolon", ";" -> ';';
-            case "tab", "\\t" -> '\t';
-            default -> throw new ParameterException(spec.commandLine(), "--delimiter " + option + ": give comma,"
-                    + " semicolon or tab");
-        };
+    /** The first and last sheet row of --rows FIRST-LAST, or {0, 0} when the option is not given. */
+    static int[] rowRange(CommandSpec spec, String rows) {
+        if (rows == null) {
+            return new int[] {0, 0};
+        }
+        try {
+            return TypedValues.rowRange(rows);
+        } catch (IllegalArgumentException e) {
+            throw new ParameterException(spec.commandLine(), "--rows " + rows + ": " + e.getMessage());
+        }
     }
 }

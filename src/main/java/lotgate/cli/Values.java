@@ -2,13 +2,11 @@ package lotgate.cli;
 
 import lotgate.jobs.TypedValues;
 import picocli.CommandLine.ITypeConverter;
-import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.TypeConversionException;
 
 /**
  * Parsing of the values a quality engineer types: quality levels and risks as "1%", "0.5%" or a
- * fraction such as "0.01", whole numbers, and sheet row ranges.
+ * fraction such as "0.01", whole numbers and sheet rows (each read by jobs.TypedValues).
  */
 final class Values {
     private Values() {
@@ -29,25 +27,6 @@ final class Values {
     /** A fraction from "1%" or "0.01"; a bare value of 1 or more is refused with a hint. */
     static double fraction(String text) {
         return typed(() -> TypedValues.fraction(text));
-    }
-
-    /** The first and last sheet row of --rows FIRST-LAST, or {0, 0} when the option is not given. */
-    static int[] rowRange(CommandSpec spec, String rows) {
-        if (rows == null) {
-            return new int[] {0, 0};
-        }
-        String[] parts = rows.trim().split("-", -1);
-        try {
-            int first = Integer.parseInt(parts[0].trim());
-            int last = Integer.parseInt(parts[1].trim());
-            if (parts.length == 2 && first >= 1 && last >= first && last <= 1_048_576) {
-                return new int[] {first, last};
-            }
-        } catch (NumberFormatException | ArrayIndexOutOfBoundsException e) {
-            // Falls through to the message below.
-        }
-        throw new ParameterException(spec.commandLine(), "--rows " + rows + ": give the first and last sheet row of"
-                + " the sample, as in 2-126 (rows 1 to 1048576, the first no later than the last)");
     }
 
     /** Quality levels: fractions nonconforming, or nonconformities per unit for the Poisson model. */
@@ -83,6 +62,14 @@ final class Values {
         @Override
         public Integer convert(String text) {
             return wholeNumber(text, 1);
+        }
+    }
+
+    /** A history record's sequence number: 1 or more. */
+    static final class Sequence implements ITypeConverter<Long> {
+        @Override
+        public Long convert(String text) {
+            return typed(() -> TypedValues.sequenceNumber(text));
         }
     }
 
@@ -122,7 +109,7 @@ final class Values {
     static final class SheetRow implements ITypeConverter<Integer> {
         @Override
         public Integer convert(String text) {
-            return atMost(text, 1_048_576, "is past the last row a sheet has, 1048576");
+            return typed(() -> TypedValues.sheetRow(text));
         }
     }
 

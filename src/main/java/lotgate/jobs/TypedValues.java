@@ -147,4 +147,58 @@ public final class TypedValues {
         }
         return stages;
     }
+
+    /** The last row a spreadsheet has (xlsx). */
+    public static final int LAST_SHEET_ROW = 1_048_576;
+
+    /** A sheet row: a whole number from 1 to {@link #LAST_SHEET_ROW}. */
+    public static int sheetRow(String text) {
+        int value = wholeNumber(text, 1);
+        if (value > LAST_SHEET_ROW) {
+            throw new IllegalArgumentException("'" + text + "' is past the last row a sheet has, " + LAST_SHEET_ROW);
+        }
+        return value;
+    }
+
+    /** The first and last sheet row of a sample written FIRST-LAST (as in 2-126). */
+    public static int[] rowRange(String text) {
+        String[] parts = text.trim().split("-", -1);
+        if (parts.length == 2) {
+            try {
+                int first = Integer.parseInt(parts[0].trim());
+                int last = Integer.parseInt(parts[1].trim());
+                if (first >= 1 && last >= first && last <= LAST_SHEET_ROW) {
+                    return new int[] {first, last};
+                }
+            } catch (NumberFormatException e) {
+                // Falls through to the message below.
+            }
+        }
+        throw new IllegalArgumentException("give the first and last sheet row of the sample, as in 2-126 (rows 1 to "
+                + LAST_SHEET_ROW + ", the first no later than the last)");
+    }
+
+    /** How a CSV sheet separates its values: comma, semicolon or tab (or the character itself). */
+    public static char delimiter(String text) {
+        return switch (text.trim().toLowerCase(java.util.Locale.ROOT)) {
+            case "comma", "," -> ',';
+            case "semicolon", ";" -> ';';
+            case "tab", "\\t" -> '\t';
+            default -> throw new IllegalArgumentException("give comma, semicolon or tab");
+        };
+    }
+
+    /** A history record's sequence number: a whole number of 1 or more. */
+    public static long sequenceNumber(String text) {
+        try {
+            long value = Long.parseLong(text.trim().replace("_", ""));
+            if (value >= 1) {
+                return value;
+            }
+        } catch (NumberFormatException e) {
+            // Falls through to the message below.
+        }
+        throw new IllegalArgumentException("'" + text + "' is not a record's sequence number (a whole number of 1"
+                + " or more, as the history lists it)");
+    }
 }

@@ -142,6 +142,10 @@ final class Pages {
                 <h2>The lot</h2>
                 <label for="f-plan">Saved plan or plan family</label><select id="f-plan" name="plan"></select>
                 <p class="field-error" data-error-for="plan"></p>
+                <label for="f-sheet-file">Inspection sheet (.xlsx, .xls, .csv)</label>
+                <div class="drop" id="drop">Drop the sheet here, or
+                <input type="file" id="f-sheet-file" name="sheet-file" accept=".xlsx,.xls,.csv"></div>
+                <p class="field-error" data-error-for="sheet-file"></p>
                 """
                 + field("lot", "Lot", "", "(default: from the sheet)")
                 + field("supplier", "Supplier", "", "")
@@ -149,12 +153,23 @@ final class Pages {
                 + "<div class=\"pair\"><div>" + field("lot-size", "Lot size N", "", "") + "</div><div>"
                 + field("received", "Received", "", "(2026-03-14)") + "</div></div>"
                 + field("inspector", "Inspector", "", "")
+                + "<label><input type=\"checkbox\" name=\"record\" value=\"yes\" checked> record the lot in the history</label>"
+                + "<details class=\"more\" id=\"more-sheet\"><summary>Where the sample is on the sheet</summary>"
+                + field("sheet", "Sheet (tab) of the workbook", "", "(default: the first not named 'lot')")
+                + pair(field("rows", "Rows of the sample", "", "(first-last, e.g. 2-126)"),
+                        field("header-row", "Row of the column names", "", "(default: found)"))
+                + field("columns", "Your column names", "", "(role=name, e.g. unit=Serial,result=Outcome)")
+                + field("result-words", "Your words for pass and fail", "", "(e.g. pass=GO,Passed;fail=NOGO,Scrap)")
+                + select("delimiter", "Values in a CSV file separated by", "|found from the column names", "comma|commas",
+                        "semicolon|semicolons", "tab|tabs")
+                + "</details><details class=\"more\" id=\"more-record\"><summary>Correction, confidence, production</summary>"
+                + pair(field("supersedes", "Corrects record number", "", "(from the history)"),
+                        field("confidence", "Confidence of the bounds", "95%", ""))
+                + field("reason", "Why the record is corrected", "", "")
+                + select("production", "The supplier's production", "steady|steady",
+                        "irregular|irregular (ends reduced inspection)")
                 + """
-                <label><input type="checkbox" name="record" value="yes" checked> record the lot in the history</label>
-                <label for="f-sheet">Inspection sheet (.xlsx, .xls, .csv)</label>
-                <div class="drop" id="drop">Drop the sheet here, or
-                <input type="file" id="f-sheet" name="sheet" accept=".xlsx,.xls,.csv"></div>
-                <p class="field-error" data-error-for="sheet"></p>
+                </details>
                 <p class="form-error" role="alert"></p>
                 <button type="submit" id="sentence-button">Sentence the lot</button>
                 <p class="status" id="sentence-status"></p>

@@ -12,12 +12,14 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import lotgate.files.InputFileException;
+import lotgate.history.Identifiers;
 import lotgate.history.StoreException;
 import lotgate.inspection.Columns;
 import lotgate.inspection.LotDetails;
 import lotgate.jobs.JobException;
 import lotgate.jobs.LotReports;
 import lotgate.jobs.SentenceLot;
+import lotgate.jobs.SheetLayout;
 import lotgate.jobs.TypedValues;
 import lotgate.report.results.SentenceRendering;
 import lotgate.sentencing.LotDecision;
@@ -54,20 +56,20 @@ final class SentenceApi {
         } catch (FieldError e) {
             return JsonText.refused(400, "plan", e.getMessage().replace("plan name", "plan"));
         }
+        Given given = given(fields);
         String browserName = fields.get("file");
         try (Uploads.Sheet sheet = uploads.receive(exchange, browserName)) {
-            boolean record = "yes".equals(fields.get("record"));
             String id = newId();
             SentenceLot.Result result;
             try {
-                result = SentenceLot.run(new SentenceLot.Request(plan, sheet.file(), null, Columns.standard(), 0, 0,
-                        details(fields), null, 0.95, record, null, null, "steady", settings.store(),
+                result = SentenceLot.run(new SentenceLot.Request(plan, sheet.file(), given.sheet(), given.columns(),
+                        given.rows()[0], given.rows()[1], details(fields), null, given.confidence(), given.record(),
+                        given.supersedes(), given.reason(), given.production(), settings.store(),
                         SentenceLot.Outputs.NONE));
             } catch (JobException e) {
                 return JsonText.refused(400, field(e.field()), shown(e.getMessage(), sheet, browserName));
             } catch (InputFileException e) {
-                boolean aboutPlan = e.getMessage().startsWith(plan.toString());
-                return JsonText.refused(400, aboutPlan ? "plan" : "sheet", shown(e.getMessage(), sheet, browserName));
+                return JsonText.refused(400, fieldOf(e, plan, fields), shown(e.getMessage(), sheet, browserName));
             } catch (StoreException e) {
                 return JsonText.refused(503, null, e.getMessage());
             }
@@ -193,6 +195,86 @@ final class SentenceApi {
                 Files.readAllBytes(file), file.getFileName().toString());
     }
 
+    /** How to read the sheet and what to record, from the form: each value read as its command option is. */
+    private record Given(String sheet, Columns columns, int[] rows, double confidence, boolean record, Long supersedes,
+            String reason, String production) {
+    }
+
+    private static Given given(Map<String, String> fields) {
+        Integer headerRow = blankToNull(fields.get("header-row")) == null ? null
+                : typed("header-row", fields, TypedValues::sheetRow);
+        String delimiter = blankToNull(fields.get("delimiter"));
+        Character separator = null;
+        if (delimiter != null) {
+            try {
+                separator = TypedValues.delimiter(delimiter);
+            } catch (IllegalArgumentException e) {
+                throw new FieldError("delimiter", "--delimiter " + delimiter + ": " + e.getMessage());
+            }
+        }
+        Columns columns;
+        try {
+            columns = SheetLayout.columns(blankToNull(fields.get("columns")), headerRow, separator,
+                    blankToNull(fields.get("result-words")));
+        } catch (JobException e) {
+            throw new FieldError(field(e.field()), e.getMessage());
+        }
+        String rows = blankToNull(fields.get("rows"));
+        int[] range = {0, 0};
+        if (rows != null) {
+            try {
+                range = TypedValues.rowRange(rows);
+            } catch (IllegalArgumentException e) {
+                throw new FieldError("rows", "--rows " + rows + ": " + e.getMessage());
+            }
+        }
+        double confidence = blankToNull(fields.get("confidence")) == null ? 0.95
+                : typed("confidence", fields, TypedValues::risk);
+        Long supersedes = blankToNull(fields.get("supersedes")) == null ? null
+                : typed("supersedes", fields, TypedValues::sequenceNumber);
+        String production = blankToNull(fields.get("production"));
+        return new Given(blankToNull(fields.get("sheet")), columns, range, confidence, "yes".equals(fields.get("record")),
+                supersedes, blankToNull(fields.get("reason")), production == null ? "steady" : production);
+    }
+
+    /** A field's value read by the parser of its command option, refused in picocli's words for an option value. */
+    private static <T> T typed(String name, Map<String, String> fields, java.util.function.Function<String, T> parser) {
+        try {
+            return parser.apply(fields.get(name));
+        } catch (IllegalArgumentException e) {
+            throw new FieldError(name, "Invalid value for option '--" + name + "': " + e.getMessage());
+        }
+    }
+
+    /**
+     * The field a refused input file is about: the plan, or the sheet's part the user gave (the workbook sheet
+     * named, the header row, the own column names, the rows), else the sheet file itself.
+     */
+    static String fieldOf(InputFileException e, Path plan, Map<String, String> fields) {
+        String message = e.getMessage();
+        if (message.startsWith(plan.toString())) {
+            return "plan";
+        }
+        if (message.contains(": no sheet named '") || message.contains("has no sheets to choose from")) {
+            return "sheet";
+        }
+        if (message.contains("given as the header row")) {
+            return "header-row";
+        }
+        if (message.contains(": the sample rows start at ")) {
+            return "rows";
+        }
+        boolean aboutHeader = message.contains(": no header row: ") || message.contains(": the header row, ")
+                || message.contains("' column in the header row, ");
+        if (aboutHeader && blankToNull(fields.get("columns")) != null) {
+            return "columns";
+        }
+        if (aboutHeader && blankToNull(fields.get("header-row")) != null) {
+            return "header-row";
+        }
+        return "sheet-file";
+    }
+
     private static LotDetails details(Map<String, String> fields) {
         LocalDate day = null;
         String received = blankToNull(fields.get("received"));
@@ -203,22 +285,33 @@ final class SentenceApi {
                 throw new FieldError("received", "--received " + received + ": give a date such as 2026-03-14");
             }
         }
-        Integer lotSize = null;
-        String size = blankToNull(fields.get("lot-size"));
-        if (size != null) {
-            try {
-                lotSize = TypedValues.wholeNumber(size, 1);
-            } catch (IllegalArgumentException e) {
-                throw new FieldError("lot-size", "Invalid value for option '--lot-size': " + e.getMessage());
+        Integer lotSize = blankToNull(fields.get("lot-size")) == null ? null
+                : typed("lot-size", fields, size -> TypedValues.wholeNumber(size, 1));
+        for (String id : new String[] {"lot", "supplier", "part", "inspector"}) {
+            String problem = Identifiers.problem("--" + id, fields.get(id));
+            if (problem != null) {
+                throw new FieldError(id, problem);
             }
         }
         return new LotDetails(blankToNull(fields.get("lot")), blankToNull(fields.get("supplier")),
                 blankToNull(fields.get("part")), lotSize == null ? 0 : lotSize, day, blankToNull(fields.get("inspector")));
     }
 
-    /** A message with the temporary sheet's path put back to the name the user knows it by. */
+    /**
+     * A message with the temporary sheet's path and name (a CSV file's one sheet, its side file) put back to the
+     * name the user knows it by.
+     */
     private static String shown(String message, Uploads.Sheet sheet, String browserName) {
-        return message.replace(sheet.file().toString(), safeName(browserName));
+        String name = sheet.file().getFileName().toString();
+        return message.replace(sheet.file().toString(), safeName(browserName))
+                .replace("'" + name + "'", "'" + safeName(browserName) + "'")
+                .replace(sideFile(sheet.file().getFileName().toString()), sideFile(safeName(browserName)));
+    }
+
+    /** The lot details file a CSV sheet of that name has beside it by default (NAME.lot.csv). */
+    private static String sideFile(String sheetName) {
+        int dot = sheetName.lastIndexOf('.');
+        return (dot < 0 ? sheetName : sheetName.substring(0, dot)) + ".lot.csv";
     }
 
     private static String safeName(String browserName) {
@@ -231,7 +324,7 @@ final class SentenceApi {
         String field = DesignApi.fieldOf(jobField);
         return field == null ? null : switch (field) {
             case "plan-file" -> "plan";
-            case "sheet-file" -> "sheet";
+            case "sheet" -> "sheet-file";
             default -> field;
         };
     }

@@ -94,7 +94,7 @@ class WorkbenchBrowserTest {
             browser.driver.get(served.uri("/sentence").toString());
             browser.waiting().until(d -> !d.findElements(By.cssSelector("#f-plan option[value='arnwick-m8']")).isEmpty());
             Path sheet = Path.of("demo-data", "arnwick-af2611.xlsx").toAbsolutePath();
-            browser.driver.findElement(By.id("f-sheet")).sendKeys(sheet.toString());
+            browser.driver.findElement(By.id("f-sheet-file")).sendKeys(sheet.toString());
             browser.driver.findElement(By.id("sentence-button")).click();
             browser.waiting().until(d -> !d.findElements(By.id("decision")).isEmpty());
             // The demo's lot AF-2611: 2 nonconforming units in 132, within c = 3 (DemoDataTest checks the same).
