@@ -86,7 +86,7 @@
    * "number"), yMin, yMax, series: [{name, x: [], y: [], labels: [] (read-out text), markers, markEvery (a
    * marker on every so many points), step, flags: [] (true: drawn hollow-red, out of limits), points: [{x, y,
    * label}] (design points, drawn large and hollow in the series' shape)}], marks: [{x, label}],
-   * yTicks: [{v, label}]}.
+   * yTicks: [{v, label}], legendNote (a word on the marks, after the legend)}.
    */
   LG.chart = function (host, spec) {
     LEFT = spec.left || 70;
@@ -181,6 +181,7 @@
         legend.appendChild(item);
       }
     });
+    if (spec.legendNote) { legend.appendChild(LG.el("span", { "class": "note", text: spec.legendNote })); }
     host.appendChild(legend);
     var readout = LG.el("div", { "class": "readout", "aria-live": "polite" });
     host.appendChild(readout);

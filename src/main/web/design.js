@@ -56,7 +56,9 @@
       id: curve, title: look.yLabel + " against incoming quality", xLabel: current.curves.xLabel || "incoming quality",
       xShort: "quality", yLabel: look.yLabel,
       xFormat: "percent", yFormat: look.yFormat, yMin: look.yMin, yMax: look.yMax,
-      series: series, marks: current.marks || []
+      series: series, marks: current.marks || [],
+      legendNote: series.some(function (s) { return s.points && s.points.length; })
+        ? "large hollow marks: each class's AQL and LTPD" : null
     });
   }
 

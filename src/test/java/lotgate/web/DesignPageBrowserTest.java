@@ -112,7 +112,7 @@ class DesignPageBrowserTest {
             assertEquals("n 132, c 3", tile(browser, "major"));
             assertEquals("132", tile(browser, "n"));
             browser.waiting().until(d -> d.findElements(By.cssSelector("#curve svg path[data-series]")).size() == 3);
-            List<String> legend = browser.driver.findElements(By.cssSelector("#curve .legend span")).stream()
+            List<String> legend = browser.driver.findElements(By.cssSelector("#curve .legend span:not(.note)")).stream()
                     .map(WebElement::getText).toList();
             assertEquals(List.of("critical: n = 114, c = 0", "major: n = 132, c = 3", "minor: n = 78, c = 4"), legend);
             // Each line has its own dash pattern, so that the classes stay apart in greyscale.
@@ -121,6 +121,8 @@ class DesignPageBrowserTest {
             assertEquals(3, dashes.size());
             // Each class's AQL and LTPD are marked on its own curve.
             assertEquals(6, browser.driver.findElements(By.cssSelector("#curve svg [data-point]")).size());
+            assertEquals("large hollow marks: each class's AQL and LTPD",
+                    browser.driver.findElement(By.cssSelector("#curve .legend .note")).getText());
 
             new Actions(browser.driver).moveToElement(browser.driver.findElement(By.cssSelector("#curve svg")), -150, 0)
                     .perform();
