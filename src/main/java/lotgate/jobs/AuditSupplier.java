@@ -40,12 +40,7 @@ public final class AuditSupplier {
 
     /** Checks the request, reads the supplier's lots, computes the audit and writes the reports asked for. */
     public static Result run(Request request) {
-        for (Path report : request.reports()) {
-            if (!SupplierReport.supported(report)) {
-                throw JobException.invalid("reports", "--report " + report + ": an audit report is a .xlsx"
-                        + " or .html file");
-            }
-        }
+        Checks.supplierReports(request.reports(), "an audit report");
         if (request.from() != null && request.to() != null && request.to().isBefore(request.from())) {
             throw JobException.invalid("to", "--to " + request.to() + " is before --from " + request.from());
         }

@@ -1,14 +1,26 @@
 package lotgate.jobs;
 
 import java.nio.file.Path;
+import java.util.List;
 import lotgate.report.ChartFile;
 import lotgate.report.Percent;
+import lotgate.report.SupplierReport;
 import lotgate.sampling.OcModel;
 import lotgate.sampling.RiskPoints;
 
 /** Trade checks that several jobs make on the values of their requests. */
 public final class Checks {
     private Checks() {
+    }
+
+    /** Refuses a --report of a supplier's audit or ranking that is neither .xlsx nor .html: "an audit report". */
+    static void supplierReports(List<Path> reports, String kind) {
+        for (Path report : reports) {
+            if (!SupplierReport.supported(report)) {
+                throw JobException.invalid("reports", "--report " + report + ": " + kind + " is a .xlsx or .html"
+                        + " file");
+            }
+        }
     }
 
     /** Refuses a fraction nonconforming of 100% or more: such levels only make sense as nonconformities per unit. */

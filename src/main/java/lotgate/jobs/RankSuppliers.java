@@ -5,7 +5,6 @@ import java.util.List;
 import lotgate.history.HistoryStore;
 import lotgate.history.QualityStatistics;
 import lotgate.report.SupplierRanking;
-import lotgate.report.SupplierReport;
 
 /** Ranking every supplier by the upper bound of its process average, then of its rejection rate. */
 public final class RankSuppliers {
@@ -29,12 +28,7 @@ public final class RankSuppliers {
 
     /** Ranks the store's suppliers and writes the reports asked for. */
     public static Result run(Request request) {
-        for (Path report : request.reports()) {
-            if (!SupplierReport.supported(report)) {
-                throw JobException.invalid("reports", "--report " + report + ": a ranking report is a .xlsx"
-                        + " or .html file");
-            }
-        }
+        Checks.supplierReports(request.reports(), "a ranking report");
         List<QualityStatistics.Ranked> ranking;
         try (HistoryStore store = HistoryStore.open(request.store(), false)) {
             ranking = QualityStatistics.rank(store.supplierTotals(), request.confidence());
