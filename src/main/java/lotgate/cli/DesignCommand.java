@@ -93,8 +93,14 @@ final class DesignCommand implements Runnable {
                 description = "What the plan is for, kept in the plan file.")
         String description;
 
-        @Option(names = "--replace", description = "Overwrite an existing plan file.")
-        boolean replace;
+        @ArgGroup(exclusive = false)
+        SharedOptions.Replace replace;
+
+        /** Where to save the plan, or null without --save. */
+        static SaveTarget target(SaveOptions save) {
+            return save == null ? null : new SaveTarget(save.file, save.description, save.replace != null
+                    && save.replace.on);
+        }
     }
 
     @Mixin
@@ -135,7 +141,7 @@ final class DesignCommand implements Runnable {
 
     /** Where to save the plan, or null. */
     SaveTarget saveTarget() {
-        return save == null ? null : new SaveTarget(save.file, save.description, save.replace);
+        return SaveOptions.target(save);
     }
 
     /** Prints that no plan meets the request and fails with its exit code. */

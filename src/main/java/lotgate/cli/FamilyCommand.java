@@ -39,8 +39,8 @@ final class FamilyCommand implements Runnable {
                     + " discontinueLotsOnTightened (-1 turns a limit off).")
     List<String> rules = new java.util.ArrayList<>();
 
-    @Option(names = "--replace", description = "Overwrite an existing family file.")
-    boolean replace;
+    @Mixin
+    SharedOptions.Replace replace;
 
     @Spec
     CommandSpec spec;
@@ -48,7 +48,7 @@ final class FamilyCommand implements Runnable {
     @Override
     public void run() {
         MakePlanFamily.Result result = MakePlanFamily.run(new MakePlanFamily.Request(file, normal, tightened, reduced,
-                switching.rules, rules, replace));
+                switching.rules, rules, replace.on));
         PrintWriter out = spec.commandLine().getOut();
         out.print(FamilyRendering.text(result));
         out.flush();

@@ -26,13 +26,11 @@ final class LeastInspectionCommand implements Runnable {
     @Mixin
     ModelOptions models;
 
-    @Option(names = "--ltpd", paramLabel = "LEVEL", converter = Values.Quality.class,
-            description = "Lot tolerance percent defective to protect against (e.g. 5%%).")
-    Double ltpd;
+    @Mixin
+    SharedOptions.Ltpd ltpd;
 
-    @Option(names = "--beta", paramLabel = "RISK", defaultValue = "10%", converter = Values.Risk.class,
-            description = "Consumer's risk at the LTPD (default ${DEFAULT-VALUE}).")
-    double beta;
+    @Mixin
+    SharedOptions.ConsumerRisk beta;
 
     @Option(names = "--aoql", paramLabel = "LEVEL", converter = Values.Quality.class,
             description = "Instead of --ltpd: the largest average outgoing quality allowed (e.g. 2%%).")
@@ -50,9 +48,9 @@ final class LeastInspectionCommand implements Runnable {
 
     @Override
     public void run() {
-        SaveTarget target = save == null ? null : new SaveTarget(save.file, save.description, save.replace);
+        SaveTarget target = DesignCommand.SaveOptions.target(save);
         DesignLeastInspection.Result result = DesignLeastInspection.run(new DesignLeastInspection.Request(
-                models.lotSize, ltpd, beta, aoql, processAverage, models.named(), target));
+                models.lotSize, ltpd.level, beta.beta, aoql, processAverage, models.named(), target));
         format.print(result, LeastInspectionRendering::text, LeastInspectionRendering::json,
                 LeastInspectionRendering::csv);
     }

@@ -97,7 +97,7 @@ final class LookupCommand implements Runnable {
 
     @Override
     public void run() {
-        SaveTarget target = save == null ? null : new SaveTarget(save.file, save.description, save.replace);
+        SaveTarget target = DesignCommand.SaveOptions.target(save);
         PlanFromTables.FamilyTarget familyTarget = family == null ? null
                 : new PlanFromTables.FamilyTarget(family.file, family.description, family.replace);
         PlanFromTables.Result result = PlanFromTables.run(new PlanFromTables.Request(models.lotSize, level, aql,

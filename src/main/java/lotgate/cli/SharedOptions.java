@@ -153,6 +153,12 @@ final class SharedOptions {
         Integer c;
     }
 
+    /** --replace: overwrite an existing file that the command would write (a plan, a plan family). */
+    static final class Replace {
+        @Option(names = "--replace")
+        boolean on;
+    }
+
     /** --switching: the edition of the switching rules, or (where a command says so) a plan family's rules. */
     static final class Switching {
         @Option(names = "--switching", paramLabel = "RULES", defaultValue = "current")
