@@ -40,6 +40,12 @@ class SqliteLibraryTest {
     }
 
     @Test
+    void thePlatformFolderIsTheOneTheDriverItselfWouldChoose() {
+        // The reference is the driver's own answer (sqlite-jdbc's OSInfo), which starts a process to find it.
+        assertEquals(org.sqlite.util.OSInfo.getNativeLibFolderPathForCurrentOS(), SqliteLibrary.platformFolder());
+    }
+
+    @Test
     void noCacheFolderLeavesTheDriverToItself() throws Exception {
         assertEquals(null, SqliteLibrary.cached(null));
     }
