@@ -11,6 +11,15 @@ import java.util.HexFormat;
  * keys sorted at every level, no white space, numbers as Jackson writes Java doubles and ints, UTF-8.
  */
 public final class CanonicalJson {
+    /** One digest per thread, reset by each use: looking the algorithm up costs an import of many lots. */
+    private static final ThreadLocal<MessageDigest> SHA_256 = ThreadLocal.withInitial(() -> {
+        try {
+            return MessageDigest.getInstance("SHA-256");
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException(e);
+        }
+    });
+
     private CanonicalJson() {
     }
 
@@ -20,11 +29,6 @@ public final class CanonicalJson {
 
     /** "sha256:" and the SHA-256 of a text's UTF-8 bytes, in hexadecimal. */
     public static String sha256(String text) {
-        try {
-            byte[] digest = MessageDigest.getInstance("SHA-256").digest(text.getBytes(StandardCharsets.UTF_8));
-            return HexFormat.of().formatHex(digest);
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException(e);
-        }
+        return HexFormat.of().formatHex(SHA_256.get().digest(text.getBytes(StandardCharsets.UTF_8)));
     }
 }

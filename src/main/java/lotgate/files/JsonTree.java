@@ -14,8 +14,8 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.io.StringWriter;
 import java.io.UncheckedIOException;
+import java.util.Arrays;
 import java.util.Map;
-import java.util.TreeMap;
 
 /**
  * JSON text to Jackson trees and back through Jackson's streaming parser and generator alone. The
@@ -136,15 +136,22 @@ public final class JsonTree {
         switch (node.getNodeType()) {
             case OBJECT -> {
                 out.writeStartObject();
-                Iterable<Map.Entry<String, JsonNode>> fields = node.properties();
                 if (sorted) {
-                    Map<String, JsonNode> byName = new TreeMap<>();
-                    fields.forEach(e -> byName.put(e.getKey(), e.getValue()));
-                    fields = byName.entrySet();
-                }
-                for (Map.Entry<String, JsonNode> field : fields) {
-                    out.writeFieldName(field.getKey());
-                    write(out, field.getValue(), sorted);
+                    String[] names = new String[node.size()];
+                    int named = 0;
+                    for (Map.Entry<String, JsonNode> field : node.properties()) {
+                        names[named++] = field.getKey();
+                    }
+                    Arrays.sort(names);
+                    for (String name : names) {
+                        out.writeFieldName(name);
+                        write(out, node.get(name), true);
+                    }
+                } else {
+                    for (Map.Entry<String, JsonNode> field : node.properties()) {
+                        out.writeFieldName(field.getKey());
+                        write(out, field.getValue(), false);
+                    }
                 }
                 out.writeEndObject();
             }
