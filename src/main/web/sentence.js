@@ -101,18 +101,28 @@
     });
   }
 
+  /** Asks for the plan's answer after the units so far; an answer overtaken by a later unit's is dropped. */
+  var asked = 0;
   function judge() {
     drawUnits();
-    var state = LG.clear(document.getElementById("bench-state"));
-    if (!units.length) { LG.showErrors(bench, []); return; }
+    var ask = ++asked;
+    var said = units.length;
+    var state = document.getElementById("bench-state");
+    if (!said) {
+      LG.clear(state).removeAttribute("data-units");
+      LG.showErrors(bench, []);
+      return;
+    }
     var body = "plan=" + encodeURIComponent(planSelect.value) + "&units=" + units.join(",")
       + "&supplier=" + encodeURIComponent(form.elements.supplier.value)
       + "&part=" + encodeURIComponent(form.elements.part.value);
     LG.post("/api/bench", body).then(function (reply) {
+      if (ask !== asked) { return; }
+      LG.clear(state).setAttribute("data-units", String(said));
       if (!reply.ok) { LG.showErrors(bench, reply.errors); return; }
       LG.showErrors(bench, []);
       state.appendChild(LG.el("div", { "class": "verdict " + reply.decision, id: "bench-decision", text: reply.headline }));
-      state.appendChild(LG.el("p", { text: reply.say }));
+      state.appendChild(LG.el("p", { id: "bench-say", text: reply.say }));
     });
   }
 

@@ -16,13 +16,17 @@ import lotgate.history.Identifiers;
 import lotgate.history.StoreException;
 import lotgate.inspection.Columns;
 import lotgate.inspection.LotDetails;
+import lotgate.jobs.InspectAtBench;
 import lotgate.jobs.JobException;
 import lotgate.jobs.LotReports;
 import lotgate.jobs.SentenceLot;
 import lotgate.jobs.SheetLayout;
 import lotgate.jobs.TypedValues;
+import lotgate.plan.PlanFamily;
+import lotgate.report.results.BenchRendering;
 import lotgate.report.results.SentenceRendering;
 import lotgate.sentencing.LotDecision;
+import lotgate.sentencing.Stopping;
 
 /**
  * Sentencing answers: a lot from an uploaded sheet, recorded in the history store unless the user says
@@ -111,7 +115,11 @@ final class SentenceApi {
         }
     }
 
-    /** Bench entry: the units said so far, judged by the plan as a sheet of that many units would be. */
+    /**
+     * Bench entry: the units said so far, judged unit by unit by the bench job (a plan family's variant, which
+     * the supplier's history chooses, by sentencing them as a sheet); the answer is for the unit the plan
+     * decided at, or the last.
+     */
     Reply bench(Map<String, String> fields) throws IOException {
         Path plan;
         try {
@@ -131,6 +139,35 @@ final class SentenceApi {
         if (counts.isEmpty()) {
             return JsonText.refused(400, "units", "say the first unit: conforming or nonconforming");
         }
+        if (PlanFamily.isFamily(plan)) {
+            return familyBench(plan, counts, fields);
+        }
+        InspectAtBench.Bench bench;
+        try {
+            bench = InspectAtBench.start(new InspectAtBench.Request(plan, null, "U"));
+        } catch (JobException | InputFileException e) {
+            return JsonText.refused(400, "plan", e.getMessage());
+        }
+        InspectAtBench.State state = bench.state();
+        for (int count : counts) {
+            bench = bench.with(new InspectAtBench.Unit(count, ""));
+            state = bench.state();
+            if (state.decided()) {
+                break;
+            }
+        }
+        String say = "Unit " + state.units() + ": " + state.found() + " found; " + BenchRendering.standing(state);
+        if (!state.decided()) {
+            return JsonText.ok(Map.of("decision", "pending", "headline", "Go on", "say", say));
+        }
+        boolean accepted = state.decision().verdict() == Stopping.Verdict.ACCEPT;
+        return JsonText.ok(Map.of("decision", accepted ? "accept" : "reject",
+                "headline", accepted ? "ACCEPT the lot" : "REJECT the lot",
+                "say", say + ". Sentence the lot with its sheet to record it."));
+    }
+
+    /** The bench for a plan family: the units sentenced as a sheet of that many, under the supplier's variant. */
+    private Reply familyBench(Path plan, List<Integer> counts, Map<String, String> fields) throws IOException {
         boolean byCount = counts.stream().anyMatch(c -> c > 1);
         StringBuilder sheetText = new StringBuilder(byCount ? "unit,major\n" : "unit,result\n");
         for (int i = 0; i < counts.size(); i++) {

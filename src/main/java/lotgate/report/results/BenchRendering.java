@@ -28,14 +28,18 @@ public final class BenchRendering {
     public static String afterUnit(InspectAtBench.State state) {
         String head = String.format(Locale.ROOT, "  unit %-5d %-5s found %-4d ", state.units(), state.countsUnits()
                 ? (state.last().count() > 0 ? "fail" : "pass") : String.valueOf(state.last().count()), state.found());
+        return head + standing(state) + "\n";
+    }
+
+    /** Where the plan stands after the last unit: the decision with its reason, or until when to inspect on. */
+    public static String standing(InspectAtBench.State state) {
         Stopping.Point point = state.decision();
         if (point == null) {
-            return head + "inspect on: " + until(state.plan(), state.units(), state.found()) + "\n";
+            return "inspect on: " + until(state.plan(), state.units(), state.found());
         }
-        return head + (point.verdict() == Stopping.Verdict.ACCEPT
-                ? "ACCEPT the lot (" + point.step() + ": " + state.found() + " is at most " + point.acceptanceNumber()
-                : "REJECT the lot (" + point.step() + ": " + state.found() + " reaches " + point.rejectionNumber())
-                + ")\n";
+        return point.verdict() == Stopping.Verdict.ACCEPT
+                ? "ACCEPT the lot (" + point.step() + ": " + state.found() + " is at most " + point.acceptanceNumber() + ")"
+                : "REJECT the lot (" + point.step() + ": " + state.found() + " reaches " + point.rejectionNumber() + ")";
     }
 
     /** The line after 'undo'. */
