@@ -68,12 +68,8 @@ final class DesignCommand implements Runnable {
                     + " n is judged on the first units of the sample.")
     List<String> classSpecs = new ArrayList<>();
 
-    @Option(names = "--scheme", paramLabel = "SCHEME", defaultValue = "single",
-            description = "The kind of plan: single (the default), double (a second sample when the first does not"
-                    + " decide; designed for the smallest average sample number), multiple (up to 7 stages, given"
-                    + " with --stage), sequential (item by item, Wald's lines for both risks) or variables (by"
-                    + " measurements against specification limits).")
-    String scheme;
+    @Mixin
+    SharedOptions.Scheme schemes;
 
     @Mixin
     SchemeDesign.Options staged;
@@ -110,6 +106,7 @@ final class DesignCommand implements Runnable {
     public void run() {
         OcModel model = models.resolve(spec);
         int lotSize = models.lotSizeOrZero();
+        String scheme = schemes.name;
         if (!List.of("single", "double", "multiple", "sequential", "variables").contains(scheme)) {
             throw new ParameterException(spec.commandLine(), "--scheme " + scheme + ": give single, double, multiple,"
                     + " sequential or variables");

@@ -21,6 +21,12 @@ import picocli.CommandLine.Option;
                         + " --process-average are required.",
                 "",
                 "The plan 'design' gives for the same protection is shown beside it, with its ATI.",
+                "",
+                "--scheme double finds the double plan with the least ATI = n1 Pa1 + (n1 + n2) Pa2 + N (1 - Pa) under"
+                        + " the --ltpd protection, in Dodge and Romig's family: n1 and n2 free (n1 + n2 at most N),"
+                        + " c1 < c2, and the first sample rejects only when it finds more than c2 (r1 = c2 + 1). The"
+                        + " single least-inspection plan is shown beside it, with the inspection the double plan"
+                        + " saves.",
                 ""})
 final class LeastInspectionCommand implements Runnable {
     @Mixin
@@ -40,6 +46,9 @@ final class LeastInspectionCommand implements Runnable {
             description = "The supplier's usual quality (e.g. 0.5%%), where the inspection is counted.")
     Double processAverage;
 
+    @Mixin
+    SharedOptions.Scheme schemes;
+
     @ArgGroup(exclusive = false)
     DesignCommand.SaveOptions save;
 
@@ -50,7 +59,7 @@ final class LeastInspectionCommand implements Runnable {
     public void run() {
         SaveTarget target = DesignCommand.SaveOptions.target(save);
         DesignLeastInspection.Result result = DesignLeastInspection.run(new DesignLeastInspection.Request(
-                models.lotSize, ltpd.level, beta.beta, aoql, processAverage, models.named(), target));
+                models.lotSize, ltpd.level, beta.beta, aoql, processAverage, models.named(), target, schemes.name));
         format.print(result, LeastInspectionRendering::text, LeastInspectionRendering::json,
                 LeastInspectionRendering::csv);
     }

@@ -47,9 +47,8 @@ final class LookupCommand implements Runnable {
             description = "normal (the default), tightened or reduced inspection.")
     String severity;
 
-    @Option(names = "--scheme", paramLabel = "SCHEME", defaultValue = "single",
-            description = "single (the default) or double sampling.")
-    String scheme;
+    @Mixin
+    SharedOptions.Scheme schemes;
 
     @ArgGroup(exclusive = false)
     DesignCommand.SaveOptions save;
@@ -101,7 +100,7 @@ final class LookupCommand implements Runnable {
         PlanFromTables.FamilyTarget familyTarget = family == null ? null
                 : new PlanFromTables.FamilyTarget(family.file, family.description, family.replace);
         PlanFromTables.Result result = PlanFromTables.run(new PlanFromTables.Request(models.lotSize, level, aql,
-                severity, scheme, models.named(), target, familyTarget));
+                severity, schemes.name, models.named(), target, familyTarget));
         format.print(result, TableRendering::text, TableRendering::json, TableRendering::csv);
     }
 }

@@ -71,7 +71,7 @@ final class SchemeDesign {
     }
 
     static void run(DesignCommand command, OcModel model, int lotSize) {
-        String scheme = command.scheme;
+        String scheme = command.schemes.name;
         checkOptions(command, scheme);
         boolean isDouble = scheme.equals("double");
         List<Stage> stages = scheme.equals("sequential") ? List.of() : stages(command);

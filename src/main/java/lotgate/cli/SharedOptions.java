@@ -81,6 +81,12 @@ final class SharedOptions {
         Path file;
     }
 
+    /** --scheme: the kind of plan (single, double, ...); each command checks the kinds it offers. */
+    static final class Scheme {
+        @Option(names = "--scheme", paramLabel = "SCHEME", defaultValue = "single")
+        String name;
+    }
+
     /** --record: the lot's decision record as a JSON file. */
     static final class RecordFile {
         @Option(names = "--record", paramLabel = "FILE")

@@ -3,7 +3,9 @@ package lotgate.jobs;
 import lotgate.plan.PlanFormat;
 import lotgate.plan.SavedPlan;
 import lotgate.report.Percent;
+import lotgate.sampling.DoublePlan;
 import lotgate.sampling.LeastInspectionDesigner;
+import lotgate.sampling.LeastInspectionDoubleSearch;
 import lotgate.sampling.OcModel;
 import lotgate.sampling.RiskPoints;
 import lotgate.sampling.SingleDesign;
@@ -21,10 +23,28 @@ public final class DesignLeastInspection {
 
     /**
      * The lot size (null: not given), the LTPD with the consumer's risk, or the AOQL target (exactly one of the
-     * two levels), the process average, the model's name (null: hypergeometric for the lot), where to save.
+     * two levels), the process average, the model's name (null: hypergeometric for the lot), where to save, and
+     * the scheme: single (or null) or double (LTPD protection only).
      */
     public record Request(Integer lotSize, Double ltpd, double beta, Double aoql, Double processAverage, String model,
-            SaveTarget save) {
+            SaveTarget save, String scheme) {
+        /** A request for the single plan. */
+        public Request(Integer lotSize, Double ltpd, double beta, Double aoql, Double processAverage, String model,
+                SaveTarget save) {
+            this(lotSize, ltpd, beta, aoql, processAverage, model, save, null);
+        }
+
+        /** Whether the double plan is asked for. */
+        public boolean isDouble() {
+            return "double".equals(scheme);
+        }
+    }
+
+    /**
+     * The double plan found (no plan: screening every unit costs no more) with its figures, and its LTPD at a
+     * consumer's risk of 5%.
+     */
+    public record DoubleFound(LeastInspectionDoubleSearch.Result found, double ltpd5) {
     }
 
     /**
@@ -36,11 +56,13 @@ public final class DesignLeastInspection {
     }
 
     /**
-     * The model, the plan found with its figures (no plan: screening every unit costs no more), the ATI of the
-     * plan at the LTPD, the plan {@code design} gives for comparison (or null), and the plan as saved (or null).
+     * The model, the single plan found with its figures (no plan: screening every unit costs no more), its LTPD at
+     * a consumer's risk of 5%, the plan {@code design} gives for comparison (or null), the plan as saved (or null),
+     * and, for the double scheme, the double plan found (else null), which is then the plan saved; the single plan
+     * is its comparison.
      */
     public record Result(Request request, OcModel model, LeastInspectionDesigner.Result found, double ltpd5,
-            Comparison comparison, SavedPlan saved) {
+            Comparison comparison, SavedPlan saved, DoubleFound doubleFound) {
         public int lotSize() {
             return request.lotSize();
         }
@@ -71,6 +93,14 @@ public final class DesignLeastInspection {
         if ((request.ltpd() == null) == (request.aoql() == null)) {
             throw JobException.invalid("ltpd", "give either --ltpd (lot quality protection) or --aoql (average"
                     + " outgoing quality protection)");
+        }
+        if (request.scheme() != null && !request.scheme().equals("single") && !request.isDouble()) {
+            throw JobException.invalid("scheme", "--scheme " + request.scheme() + ": least-inspection plans are"
+                    + " single or double");
+        }
+        if (request.isDouble() && request.aoql() != null) {
+            throw JobException.invalid("scheme", "--scheme double: the double least-inspection plan is designed for"
+                    + " LTPD protection; give --ltpd instead of --aoql");
         }
         if (request.processAverage() == null) {
             throw JobException.invalid("processAverage", "give the supplier's --process-average: the plan"
@@ -106,12 +136,15 @@ public final class DesignLeastInspection {
         LeastInspectionDesigner.Result found = request.ltpd() != null
                 ? designer.forLtpd(request.ltpd(), request.beta(), average)
                 : designer.forAoql(request.aoql(), average);
+        if (request.isDouble()) {
+            return runDouble(request, model, lotSize, found);
+        }
         if (found.inspectEveryUnit()) {
             if (request.save() != null) {
                 throw new JobException(JobException.Kind.INVALID_REQUEST, "save", "--save: no sampling plan inspects"
                         + " fewer units on average than screening every unit of the lot, so there is no plan to save");
             }
-            return new Result(request, model, found, Double.NaN, null, null);
+            return new Result(request, model, found, Double.NaN, null, null, null);
         }
         SinglePlan plan = found.plan();
         var oc = new lotgate.sampling.OperatingCharacteristic(plan, model, lotSize);
@@ -119,19 +152,50 @@ public final class DesignLeastInspection {
         double ltpdPoint = request.ltpd() != null ? request.ltpd() : found.ltpd10();
         double beta = request.ltpd() != null ? request.beta() : 0.10;
         Comparison comparison = compare(model, lotSize, average, ltpdPoint, beta);
-        SavedPlan saved = null;
-        if (request.save() != null) {
-            RiskPoints points;
-            try {
-                points = new RiskPoints(average, Math.max(plan.rejection(model, model.producerPoint(average)),
-                        1e-300), ltpdPoint, beta);
-            } catch (IllegalArgumentException e) {
-                throw JobException.invalid("save", "--save: the plan cannot be saved: " + e.getMessage());
-            }
-            saved = request.save().save((name, now) -> PlanFormat.seal(name, request.save().description(), now, plan,
-                    model, lotSize, points, SavedPlan.LEAST_INSPECTION));
+        SavedPlan saved = save(request, model, lotSize, plan, ltpdPoint, beta);
+        return new Result(request, model, found, ltpd5, comparison, saved, null);
+    }
+
+    /** The double plan under the LTPD protection, beside the single least-inspection plan. */
+    private static Result runDouble(Request request, OcModel model, int lotSize, LeastInspectionDesigner.Result single) {
+        LeastInspectionDoubleSearch.Result found;
+        try {
+            found = new LeastInspectionDoubleSearch(model, lotSize).forLtpd(request.ltpd(), request.beta(),
+                    request.processAverage());
+        } catch (LeastInspectionDoubleSearch.OverBudget e) {
+            throw JobException.invalid("scheme", "--scheme double: " + e.getMessage() + "; use the single plan");
         }
-        return new Result(request, model, found, ltpd5, comparison, saved);
+        double singleLtpd5 = single.inspectEveryUnit() ? Double.NaN
+                : new lotgate.sampling.OperatingCharacteristic(single.plan(), model, lotSize).qualityAt(0.05);
+        if (found.inspectEveryUnit()) {
+            if (request.save() != null) {
+                throw new JobException(JobException.Kind.INVALID_REQUEST, "save", "--save: no double plan inspects"
+                        + " fewer units on average than screening every unit of the lot, so there is no plan to save");
+            }
+            return new Result(request, model, single, singleLtpd5, null, null, new DoubleFound(found, Double.NaN));
+        }
+        DoublePlan plan = found.plan();
+        double ltpd5 = new lotgate.sampling.OperatingCharacteristic(plan, model, lotSize).qualityAt(0.05);
+        SavedPlan saved = save(request, model, lotSize, plan, request.ltpd(), request.beta());
+        return new Result(request, model, single, singleLtpd5, null, saved, new DoubleFound(found, ltpd5));
+    }
+
+    /** Saves the plan when asked, with the process average and the LTPD as its design points. */
+    private static SavedPlan save(Request request, OcModel model, int lotSize, lotgate.sampling.Plan plan,
+            double ltpdPoint, double beta) {
+        if (request.save() == null) {
+            return null;
+        }
+        double average = request.processAverage();
+        RiskPoints points;
+        try {
+            points = new RiskPoints(average, Math.max(plan.rejection(model, model.producerPoint(average)), 1e-300),
+                    ltpdPoint, beta);
+        } catch (IllegalArgumentException e) {
+            throw JobException.invalid("save", "--save: the plan cannot be saved: " + e.getMessage());
+        }
+        return request.save().save((name, now) -> PlanFormat.seal(name, request.save().description(), now, plan,
+                model, lotSize, points, SavedPlan.LEAST_INSPECTION));
     }
 
     private static Comparison compare(OcModel model, int lotSize, double average, double ltpd, double beta) {

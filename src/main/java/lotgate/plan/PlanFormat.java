@@ -400,7 +400,8 @@ public final class PlanFormat {
             Set<String> methods = switch (plan.scheme()) {
                 case "single" -> Set.of(SavedPlan.SMALLEST_SAMPLE, SavedPlan.FIXED_ACCEPTANCE, SavedPlan.GIVEN,
                         SavedPlan.ATTRIBUTE_TABLES, SavedPlan.LEAST_INSPECTION);
-                case "double" -> Set.of(SavedPlan.SMALLEST_ASN, SavedPlan.GIVEN, SavedPlan.ATTRIBUTE_TABLES);
+                case "double" -> Set.of(SavedPlan.SMALLEST_ASN, SavedPlan.GIVEN, SavedPlan.ATTRIBUTE_TABLES,
+                        SavedPlan.LEAST_INSPECTION);
                 case "sequential" -> Set.of(SavedPlan.WALD);
                 case "variables" -> Set.of(SavedPlan.SMALLEST_SAMPLE, SavedPlan.GIVEN);
                 default -> Set.of(SavedPlan.GIVEN);

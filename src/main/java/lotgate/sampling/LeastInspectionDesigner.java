@@ -125,7 +125,7 @@ public final class LeastInspectionDesigner {
      * golden-section search (AOQ rises from 0 to one peak and falls), over whole numbers of nonconforming
      * units for a finite lot.
      */
-    OperatingCharacteristic.Aoql aoql(SinglePlan plan) {
+    OperatingCharacteristic.Aoql aoql(Plan plan) {
         OperatingCharacteristic oc = new OperatingCharacteristic(plan, model, lotSize);
         double top = oc.qualityAt(1e-12);
         if (model instanceof OcModel.Hypergeometric) {

@@ -8,6 +8,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -133,6 +134,68 @@ class TableCommandsTest {
         assertEquals(2, average.exitCode());
         assertEquals("lotgate: give the supplier's --process-average: the plan inspects least at that quality (see"
                 + " 'lotgate least-inspection --help')\n", average.err());
+        assertFalse(Files.exists(folder.resolve("none.json")));
+    }
+
+    @Test
+    void leastInspectionDoubleGivesTheDoublePlanBesideTheSingleOne() throws Exception {
+        Cli.Result text = Cli.run("least-inspection", "-N", "5000", "--ltpd", "5%", "-p", "0.5%", "--scheme",
+                "double");
+        assertEquals(0, text.exitCode(), text.err());
+        assertTrue(text.out().contains("First sample:  inspect n1 = 51 units. Accept with up to c1 = 0 nonconforming"
+                + " units; reject at r1 = 5 or more."), text.out());
+        assertTrue(text.out().contains("88.8 units per lot (of 5000)"), text.out());
+        assertTrue(text.out().contains("The single least-inspection plan for the same protection is n = 131, c = 3:"),
+                text.out());
+        JsonNode node = json(Cli.run("least-inspection", "-N", "5000", "--ltpd", "5%", "-p", "0.5%", "--scheme",
+                "double", "-f", "json"));
+        assertEquals("double", node.path("scheme").asText());
+        JsonNode stages = node.path("stages");
+        assertEquals(2, stages.size());
+        assertEquals(List.of(51, 0, 5), List.of(stages.get(0).path("n").asInt(), stages.get(0).path("c").asInt(),
+                stages.get(0).path("r").asInt()));
+        assertEquals(List.of(134, 4, 5), List.of(stages.get(1).path("n").asInt(), stages.get(1).path("c").asInt(),
+                stages.get(1).path("r").asInt()));
+        // Exact rationals, Python 3.11.7 (src/test/python/double_least_inspection_reference.py): ATI
+        // 88.822472388459289, P(accept | LTPD 5%) 0.099382429780347503, and n2 = 133 accepts 0.10038 (not enough).
+        assertEquals(88.822472388459289, node.path("ati").asDouble(), 1e-9);
+        for (String field : List.of("asn", "acceptanceAtAverage", "firstSampleAcceptanceAtAverage", "ltpd10", "ltpd5",
+                "aoql", "aoqlAt", "plansCompared")) {
+            assertTrue(node.path(field).isNumber(), field + " in " + node);
+        }
+        JsonNode single = node.path("singleComparison");
+        assertEquals(131, single.path("n").asInt());
+        assertEquals(3, single.path("c").asInt());
+        // Exact rationals, Python 3.11 (src/test/python/tables_reference.py): the single plan's ATI 149.079...
+        assertEquals(149.07929926040518 - 88.822472388459289, single.path("atiSaved").asDouble(), 1e-8);
+    }
+
+    @Test
+    void theSavedDoubleLeastInspectionPlanSentencesALot() throws Exception {
+        Path plan = folder.resolve("least-double.json");
+        Cli.Result saved = Cli.run("least-inspection", "-N", "5000", "--ltpd", "5%", "-p", "0.5%", "--scheme",
+                "double", "--save", plan.toString());
+        assertEquals(0, saved.exitCode(), saved.err());
+        Cli.Result decided = Cli.run("sentence", plan.toString(), sheet("first.csv", 51).toString(), "--lot", "D-1",
+                "--no-record");
+        assertEquals(0, decided.exitCode(), decided.err());
+        assertTrue(decided.out().startsWith("ACCEPT lot D-1"), decided.out());
+        assertTrue(decided.out().contains("double plan: n1 = 51, c1 = 0, r1 = 5; n2 = 134, c2 = 4"), decided.out());
+    }
+
+    @Test
+    void leastInspectionDoubleRefusesAnAoqlProtectionAndAnUnknownScheme() {
+        Cli.Result aoql = Cli.run("least-inspection", "-N", "5000", "--aoql", "2%", "-p", "0.5%", "--scheme", "double",
+                "--save", folder.resolve("none.json").toString());
+        assertEquals(2, aoql.exitCode());
+        assertEquals("lotgate: --scheme double: the double least-inspection plan is designed for LTPD protection; give"
+                + " --ltpd instead of --aoql (see 'lotgate least-inspection --help')\n", aoql.err());
+        Cli.Result unknown = Cli.run("least-inspection", "-N", "5000", "--ltpd", "2%", "-p", "0.5%", "--scheme",
+                "triple");
+        assertEquals(2, unknown.exitCode());
+        assertEquals("lotgate: --scheme triple: least-inspection plans are single or double (see 'lotgate"
+                + " least-inspection --help')\n", unknown.err());
+        assertEquals("", unknown.out());
         assertFalse(Files.exists(folder.resolve("none.json")));
     }
 

@@ -10,7 +10,10 @@ import lotgate.report.CsvTable;
 import lotgate.report.Json;
 import lotgate.report.Percent;
 import lotgate.report.PlanWording;
+import lotgate.plan.PlanFormat;
+import lotgate.sampling.DoublePlan;
 import lotgate.sampling.LeastInspectionDesigner;
+import lotgate.sampling.LeastInspectionDoubleSearch;
 import lotgate.sampling.OcModel;
 import lotgate.sampling.SinglePlan;
 
@@ -21,6 +24,9 @@ public final class LeastInspectionRendering {
 
     /** The plan as text, with its ATI and protection and the plan {@code design} gives for comparison. */
     public static String text(DesignLeastInspection.Result result) {
+        if (result.doubleFound() != null) {
+            return doubleText(result);
+        }
         return Text.of(out -> {
             DesignLeastInspection.Request request = result.request();
             OcModel model = result.model();
@@ -77,6 +83,62 @@ public final class LeastInspectionRendering {
         });
     }
 
+    /** The double plan as text, with its ATI and protection and the single least-inspection plan beside it. */
+    private static String doubleText(DesignLeastInspection.Result result) {
+        return Text.of(out -> {
+            DesignLeastInspection.Request request = result.request();
+            OcModel model = result.model();
+            int lotSize = result.lotSize();
+            LeastInspectionDoubleSearch.Result found = result.doubleFound().found();
+            String unit = model.countsUnits() ? "" : " per unit";
+            out.println("Least-inspection double plan for rectifying inspection (rejected lots screened 100%)");
+            out.println("  " + PlanWording.model(model, lotSize));
+            out.println("  protection: " + protection(result) + "; process average " + Percent.level(
+                    request.processAverage()) + unit);
+            out.println("  searched: every n1 and n2 (n1 + n2 at most the lot), c1 < c2, r1 = c2 + 1; "
+                    + found.plansCompared() + " plans evaluated, exact within that family");
+            out.println();
+            if (found.inspectEveryUnit()) {
+                out.println("  No double plan inspects fewer units on average than screening every unit: inspect"
+                        + " every unit of the lot (100% inspection), ATI " + lotSize + ".");
+                return;
+            }
+            DoublePlan plan = found.plan();
+            out.printf("  First sample:  inspect n1 = %d units. Accept with up to c1 = %d %s; reject at r1 = %d or"
+                    + " more.%n", plan.n1(), plan.c1(), PlanWording.counted(model, plan.c1()), plan.r1());
+            out.printf("  Second sample: otherwise inspect n2 = %d more. Accept with up to c2 = %d over both samples;"
+                    + " reject at %d or more.%n", plan.n2(), plan.c2(), plan.c2() + 1);
+            out.println("  Screen the rest of every rejected lot.");
+            out.println();
+            String row = "    %-44s %s%n";
+            out.printf(row, "ATI at the process average", String.format(Locale.ROOT, "%.1f units per lot (of %d)",
+                    found.ati(), lotSize));
+            out.printf(row, "ASN at the process average", String.format(Locale.ROOT, "%.1f units", found.asn()));
+            out.printf(row, "P(accept) at the process average", Percent.probability(found.acceptanceAtAverage()));
+            out.printf(row, "  of which on the first sample", Percent.probability(found.firstAcceptance()));
+            out.printf(row, "LTPD at a consumer's risk of 10%", Percent.measured(found.ltpd10()) + unit);
+            out.printf(row, "LTPD at a consumer's risk of 5%", Percent.measured(result.doubleFound().ltpd5()) + unit);
+            out.printf(row, "AOQL", Percent.measured(found.aoql()) + unit + " at incoming "
+                    + Percent.measured(found.aoqlAt()) + unit);
+            out.println();
+            LeastInspectionDesigner.Result single = result.found();
+            if (single.inspectEveryUnit()) {
+                out.println("  No single plan inspects fewer units on average than screening every unit.");
+            } else {
+                out.println("  The single least-inspection plan for the same protection is n = " + single.plan().n()
+                        + ", c = " + single.plan().c() + ":");
+                out.println(String.format(Locale.ROOT, "    ATI %.1f units at the process average; the double plan"
+                        + " saves %.1f units per lot (%s).", single.ati(), single.ati() - found.ati(),
+                        Percent.measured((single.ati() - found.ati()) / single.ati())));
+            }
+            if (result.saved() != null) {
+                out.println();
+                out.println("  Saved " + request.save().file() + " (fingerprint " + result.saved().shortFingerprint()
+                        + ")");
+            }
+        });
+    }
+
     private static String protection(DesignLeastInspection.Result result) {
         DesignLeastInspection.Request request = result.request();
         String unit = result.model().countsUnits() ? "" : " per unit";
@@ -88,6 +150,9 @@ public final class LeastInspectionRendering {
 
     /** The plan as JSON: n, c, rejectionNumber, the ATI and the protection figures. */
     public static ObjectNode json(DesignLeastInspection.Result result) {
+        if (result.doubleFound() != null) {
+            return doubleJson(result);
+        }
         DesignLeastInspection.Request request = result.request();
         LeastInspectionDesigner.Result found = result.found();
         ObjectNode node = Json.object();
@@ -132,8 +197,58 @@ public final class LeastInspectionRendering {
         return node;
     }
 
+    /**
+     * The double plan as JSON: the request, {@code scheme} "double" and {@code stages} (each n, c, r) as
+     * {@code design} gives them, the figures at the process average, and the single least-inspection plan beside it.
+     */
+    private static ObjectNode doubleJson(DesignLeastInspection.Result result) {
+        DesignLeastInspection.Request request = result.request();
+        LeastInspectionDoubleSearch.Result found = result.doubleFound().found();
+        ObjectNode node = Json.object();
+        node.put("model", result.model().name());
+        node.put("lotSize", result.lotSize());
+        node.put("protection", "ltpd");
+        node.put("ltpd", request.ltpd());
+        node.put("beta", request.beta());
+        node.put("processAverage", request.processAverage());
+        node.put("planFound", !found.inspectEveryUnit());
+        node.put("fullInspection", found.inspectEveryUnit());
+        node.put("ati", found.ati());
+        node.put("plansCompared", found.plansCompared());
+        if (!found.inspectEveryUnit()) {
+            node.setAll(PlanFormat.planJson(found.plan()));
+            node.put("asn", found.asn());
+            node.put("acceptanceAtAverage", found.acceptanceAtAverage());
+            node.put("firstSampleAcceptanceAtAverage", found.firstAcceptance());
+            node.put("ltpd10", found.ltpd10());
+            node.put("ltpd5", result.doubleFound().ltpd5());
+            node.put("aoql", found.aoql());
+            node.put("aoqlAt", found.aoqlAt());
+        } else {
+            node.put("scheme", "double");
+        }
+        LeastInspectionDesigner.Result single = result.found();
+        ObjectNode comparison = node.putObject("singleComparison");
+        comparison.put("planFound", !single.inspectEveryUnit());
+        comparison.put("ati", single.ati());
+        if (!single.inspectEveryUnit()) {
+            comparison.put("n", single.plan().n());
+            comparison.put("c", single.plan().c());
+            comparison.put("ltpd10", single.ltpd10());
+            comparison.put("aoql", single.aoql());
+        }
+        comparison.put("atiSaved", single.ati() - found.ati());
+        if (result.saved() != null) {
+            node.put("fingerprint", result.saved().fingerprint());
+        }
+        return node;
+    }
+
     /** The plan as CSV, one row. */
     public static String csv(DesignLeastInspection.Result result) {
+        if (result.doubleFound() != null) {
+            return doubleCsv(result);
+        }
         LeastInspectionDesigner.Result found = result.found();
         DesignLeastInspection.Request request = result.request();
         List<Object> row = new ArrayList<>(List.of(result.model().name(), result.lotSize(),
@@ -147,5 +262,23 @@ public final class LeastInspectionRendering {
         }
         return CsvTable.table(List.of("model", "lotSize", "protection", "target", "processAverage", "n", "c", "ati",
                 "ltpd10", "aoql", "fullInspection", "fingerprint"), List.of(row));
+    }
+
+    private static String doubleCsv(DesignLeastInspection.Result result) {
+        LeastInspectionDoubleSearch.Result found = result.doubleFound().found();
+        DesignLeastInspection.Request request = result.request();
+        List<Object> row = new ArrayList<>(List.of(result.model().name(), result.lotSize(), "ltpd", request.ltpd(),
+                request.processAverage()));
+        DoublePlan plan = found.plan();
+        if (plan == null) {
+            row.addAll(List.of("", "", "", "", "", found.ati(), "", "", "", result.found().ati(), true, ""));
+        } else {
+            row.addAll(List.of(plan.n1(), plan.c1(), plan.r1(), plan.n2(), plan.c2(), found.ati(), found.asn(),
+                    found.ltpd10(), found.aoql(), result.found().ati(), false,
+                    result.saved() == null ? "" : result.saved().fingerprint()));
+        }
+        return CsvTable.table(List.of("model", "lotSize", "protection", "target", "processAverage", "n1", "c1", "r1",
+                "n2", "c2", "ati", "asn", "ltpd10", "aoql", "singleAti", "fullInspection", "fingerprint"),
+                List.of(row));
     }
 }
