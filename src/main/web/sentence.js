@@ -79,8 +79,15 @@
       return;
     }
     var query = LG.formText(form) + "&file=" + encodeURIComponent(file.name);
+    var body = file;
+    var lotFile = form.elements["lot-file"].files[0];
+    if (lotFile) {
+      // The lot details file goes first in the body; the workbench splits it off by its length.
+      query += "&lot-file=" + encodeURIComponent(lotFile.name) + "&lot-file-bytes=" + lotFile.size;
+      body = new Blob([lotFile, file]);
+    }
     status.textContent = "Sentencing " + file.name + "...";
-    LG.post("/api/sentence?" + query, file, "application/octet-stream").then(function (reply) {
+    LG.post("/api/sentence?" + query, body, "application/octet-stream").then(function (reply) {
       if (!reply.ok) {
         showErrors(reply.errors);
         status.textContent = "";

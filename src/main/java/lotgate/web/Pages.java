@@ -162,7 +162,11 @@ final class Pages {
                 + field("result-words", "Your words for pass and fail", "", "(e.g. pass=GO,Passed;fail=NOGO,Scrap)")
                 + select("delimiter", "Values in a CSV file separated by", "|found from the column names", "comma|commas",
                         "semicolon|semicolons", "tab|tabs")
-                + "</details><details class=\"more\" id=\"more-record\"><summary>Correction, confidence, production</summary>"
+                + "</details><details class=\"more\" id=\"more-record\"><summary>Lot details file, correction,"
+                + " confidence, production</summary>"
+                + "<label for=\"f-lot-file\">Lot details file <span class=\"hint\">(key and value rows; default: the"
+                + " workbook's 'lot' sheet)</span></label><input type=\"file\" id=\"f-lot-file\" name=\"lot-file\""
+                + " accept=\".xlsx,.xls,.csv\">" + errorSlot("lot-file")
                 + pair(field("supersedes", "Corrects record number", "", "(from the history)"),
                         field("confidence", "Confidence of the bounds", "95%", ""))
                 + field("reason", "Why the record is corrected", "", "")

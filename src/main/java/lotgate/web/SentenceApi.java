@@ -62,18 +62,23 @@ final class SentenceApi {
         }
         Given given = given(fields);
         String browserName = fields.get("file");
-        try (Uploads.Sheet sheet = uploads.receive(exchange, browserName)) {
+        String lotName = blankToNull(fields.get("lot-file"));
+        try (Uploads.Sheet sheet = uploads.receive(exchange, browserName, lotName, fields.get("lot-file-bytes"))) {
             String id = newId();
             SentenceLot.Result result;
             try {
                 result = SentenceLot.run(new SentenceLot.Request(plan, sheet.file(), given.sheet(), given.columns(),
-                        given.rows()[0], given.rows()[1], details(fields), null, given.confidence(), given.record(),
+                        given.rows()[0], given.rows()[1], details(fields), sheet.lotFile(), given.confidence(), given.record(),
                         given.supersedes(), given.reason(), given.production(), settings.store(),
                         SentenceLot.Outputs.NONE));
             } catch (JobException e) {
                 return JsonText.refused(400, field(e.field()), shown(e.getMessage(), sheet, browserName));
             } catch (InputFileException e) {
-                return JsonText.refused(400, fieldOf(e, plan, fields), shown(e.getMessage(), sheet, browserName));
+                String message = sheet.lotFile() == null ? e.getMessage()
+                        : e.getMessage().replace(sheet.lotFile().toString(), safeName(lotName));
+                boolean aboutLotFile = sheet.lotFile() != null && e.getMessage().startsWith(sheet.lotFile().toString());
+                return JsonText.refused(400, aboutLotFile ? "lot-file" : fieldOf(e, plan, fields),
+                        shown(message, sheet, browserName));
             } catch (StoreException e) {
                 return JsonText.refused(503, null, e.getMessage());
             }

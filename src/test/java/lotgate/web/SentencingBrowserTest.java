@@ -79,4 +79,23 @@ class SentencingBrowserTest {
             browser.screenshot(WorkbenchBrowserTest.SHOTS.resolve("sentence-sheet-layout.png"));
         }
     }
+
+    @Test
+    void aCsvSheetGetsItsLotDetailsFromAFileSentBesideIt() throws Exception {
+        try (Served served = Served.start(folder); Browser browser = Browser.open(1280, 800)) {
+            Files.copy(Path.of("plans", "arnwick-af-m8-40.json"), served.plans.resolve("arnwick.json"));
+            browser.driver.get(served.uri("/sentence").toString());
+            browser.waiting().until(d -> !d.findElements(By.cssSelector("#f-plan option[value='arnwick']")).isEmpty());
+            browser.driver.findElement(By.id("f-sheet-file"))
+                    .sendKeys(Path.of("demo-data", "arnwick-af2618.csv").toAbsolutePath().toString());
+            browser.driver.findElement(By.cssSelector("#more-record summary")).click();
+            browser.driver.findElement(By.id("f-lot-file"))
+                    .sendKeys(Path.of("demo-data", "arnwick-af2618.lot.csv").toAbsolutePath().toString());
+            browser.driver.findElement(By.id("sentence-button")).click();
+            browser.waiting().until(d -> !d.findElements(By.id("decision")).isEmpty());
+            // The demo's lot AF-2618, named with its supplier by its lot details file (DemoDataTest checks its verdict).
+            assertTrue(browser.driver.findElement(By.id("decision")).getText().startsWith("Lot AF-2618: "));
+            assertTrue(browser.driver.findElement(By.id("verdict")).getText().contains("Arnwick Fasteners (invented)"));
+        }
+    }
 }

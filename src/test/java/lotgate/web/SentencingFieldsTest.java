@@ -132,6 +132,43 @@ class SentencingFieldsTest {
         }
     }
 
+    /** The sheet sent as the page sends it with a lot details file: the lot file's bytes first, then the sheet's. */
+    private static JsonNode pageSays(Served served, Path sheet, Path lotFile, String form) throws Exception {
+        byte[] lot = Files.readAllBytes(lotFile);
+        byte[] body = java.util.Arrays.copyOf(lot, lot.length + (int) Files.size(sheet));
+        System.arraycopy(Files.readAllBytes(sheet), 0, body, lot.length, body.length - lot.length);
+        HttpResponse<String> answer = served.client.send(java.net.http.HttpRequest.newBuilder(served.uri(
+                "/api/sentence?plan=arnwick&file=" + sheet.getFileName() + "&lot-file=" + lotFile.getFileName()
+                        + "&lot-file-bytes=" + lot.length + "&" + form))
+                .header("Content-Type", "application/octet-stream").header(Guard.CSRF_HEADER, served.csrf())
+                .header("Origin", served.origin()).POST(java.net.http.HttpRequest.BodyPublishers.ofByteArray(body))
+                .build(), HttpResponse.BodyHandlers.ofString());
+        return JSON.readTree(answer.body());
+    }
+
+    @Test
+    void aLotDetailsFileSentWithTheSheetGivesTheLotItsDetails() throws Exception {
+        // An uploaded CSV sheet has no side file beside it: its lot details come as a file of their own.
+        Path sheet = Path.of("demo-data", "arnwick-af2618.csv").toAbsolutePath();
+        Path lotFile = Path.of("demo-data", "arnwick-af2618.lot.csv").toAbsolutePath();
+        try (Served served = Served.start(folder)) {
+            Files.copy(PLAN, served.plans.resolve("arnwick.json"));
+            JsonNode answer = pageSays(served, sheet, lotFile, "record=yes");
+            assertEquals(true, answer.get("ok").asBoolean(), answer.toString());
+            // The lot file's own rows: lot AF-2618 of Arnwick Fasteners (invented), part AF-M8-40.
+            assertTrue(answer.get("headline").asText().startsWith("Lot AF-2618: "), answer.toString());
+            assertTrue(answer.get("facts").toString().contains("Arnwick Fasteners (invented)"), answer.toString());
+            assertTrue(answer.get("record").get("sequence").asText().equals("1"), answer.toString());
+
+            Path broken = folder.resolve("af2618-broken.lot.csv");
+            Files.writeString(broken, "lot;AF-2618\ncolour;blue\n");
+            JsonNode refused = pageSays(served, sheet, broken, "");
+            assertEquals("lot-file", refused.get("errors").get(0).get("field").asText(), refused.toString());
+            assertEquals(commandSays(sheet, "lot-file=" + broken), refused.get("errors").get(0).get("message").asText()
+                    .replace(broken.getFileName().toString(), broken.toString()));
+        }
+    }
+
     /**
      * An invented workbook of two tabs: a cover sheet first, then the sample under a title block (header in row 3)
      * with the site's own headers (Serial, Outcome) and words (GO, SCRAP). Rows 4-135 hold 132 units, 2 scrapped
