@@ -1,5 +1,6 @@
 # Independent reference values for the double least-inspection plan: exact rationals (fractions and math.comb)
-# and, as a second opinion, scipy.stats.hypergeom. Run: python3 src/test/python/double_least_inspection_reference.py
+# and, as a second opinion, scipy.stats.hypergeom. Run with Debian's Python 3.11.2 and python3-scipy 1.10.1:
+# /usr/bin/python3 src/test/python/double_least_inspection_reference.py (SciPy 1.17.1 prints the same digits)
 # A double plan (n1, c1, n2, c2) with r1 = c2 + 1 accepts when d1 <= c1, or when c1 < d1 <= c2 and d1 + d2 <= c2;
 # with rectification ATI = n1 Pa1 + (n1 + n2) Pa2 + N (1 - Pa).
 import sys

@@ -92,6 +92,8 @@ public final class BenchmarkMain {
                     {"tableLookupSingle", "table look-up with risks, single (target < 10 ms)"},
                     {"tableLookupDouble", "table look-up with risks, double (target < 10 ms)"},
                     {"leastInspectionLtpd", "least ATI, N = 10^6, LTPD 1% (target < 50 ms)"},
+                    {"leastInspectionDoubleLtpd", "least ATI double, N = 10^6, LTPD 1% (target < 500 ms)"},
+                    {"leastInspectionDoubleLot5000", "least ATI double, N = 5,000, LTPD 5%"},
                     {"leastInspectionAoql", "least ATI, N = 10^6, AOQL 1% (target < 50 ms)"}};
             for (String[] entry : cases) {
                 double score = scores.get(tables + entry[0]);

@@ -156,7 +156,7 @@ class TableCommandsTest {
                 stages.get(0).path("r").asInt()));
         assertEquals(List.of(134, 4, 5), List.of(stages.get(1).path("n").asInt(), stages.get(1).path("c").asInt(),
                 stages.get(1).path("r").asInt()));
-        // Exact rationals, Python 3.11.7 (src/test/python/double_least_inspection_reference.py): ATI
+        // Exact rationals, Python 3.11.2 (src/test/python/double_least_inspection_reference.py): ATI
         // 88.822472388459289, P(accept | LTPD 5%) 0.099382429780347503, and n2 = 133 accepts 0.10038 (not enough).
         assertEquals(88.822472388459289, node.path("ati").asDouble(), 1e-9);
         for (String field : List.of("asn", "acceptanceAtAverage", "firstSampleAcceptanceAtAverage", "ltpd10", "ltpd5",

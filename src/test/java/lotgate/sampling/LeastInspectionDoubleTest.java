@@ -13,8 +13,8 @@ class LeastInspectionDoubleTest {
     void lotOf5000AtLtpd5PercentMatchesExactRationals() {
         var result = new LeastInspectionDoubleSearch(new OcModel.Hypergeometric(5000), 5000).forLtpd(0.05, 0.10, 0.005);
         assertEquals(DoublePlan.of(51, 0, 134, 4), result.plan());
-        // Exact rationals, Python 3.11.7 (src/test/python/double_least_inspection_reference.py): ATI
-        // 88.822472388459289; SciPy 1.17.1 hypergeom gives 88.822472388459786.
+        // Exact rationals, Python 3.11.2 (src/test/python/double_least_inspection_reference.py): ATI
+        // 88.822472388459289; SciPy 1.10.1 hypergeom gives 88.822472388459786.
         assertEquals(88.822472388459289, result.ati(), 1e-9);
         // The same script: P(accept | 5%) 0.099382429780347503, and with n2 = 133 it is 0.10038481626082806.
         var model = new OcModel.Hypergeometric(5000);
