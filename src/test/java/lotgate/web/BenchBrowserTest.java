@@ -16,7 +16,7 @@ import org.openqa.selenium.By;
 import org.openqa.selenium.support.ui.Select;
 
 /**
- * Bench mode in a real browser for plans in stages and sequential plans: units said one at a time, and after each
+ * Bench mode in a real browser for double, multiple and sequential plans: units said one at a time, and after each
  * the page's go on, accept or reject held to the plan's own rule, worked out here from the saved plan's numbers.
  */
 class BenchBrowserTest {
@@ -68,27 +68,28 @@ class BenchBrowserTest {
     }
 
     /**
-     * A double plan's rule (common practice for double sampling): after the first sample, accept at c1 or fewer
-     * found, reject at r1 or more, else take the second; after both, accept at c2 or fewer, else reject. A count
-     * that reaches the stage's rejection number before the stage ends rejects at once (it can only grow).
+     * The rule of a plan in stages, double or multiple (common practice for double and multiple sampling): each
+     * stage is {n, c, r} on the count over all units so far (c = -1 where the stage cannot accept). At a stage's
+     * end, accept at c or fewer found, reject at r or more, else take the next stage. A count that reaches the
+     * stage's rejection number before the stage ends rejects at once (it can only grow).
      */
-    private static String doublePlan(boolean[] units, int n1, int c1, int r1, int n2, int c2) {
+    private static String stagesRule(boolean[] units, int[]... stages) {
         int m = units.length;
         int found = 0;
         for (boolean unit : units) {
             found += unit ? 1 : 0;
         }
-        int r = m <= n1 ? r1 : c2 + 1;
-        if (found >= r) {
-            return REJECT;
+        int end = 0;
+        for (int[] stage : stages) {
+            end += stage[0];
+            if (m <= end) {
+                if (found >= stage[2]) {
+                    return REJECT;
+                }
+                return m == end && found <= stage[1] ? ACCEPT : GO_ON;
+            }
         }
-        if (m == n1) {
-            return found <= c1 ? ACCEPT : GO_ON;
-        }
-        if (m == n1 + n2) {
-            return found <= c2 ? ACCEPT : REJECT;
-        }
-        return GO_ON;
+        throw new AssertionError("more units than the plan inspects");
     }
 
     @Test
@@ -100,7 +101,7 @@ class BenchBrowserTest {
             browser.driver.get(served.uri("/sentence").toString());
             browser.waiting().until(d -> !d.findElements(By.cssSelector("#f-plan option[value='clip-double']")).isEmpty());
             new Select(browser.driver.findElement(By.id("f-plan"))).selectByValue("clip-double");
-            Function<boolean[], String> rule = u -> doublePlan(u, 5, 0, 2, 5, 1);
+            Function<boolean[], String> rule = u -> stagesRule(u, new int[] {5, 0, 2}, new int[] {5, 1, 2});
 
             // One found in the first sample: the second is needed, and a clean one accepts after 10 units.
             assertEquals(10, sayUnits(browser, units("-x---" + "-----"), rule));
@@ -113,6 +114,31 @@ class BenchBrowserTest {
             // One in each sample: rejected at the second one found, unit 7.
             assertEquals(7, sayUnits(browser, units("x----" + "-x---"), rule));
             browser.screenshot(WorkbenchBrowserTest.SHOTS.resolve("bench-double.png"));
+        }
+    }
+
+    @Test
+    void aMultiplePlanAtTheBenchSaysGoOnAcceptOrRejectAfterEachUnit() throws Exception {
+        try (Served served = Served.start(folder); Browser browser = Browser.open(1280, 800)) {
+            // Three stages of 3: the first cannot accept, r = 2 throughout; c = 0, then 1.
+            design(served.plans.resolve("clip-multiple.json"), "--scheme", "multiple", "--stage", "3:-:2", "--stage",
+                    "3:0:2", "--stage", "3:1:2", "--aql", "1%", "--ltpd", "20%");
+            browser.driver.get(served.uri("/sentence").toString());
+            browser.waiting().until(d -> !d.findElements(By.cssSelector("#f-plan option[value='clip-multiple']"))
+                    .isEmpty());
+            new Select(browser.driver.findElement(By.id("f-plan"))).selectByValue("clip-multiple");
+            Function<boolean[], String> rule = u -> stagesRule(u, new int[] {3, -1, 2}, new int[] {3, 0, 2},
+                    new int[] {3, 1, 2});
+
+            // A clean first stage cannot accept; a clean second accepts after 6.
+            assertEquals(6, sayUnits(browser, units("---" + "---" + "---"), rule));
+            assertEquals(ACCEPT, browser.driver.findElement(By.id("bench-decision")).getText());
+            // One found in the first stage: the third stage decides, after 9.
+            assertEquals(9, sayUnits(browser, units("-x-" + "---" + "---"), rule));
+            assertEquals(ACCEPT, browser.driver.findElement(By.id("bench-decision")).getText());
+            // A second found in the third stage rejects there.
+            assertEquals(8, sayUnits(browser, units("-x-" + "---" + "-x-"), rule));
+            assertEquals(REJECT, browser.driver.findElement(By.id("bench-decision")).getText());
         }
     }
 
