@@ -130,7 +130,11 @@ class BenchBrowserTest {
             Function<boolean[], String> rule = u -> stagesRule(u, new int[] {3, -1, 2}, new int[] {3, 0, 2},
                     new int[] {3, 1, 2});
 
-            // A clean first stage cannot accept; a clean second accepts after 6.
+            // A clean first stage cannot accept, and the page says so; a clean second accepts after 6.
+            browser.driver.findElement(By.id("unit-good")).click();
+            browser.waiting().until(d -> "1".equals(d.findElement(By.id("bench-state")).getAttribute("data-units")));
+            assertEquals("Unit 1: 0 found; inspect on: this sample ends at unit 3 (it cannot accept; reject at 2)",
+                    browser.driver.findElement(By.id("bench-say")).getText());
             assertEquals(6, sayUnits(browser, units("---" + "---" + "---"), rule));
             assertEquals(ACCEPT, browser.driver.findElement(By.id("bench-decision")).getText());
             // One found in the first stage: the third stage decides, after 9.

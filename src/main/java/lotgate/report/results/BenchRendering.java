@@ -64,8 +64,10 @@ public final class BenchRendering {
         for (Stage stage : Stopping.stages(plan)) {
             total += stage.n();
             if (total > m) {
-                return "this sample ends at unit " + total + " (accept there with up to "
-                        + PlanWording.acceptance(stage.c()) + ", reject at " + stage.r() + ")";
+                return "this sample ends at unit " + total + (stage.c() == Stage.NO_ACCEPTANCE
+                        ? " (it cannot accept; reject at " + stage.r() + ")"
+                        : " (accept there with up to " + PlanWording.acceptance(stage.c()) + ", reject at "
+                                + stage.r() + ")");
             }
         }
         return "";
