@@ -26,15 +26,19 @@ package lotgate.sampling;
  */
 public final class LeastInspectionDoubleSearch {
     /**
-     * The most plans the search evaluates before it gives up; far above what lots of up to 1,000,000 units and
-     * the usual LTPD and process averages need.
+     * The most work the search does before it gives up, counted as (c2 - c1) (c2 + 1) per plan whose risk it
+     * evaluates (each first count c1 < d1 <= c2 with a tail of up to c2 terms): about ten seconds on 2 cores. A
+     * process average of a quarter of the LTPD needs well under a hundredth of it for lots of up to 1,000,000
+     * units; a process average close to the LTPD in a large lot drives both acceptance numbers high and may need
+     * more.
      */
-    public static final long BUDGET = 20_000_000;
+    public static final long BUDGET = 2_000_000_000L;
 
     private final OcModel model;
     private final int lotSize;
     private final long budget;
     private long evaluated;
+    private long work;
 
     /**
      * @param model   the OC model (a hypergeometric model must be for the same lot size)
@@ -69,15 +73,16 @@ public final class LeastInspectionDoubleSearch {
     /** The search ran out of its budget before it could prove a plan the best. */
     public static final class OverBudget extends RuntimeException {
         OverBudget(long plans) {
-            super("the search stopped after evaluating " + plans + " plans without proving one the least", null,
-                    false, false);
+            super("the search stopped after evaluating " + plans + " plans without proving one the least (a process"
+                    + " average this close to the LTPD in a lot this large needs high acceptance numbers)", null, false,
+                    false);
         }
     }
 
     /**
      * The least-ATI double plan whose P(accept) at the LTPD is at most {@code beta}.
      *
-     * @throws OverBudget when the search would need more than its budget of plans
+     * @throws OverBudget when the search would need more than its budget of work
      */
     public Result forLtpd(double ltpd, double beta, double processAverage) {
         if (!(processAverage >= 0 && processAverage < model.maxQuality())) {
@@ -88,6 +93,7 @@ public final class LeastInspectionDoubleSearch {
             throw new IllegalArgumentException("the LTPD must be positive and the consumer's risk between 0 and 1");
         }
         evaluated = 0;
+        work = 0;
         double point = model.consumerPoint(ltpd);
         Best best = new Best(lotSize);
         SinglePlanDesigner single = new SinglePlanDesigner(model, lotSize);
@@ -262,7 +268,9 @@ public final class LeastInspectionDoubleSearch {
     }
 
     private boolean protects(int n1, int c1, int n2, int c2, double point, double beta) {
-        if (++evaluated > budget) {
+        evaluated++;
+        work += (long) (c2 - c1) * (c2 + 1);
+        if (work > budget) {
             throw new OverBudget(evaluated - 1);
         }
         return DoublePlan.of(n1, c1, n2, c2).acceptance(model, point) <= beta;

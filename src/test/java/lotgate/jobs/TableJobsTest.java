@@ -156,4 +156,35 @@ class TableJobsTest {
             assertEquals(bad[0], refused.field(), refused.getMessage());
         }
     }
+
+    @Test
+    void theDoubleLeastInspectionPlanIsSavedAsAnOrdinaryDoublePlan() {
+        Path file = folder.resolve("least-double.json");
+        DesignLeastInspection.Result result = DesignLeastInspection.run(new DesignLeastInspection.Request(5000, 0.05,
+                0.10, null, 0.005, null, new SaveTarget(file, "", false), "double"));
+        // Exact rationals, Python 3.11.2 (src/test/python/double_least_inspection_reference.py): 51, 0, 134, 4 with
+        // ATI 88.822472388459289; the single plan beside it is 131, 3 (ATI 149.07929926040518, tables_reference.py).
+        DoublePlan plan = DoublePlan.of(51, 0, 134, 4);
+        assertEquals(plan, result.doubleFound().found().plan());
+        assertEquals(88.822472388459289, result.doubleFound().found().ati(), 1e-9);
+        assertEquals(new SinglePlan(131, 3), result.found().plan());
+        assertNull(result.comparison());
+        SavedPlan saved = PlanFormat.read(file);
+        assertEquals(plan, saved.plan());
+        assertEquals(SavedPlan.LEAST_INSPECTION, saved.classes().get(0).method());
+    }
+
+    @Test
+    void theDoubleSchemeRefusesAnAoqlProtectionAndAnUnknownSchemeBeforeSaving() {
+        Path file = folder.resolve("none.json");
+        for (DesignLeastInspection.Request bad : List.of(
+                new DesignLeastInspection.Request(5000, null, 0.1, 0.02, 0.005, null, new SaveTarget(file, "", false),
+                        "double"),
+                new DesignLeastInspection.Request(5000, 0.05, 0.1, null, 0.005, null, new SaveTarget(file, "", false),
+                        "sequential"))) {
+            JobException refused = assertThrows(JobException.class, () -> DesignLeastInspection.run(bad));
+            assertEquals("scheme", refused.field(), refused.getMessage());
+        }
+        assertFalse(Files.exists(file));
+    }
 }
