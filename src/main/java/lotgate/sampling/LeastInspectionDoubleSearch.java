@@ -97,6 +97,7 @@ public final class LeastInspectionDoubleSearch {
         double point = model.consumerPoint(ltpd);
         Best best = new Best(lotSize);
         SinglePlanDesigner single = new SinglePlanDesigner(model, lotSize);
+        seed(single, ltpd, point, beta, processAverage, best);
         for (int c1 = 0; ; c1++) {
             int firstLeast = single.smallestSampleFor(c1, point, beta, c1, 1);
             if (firstLeast < 0 || !best.open(firstLeast)) {
@@ -121,6 +122,27 @@ public final class LeastInspectionDoubleSearch {
                 plan.acceptance(model, processAverage), model.atMost(plan.n1(), plan.c1(), processAverage),
                 plan.averageSampleNumber(model, processAverage), limit.limit(), limit.quality(), oc.qualityAt(0.10),
                 evaluated);
+    }
+
+    /**
+     * Searches a few (c1, c2) around the single least-inspection plan's acceptance number c first: a good plan
+     * found early lets the bounds leave out more of the search. Only the order changes, not the answer.
+     */
+    private void seed(SinglePlanDesigner single, double ltpd, double point, double beta, double average, Best best) {
+        SinglePlan plain = new LeastInspectionDesigner(model, lotSize).forLtpd(ltpd, beta, average).plan();
+        if (plain == null || plain.c() < 2) {
+            return;
+        }
+        int c = plain.c();
+        for (int c1 : new int[] {c / 4, c / 2}) {
+            for (int c2 : new int[] {c + 1, 3 * c / 2, 2 * c, 3 * c}) {
+                int firstLeast = single.smallestSampleFor(c1, point, beta, c1, 1);
+                int totalLeast = single.smallestSampleFor(c2, point, beta, c2, 1);
+                if (c1 < c2 && firstLeast >= 0 && totalLeast >= 0) {
+                    staircase(c1, c2, firstLeast, totalLeast, point, beta, average, best);
+                }
+            }
+        }
     }
 
     /**
