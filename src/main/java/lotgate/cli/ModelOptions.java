@@ -9,7 +9,7 @@ import picocli.CommandLine.Option;
 final class ModelOptions {
     enum ModelName { binomial, hypergeometric, poisson }
 
-    @Option(names = {"-m", "--model"}, paramLabel = "MODEL",
+    @Option(names = {"-m", "--model"}, paramLabel = "MODEL", descriptionKey = "model",
             description = "OC model: binomial (units from a process or a large lot, type B; the default),"
                     + " hypergeometric (an isolated lot of --lot-size units, type A), or poisson (nonconformities"
                     + " per unit rather than nonconforming units).")

@@ -25,6 +25,16 @@ class TableCommandsTest {
     }
 
     @Test
+    void leastInspectionHelpNamesTheModelItUsesWhenNoneIsGiven() {
+        String help = Cli.run("least-inspection", "--help").out().replaceAll("\\s+", " ");
+        assertTrue(help.contains("hypergeometric (the lot of --lot-size units itself, type A; the default)"), help);
+        String plan = Cli.run("least-inspection", "-N", "5000", "--ltpd", "5%", "-p", "0.5%").out();
+        assertTrue(plan.contains("hypergeometric model"), plan);
+        // Elsewhere the binomial model stays the default, and the help says so.
+        assertTrue(Cli.run("design", "--help").out().replaceAll("\\s+", " ").contains("type B; the default"));
+    }
+
+    @Test
     void lookupShowsTheCodeLetterThePlanAndTheRisksTheTablesDoNotPrint() {
         Cli.Result result = Cli.run("lookup", "--lot-size", "200", "--aql", "1.5");
         assertEquals(0, result.exitCode(), result.err());
