@@ -1,5 +1,6 @@
 package lotgate.sampling;
 
+import java.util.Comparator;
 import java.util.List;
 
 /**
@@ -7,6 +8,12 @@ import java.util.List;
  * otherwise inspect n2 more and accept if the count over both samples is at most c2.
  */
 public record DoublePlan(int n1, int c1, int r1, int n2, int c2) implements Plan {
+    /**
+     * How a search chooses between two plans that do equally well: the smaller largest sample, then the
+     * smaller first sample, then the smaller acceptance numbers.
+     */
+    static final Comparator<DoublePlan> SMALLER_FIRST = Comparator.comparingInt(DoublePlan::maxSampleSize)
+            .thenComparingInt(DoublePlan::n1).thenComparingInt(DoublePlan::c1).thenComparingInt(DoublePlan::c2);
 
     public DoublePlan {
         if (n1 < 1 || n2 < 1) {

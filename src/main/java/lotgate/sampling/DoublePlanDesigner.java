@@ -188,23 +188,11 @@ public final class DoublePlanDesigner {
         double asn = Double.POSITIVE_INFINITY;
 
         void offer(DoublePlan candidate, double value) {
-            if (plan == null || value < asn * (1 - 1e-12) || (value <= asn * (1 + 1e-12) && before(candidate, plan))) {
+            if (plan == null || value < asn * (1 - 1e-12) || (value <= asn * (1 + 1e-12)
+                    && DoublePlan.SMALLER_FIRST.compare(candidate, plan) < 0)) {
                 plan = candidate;
                 asn = Math.min(asn, value);
             }
-        }
-
-        private static boolean before(DoublePlan a, DoublePlan b) {
-            if (a.maxSampleSize() != b.maxSampleSize()) {
-                return a.maxSampleSize() < b.maxSampleSize();
-            }
-            if (a.n1() != b.n1()) {
-                return a.n1() < b.n1();
-            }
-            if (a.c1() != b.c1()) {
-                return a.c1() < b.c1();
-            }
-            return a.c2() < b.c2();
         }
 
         /** Whether a plan whose ASN is at least this bound could still win. */

@@ -308,20 +308,11 @@ public final class LeastInspectionDoubleSearch {
         }
 
         void offer(DoublePlan candidate, double value) {
-            if (value < ati * (1 - 1e-12) || (plan != null && value <= ati * (1 + 1e-12) && before(candidate, plan))) {
+            if (value < ati * (1 - 1e-12) || (plan != null && value <= ati * (1 + 1e-12)
+                    && DoublePlan.SMALLER_FIRST.compare(candidate, plan) < 0)) {
                 plan = candidate;
                 ati = Math.min(ati, value);
             }
-        }
-
-        private static boolean before(DoublePlan a, DoublePlan b) {
-            if (a.maxSampleSize() != b.maxSampleSize()) {
-                return a.maxSampleSize() < b.maxSampleSize();
-            }
-            if (a.n1() != b.n1()) {
-                return a.n1() < b.n1();
-            }
-            return a.c1() != b.c1() ? a.c1() < b.c1() : a.c2() < b.c2();
         }
 
         /** Whether a plan whose ATI is at least this bound could still win. */
