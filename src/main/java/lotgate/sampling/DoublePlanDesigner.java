@@ -276,7 +276,7 @@ public final class DoublePlanDesigner {
      * Bisection between a value that fails and one that passes a test that holds from some value on (or, with
      * bad above good, up to some value): the passing value next to the failing ones.
      */
-    private static int boundary(int bad, int good, java.util.function.IntPredicate passes) {
+    static int boundary(int bad, int good, java.util.function.IntPredicate passes) {
         while (Math.abs(good - bad) > 1) {
             int mid = bad + (good - bad) / 2;
             if (passes.test(mid)) {

@@ -169,7 +169,7 @@ public final class LeastInspectionDoubleSearch {
             if (good <= bad || !protects(good, c1, 1, c2, point, beta)) {
                 return;
             }
-            low = boundary(bad, good, n1 -> protects(n1, c1, lotSize - n1, c2, point, beta));
+            low = DoublePlanDesigner.boundary(bad, good, n1 -> protects(n1, c1, lotSize - n1, c2, point, beta));
             lowSecond = step.second(low, lotSize - low);
         }
         // Past the least n1 whose second sample can be a single unit, every plan is worse than that one.
@@ -180,7 +180,7 @@ public final class LeastInspectionDoubleSearch {
         if (protects(low, c1, 1, c2, point, beta)) {
             high = low;
         } else if (protects(high, c1, 1, c2, point, beta)) {
-            high = boundary(low, high, n1 -> protects(n1, c1, 1, c2, point, beta));
+            high = DoublePlanDesigner.boundary(low, high, n1 -> protects(n1, c1, 1, c2, point, beta));
         }
         step.offer(low, lowSecond, best);
         if (high == low) {
@@ -273,20 +273,7 @@ public final class LeastInspectionDoubleSearch {
                 }
             }
         }
-        return boundary(bad, good, n2 -> protects(n1, c1, n2, c2, point, beta));
-    }
-
-    /** Bisection between a value that fails (below) and one that passes a test that holds from some value on. */
-    private static int boundary(int bad, int good, java.util.function.IntPredicate passes) {
-        while (good - bad > 1) {
-            int mid = bad + (good - bad) / 2;
-            if (passes.test(mid)) {
-                good = mid;
-            } else {
-                bad = mid;
-            }
-        }
-        return good;
+        return DoublePlanDesigner.boundary(bad, good, n2 -> protects(n1, c1, n2, c2, point, beta));
     }
 
     private boolean protects(int n1, int c1, int n2, int c2, double point, double beta) {
