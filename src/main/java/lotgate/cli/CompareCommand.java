@@ -19,7 +19,7 @@ import picocli.CommandLine.Parameters;
 final class CompareCommand implements Runnable {
     @Override
     public void run() {
-        format.print(ComparePlans.run(new ComparePlans.Request(plans, models.named(), models.lotSize,
+        format.print(ComparePlans.run(new ComparePlans.Request(plans, models.named(), models.lotSize(),
                 aql.level, ltpd.level, chart.file(), asnChart.file)), CompareRendering::text, CompareRendering::json, CompareRendering::csv);
     }
 

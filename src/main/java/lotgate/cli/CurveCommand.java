@@ -23,7 +23,7 @@ final class CurveCommand implements Runnable {
     @Override
     public void run() {
         format.print(EvaluatePlan.run(new EvaluatePlan.Request(planFile, defectClass, sampleSize.n, acceptance.c,
-                models.named(), models.lotSize, aql.level, ltpd.level, upTo, steps, new EvaluatePlan.ChartFiles(
+                models.named(), models.lotSize(), aql.level, ltpd.level, upTo, steps, new EvaluatePlan.ChartFiles(
                 chart.file(), ocChart, aoqChart, atiChart, asnChart.file), curtailed.on)),
                 CurveRendering::text, CurveRendering::json, CurveRendering::csv);
     }

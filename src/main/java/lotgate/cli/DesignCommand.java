@@ -104,7 +104,7 @@ final class DesignCommand implements Runnable {
 
     @Override
     public void run() {
-        OcModel model = models.resolve(spec);
+        OcModel model = models.resolve();
         int lotSize = models.lotSizeOrZero();
         String scheme = schemes.name;
         if (!List.of("single", "double", "multiple", "sequential", "variables").contains(scheme)) {

@@ -59,7 +59,7 @@ final class LeastInspectionCommand implements Runnable {
     public void run() {
         SaveTarget target = DesignCommand.SaveOptions.target(save);
         DesignLeastInspection.Result result = DesignLeastInspection.run(new DesignLeastInspection.Request(
-                models.lotSize, ltpd.level, beta.beta, aoql, processAverage, models.named(), target, schemes.name));
+                models.lotSize(), ltpd.level, beta.beta, aoql, processAverage, models.named(), target, schemes.name));
         format.print(result, LeastInspectionRendering::text, LeastInspectionRendering::json,
                 LeastInspectionRendering::csv);
     }

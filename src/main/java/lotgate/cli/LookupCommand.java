@@ -99,7 +99,7 @@ final class LookupCommand implements Runnable {
         SaveTarget target = DesignCommand.SaveOptions.target(save);
         PlanFromTables.FamilyTarget familyTarget = family == null ? null
                 : new PlanFromTables.FamilyTarget(family.file, family.description, family.replace);
-        PlanFromTables.Result result = PlanFromTables.run(new PlanFromTables.Request(models.lotSize, level, aql,
+        PlanFromTables.Result result = PlanFromTables.run(new PlanFromTables.Request(models.lotSize(), level, aql,
                 severity, schemes.name, models.named(), target, familyTarget));
         format.print(result, TableRendering::text, TableRendering::json, TableRendering::csv);
     }

@@ -2,7 +2,7 @@ package lotgate.cli;
 
 import lotgate.jobs.Checks;
 import lotgate.sampling.OcModel;
-import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** The OC model and lot size options shared by the commands that compute curves and plans. */
@@ -15,29 +15,16 @@ final class ModelOptions {
                     + " per unit rather than nonconforming units).")
     ModelName model;
 
-    @Option(names = {"-N", "--lot-size"}, paramLabel = "N", converter = Values.Count.class,
-            description = "Lot size N: required by the hypergeometric model; with the others it is used for AOQ"
-                    + " and ATI and bounds the sample.")
-    Integer lotSize;
+    @Mixin
+    SharedOptions.LotSize lot;
 
-    /** The same lot size without a model, for saved plans that carry their own model. */
-    ModelOptions withoutModel() {
-        ModelOptions copy = new ModelOptions();
-        copy.lotSize = lotSize;
-        return copy;
-    }
-
-    /** Whether the user named a model or lot size (so that a saved plan's own must not be overridden). */
-    boolean given() {
-        return model != null || lotSize != null;
+    /** The lot size given, or null. */
+    Integer lotSize() {
+        return lot.size;
     }
 
     int lotSizeOrZero() {
-        return lotSize == null ? 0 : lotSize;
-    }
-
-    String modelName() {
-        return model == null ? "binomial" : model.name();
+        return lot.size == null ? 0 : lot.size;
     }
 
     /** The model named, or null when the user named none. */
@@ -45,7 +32,8 @@ final class ModelOptions {
         return model == null ? null : model.name();
     }
 
-    OcModel resolve(CommandSpec spec) {
-        return Checks.model(named(), lotSize);
+    /** The model named (binomial when none) for the lot size given; the hypergeometric model needs one. */
+    OcModel resolve() {
+        return Checks.model(named(), lot.size);
     }
 }

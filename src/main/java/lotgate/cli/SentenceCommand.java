@@ -82,9 +82,8 @@ final class SentenceCommand implements Runnable {
     @Mixin
     SharedOptions.Part part;
 
-    @Option(names = {"-N", "--lot-size"}, paramLabel = "N", converter = Values.Count.class,
-            description = "The lot's size N (default: the plan's, for a finite-lot plan).")
-    Integer lotSize;
+    @Mixin
+    SharedOptions.LotSize lotSize;
 
     @Option(names = "--received", paramLabel = "DATE", description = "The day the lot was received (2026-03-14).")
     String received;
@@ -174,7 +173,7 @@ final class SentenceCommand implements Runnable {
             }
         }
         return new LotDetails(blankToNull(lotId), blankToNull(supplier.name), blankToNull(part.name),
-                lotSize == null ? 0 : lotSize, day, blankToNull(inspector));
+                lotSize.size == null ? 0 : lotSize.size, day, blankToNull(inspector));
     }
 
     private static String blankToNull(String text) {

@@ -147,6 +147,12 @@ final class SharedOptions {
         double beta;
     }
 
+    /** -N, --lot-size: the lot size, for a model's curves and plans or for the lot sentenced. */
+    static final class LotSize {
+        @Option(names = {"-N", "--lot-size"}, paramLabel = "N", converter = Values.Count.class)
+        Integer size;
+    }
+
     /** -n, --sample-size: the sample size of a plan given as numbers. */
     static final class SampleSize {
         @Option(names = {"-n", "--sample-size"}, paramLabel = "N", converter = Values.Count.class)

@@ -18,7 +18,8 @@ final class SupplierCommand implements Runnable {
     @Override
     public void run() {
         format.print(AuditSupplier.run(new AuditSupplier.Request(supplier, part.name, from, to, switching.rules,
-                confidence.level, reports.files, storeOption.location())), AuditRendering::text, AuditRendering::json, AuditRendering::csv);
+                audit.confidence.level, audit.reports.files, audit.storeOption.location())), AuditRendering::text,
+                AuditRendering::json, AuditRendering::csv);
     }
 
     @Parameters(index = "0", paramLabel = "SUPPLIER", description = "The supplier, as recorded.")
@@ -37,14 +38,20 @@ final class SupplierCommand implements Runnable {
     SharedOptions.Switching switching;
 
     @Mixin
-    SharedOptions.Confidence confidence;
-
-    @Mixin
-    SharedOptions.Reports reports;
-
-    @Mixin
-    StoreOption storeOption;
+    AuditOptions audit;
 
     @Mixin
     OutputFormat format;
+
+    /** What the audit of one supplier and the ranking of all take alike: their intervals, reports and store. */
+    static final class AuditOptions {
+        @Mixin
+        SharedOptions.Confidence confidence;
+
+        @Mixin
+        SharedOptions.Reports reports;
+
+        @Mixin
+        StoreOption storeOption;
+    }
 }

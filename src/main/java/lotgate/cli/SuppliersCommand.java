@@ -13,18 +13,12 @@ import picocli.CommandLine.Mixin;
 final class SuppliersCommand implements Runnable {
     @Override
     public void run() {
-        format.print(RankSuppliers.run(new RankSuppliers.Request(confidence.level, reports.files,
-                storeOption.location())), RankingRendering::text, RankingRendering::json, RankingRendering::csv);
+        format.print(RankSuppliers.run(new RankSuppliers.Request(audit.confidence.level, audit.reports.files,
+                audit.storeOption.location())), RankingRendering::text, RankingRendering::json, RankingRendering::csv);
     }
 
     @Mixin
-    SharedOptions.Confidence confidence;
-
-    @Mixin
-    SharedOptions.Reports reports;
-
-    @Mixin
-    StoreOption storeOption;
+    SupplierCommand.AuditOptions audit;
 
     @Mixin
     OutputFormat format;

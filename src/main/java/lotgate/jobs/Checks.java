@@ -66,6 +66,21 @@ public final class Checks {
         return OcModel.of(name == null ? "binomial" : name, lotSize == null ? 0 : lotSize);
     }
 
+    /**
+     * The lot size of a job that cannot do without one, of 2 units or more; {@code dependsOn} names what depends on
+     * it and {@code tooSmall} says why a lot of one unit is refused, each in the job's own words.
+     */
+    static int requiredLotSize(Integer lotSize, String dependsOn, String tooSmall) {
+        if (lotSize == null) {
+            throw JobException.invalid("lotSize", "give the lot size with --lot-size N: " + dependsOn + " depends on"
+                    + " it");
+        }
+        if (lotSize < 2) {
+            throw JobException.invalid("lotSize", "--lot-size " + lotSize + ": " + tooSmall);
+        }
+        return lotSize;
+    }
+
     /** Refuses a chart file that lotgate cannot draw to (PNG and SVG only). */
     public static void chartName(String field, Path file) {
         if (file != null && !ChartFile.supported(file)) {

@@ -78,14 +78,7 @@ public final class DesignLeastInspection {
 
     /** Checks the request, finds the least-inspection plan, compares it, and saves it when asked. */
     public static Result run(Request request) {
-        if (request.lotSize() == null) {
-            throw JobException.invalid("lotSize", "give the lot size with --lot-size N: the least inspection depends"
-                    + " on it");
-        }
-        int lotSize = request.lotSize();
-        if (lotSize < 2) {
-            throw JobException.invalid("lotSize", "--lot-size " + lotSize + ": a lot needs at least 2 units");
-        }
+        int lotSize = Checks.requiredLotSize(request.lotSize(), "the least inspection", "a lot needs at least 2 units");
         if (lotSize > 1_000_000) {
             throw JobException.invalid("lotSize", "--lot-size " + lotSize + ": least-inspection plans are computed"
                     + " for lots of up to 1,000,000 units");

@@ -62,11 +62,11 @@ public final class EvaluatePlan {
         PlanChoice choice = choose(request.planFile(), request.defectClass(), request.sampleSize(),
                 request.acceptance(), request.model(), request.lotSize());
         ChartFiles charts = request.charts();
-        Checks.chartName("chart", charts.all());
-        Checks.chartName("ocChart", charts.oc());
-        Checks.chartName("aoqChart", charts.aoq());
-        Checks.chartName("atiChart", charts.ati());
-        Checks.chartName("asnChart", charts.asn());
+        String[] fields = {"chart", "ocChart", "aoqChart", "atiChart", "asnChart"};
+        Path[] files = {charts.all(), charts.oc(), charts.aoq(), charts.ati(), charts.asn()};
+        for (int i = 0; i < files.length; i++) {
+            Checks.chartName(fields[i], files[i]);
+        }
         if (request.curtailed() && !(choice.plan() instanceof DoublePlan)) {
             throw JobException.invalid("curtailed", "--curtailed is for double plans");
         }

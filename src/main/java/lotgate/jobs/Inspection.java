@@ -23,29 +23,13 @@ import lotgate.sentencing.LotDecision;
 /**
  * A lot's place in its supplier's history while it is sentenced: the severity the switching rules
  * ask for, the plan that severity selects from a family, and the record the decision becomes.
+ *
+ * @param lot the lot's details with its supplier and part spelt as the store records them
+ * @param notice a note for the answer (the plan a family fell back to, the names respelt), or null
+ * @param supersedes the record the lot's sentence corrects, or 0
  */
-final class Inspection implements AutoCloseable {
-
-    private final HistoryStore store;
-    private final SwitchingRules rules;
-    private final LotDetails lot;
-    private final Severity severity;
-    private final SavedPlan plan;
-    private final Path planFile;
-    private final String notice;
-    private final long supersedes;
-
-    private Inspection(HistoryStore store, SwitchingRules rules, LotDetails lot, Severity severity, SavedPlan plan,
-            Path planFile, String notice, long supersedes) {
-        this.store = store;
-        this.rules = rules;
-        this.lot = lot;
-        this.severity = severity;
-        this.plan = plan;
-        this.planFile = planFile;
-        this.notice = notice;
-        this.supersedes = supersedes;
-    }
+record Inspection(HistoryStore store, SwitchingRules rules, LotDetails lot, Severity severity, SavedPlan plan,
+        Path planFile, String notice, long supersedes) implements AutoCloseable {
 
     static Inspection open(String storeLocation, Path planFile, boolean family, LotDetails lot, Long supersedes) {
         PlanFamily plans = family ? PlanFamily.read(planFile) : null;
@@ -136,26 +120,9 @@ final class Inspection implements AutoCloseable {
                 + " supersede its latest correction instead");
     }
 
-    /** The lot's details with its supplier and part spelt as the store records them. */
-    LotDetails lot() {
-        return lot;
-    }
-
     /** The store's location as shown to people. */
     String storeLocation() {
         return store.location();
-    }
-
-    SavedPlan plan() {
-        return plan;
-    }
-
-    Path planFile() {
-        return planFile;
-    }
-
-    String notice() {
-        return notice;
     }
 
     /** What the lot was inspected under, with nothing recorded. */

@@ -85,14 +85,8 @@ public final class PlanFromTables {
     /** Checks the request, looks the plan up, computes its risks, and saves the plan or family when asked. */
     public static Result run(Request request) {
         AttributeTables tables = AttributeTables.standard();
-        if (request.lotSize() == null) {
-            throw JobException.invalid("lotSize", "give the lot size with --lot-size N: the tables' code letter"
-                    + " depends on it");
-        }
-        int lotSize = request.lotSize();
-        if (lotSize < 2) {
-            throw JobException.invalid("lotSize", "--lot-size " + lotSize + ": the tables start at a lot of 2 units");
-        }
+        int lotSize = Checks.requiredLotSize(request.lotSize(), "the tables' code letter",
+                "the tables start at a lot of 2 units");
         InspectionLevel level = parse("level", "--level", () -> InspectionLevel.parse(request.level()));
         TableSeverity severity = parse("severity", "--severity", () -> TableSeverity.parse(request.severity()));
         TableScheme scheme = parse("scheme", "--scheme", () -> TableScheme.parse(request.scheme()));

@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.function.Function;
 import java.util.regex.Pattern;
 import lotgate.files.InputFileException;
 import lotgate.jobs.Checks;
@@ -365,13 +366,7 @@ final class DesignApi {
             throw new FieldError("stages", "--first-rejection, --asn-at and --second-ratio shape a design; with"
                     + " --stage the plan is given");
         }
-        String truncation = text(fields, "truncate-at");
-        Integer truncateAt;
-        try {
-            truncateAt = truncation == null ? null : TypedValues.truncation(truncation);
-        } catch (IllegalArgumentException e) {
-            throw new FieldError("truncate-at", invalid("truncate-at", e));
-        }
+        Integer truncateAt = typed(fields, "truncate-at", TypedValues::truncation);
         return new DesignStagedPlan.Request(DesignStagedPlan.Scheme.valueOf(scheme.toUpperCase(Locale.ROOT)), model,
                 lotSize, aql, alpha, ltpd, beta, stages, space, asnAt, truncateAt, "yes".equals(fields.get("plain-wald")),
                 "yes".equals(fields.get("curtailed")), save);
@@ -481,40 +476,31 @@ final class DesignApi {
         return "Invalid value for option '--" + name + "': " + e.getMessage();
     }
 
-    private static Double level(Map<String, String> fields, String name) {
+    /** A field's value read by the options' parser, or null when the field is blank; a refusal goes beside it. */
+    private static <T> T typed(Map<String, String> fields, String name, Function<String, T> read) {
         String value = text(fields, name);
         try {
-            return value == null ? null : TypedValues.fraction(value);
+            return value == null ? null : read.apply(value);
         } catch (IllegalArgumentException e) {
             throw new FieldError(name, invalid(name, e));
         }
+    }
+
+    private static Double level(Map<String, String> fields, String name) {
+        return typed(fields, name, TypedValues::fraction);
     }
 
     private static double risk(Map<String, String> fields, String name, double otherwise) {
-        String value = text(fields, name);
-        try {
-            return value == null ? otherwise : TypedValues.risk(value);
-        } catch (IllegalArgumentException e) {
-            throw new FieldError(name, invalid(name, e));
-        }
+        Double risk = typed(fields, name, TypedValues::risk);
+        return risk == null ? otherwise : risk;
     }
 
     private static Integer count(Map<String, String> fields, String name, int least) {
-        String value = text(fields, name);
-        try {
-            return value == null ? null : TypedValues.wholeNumber(value, least);
-        } catch (IllegalArgumentException e) {
-            throw new FieldError(name, invalid(name, e));
-        }
+        return typed(fields, name, value -> TypedValues.wholeNumber(value, least));
     }
 
     private static Double measure(Map<String, String> fields, String name) {
-        String value = text(fields, name);
-        try {
-            return value == null ? null : TypedValues.number(value);
-        } catch (IllegalArgumentException e) {
-            throw new FieldError(name, invalid(name, e));
-        }
+        return typed(fields, name, TypedValues::number);
     }
 
     /** No plan meets the request: the design command's words, exit code 5 there. */

@@ -134,10 +134,7 @@ public final class CurveRendering {
     /** The curves and key levels as JSON. */
     public static ObjectNode json(EvaluatePlan.Result result) {
         PlanChoice choice = result.choice();
-        List<CurvePoint> table = result.table();
         KeyLevels keys = result.keys();
-        Double markAql = result.markAql();
-        Double markLtpd = result.markLtpd();
         WaldSequential wald = result.wald();
         ObjectNode node = Json.object();
         node.put("scheme", choice.plan().scheme());
@@ -158,14 +155,14 @@ public final class CurveRendering {
         node.put("qualityAtAcceptance10", keys.at10());
         node.put("aoql", keys.aoql().limit());
         node.put("aoqlAt", keys.aoql().quality());
-        if (markAql != null) {
+        if (result.markAql() != null) {
             node.put("acceptanceAtAql", result.acceptanceAtAql());
         }
-        if (markLtpd != null) {
+        if (result.markLtpd() != null) {
             node.put("acceptanceAtLtpd", result.acceptanceAtLtpd());
         }
         ArrayNode points = node.putArray("points");
-        for (CurvePoint point : table) {
+        for (CurvePoint point : result.table()) {
             ObjectNode row = points.addObject();
             row.put("quality", point.quality());
             if (point.defectives() >= 0) {

@@ -1,6 +1,7 @@
 package lotgate.report.results;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -33,14 +34,10 @@ public final class LeastInspectionRendering {
             int lotSize = result.lotSize();
             LeastInspectionDesigner.Result found = result.found();
             String unit = model.countsUnits() ? "" : " per unit";
-            out.println("Least-inspection plan for rectifying inspection (rejected lots screened 100%)");
-            out.println("  " + PlanWording.model(model, lotSize));
-            out.println("  protection: " + protection(result) + "; process average " + Percent.level(
-                    request.processAverage()) + unit);
+            printHeading(out, result, "plan", unit);
             out.println();
             if (found.inspectEveryUnit()) {
-                out.println("  No sampling plan inspects fewer units on average than screening every unit: inspect"
-                        + " every unit of the lot (100% inspection), ATI " + lotSize + ".");
+                printEveryUnit(out, "sampling plan", lotSize);
                 return;
             }
             SinglePlan plan = found.plan();
@@ -83,6 +80,20 @@ public final class LeastInspectionRendering {
         });
     }
 
+    /** What was sought (a "plan" or a "double plan"), under which model, protection and process average. */
+    private static void printHeading(PrintWriter out, DesignLeastInspection.Result result, String sought, String unit) {
+        out.println("Least-inspection " + sought + " for rectifying inspection (rejected lots screened 100%)");
+        out.println("  " + PlanWording.model(result.model(), result.lotSize()));
+        out.println("  protection: " + protection(result) + "; process average " + Percent.level(
+                result.request().processAverage()) + unit);
+    }
+
+    /** The answer where screening every unit inspects least: no plan of the kind searched does better. */
+    private static void printEveryUnit(PrintWriter out, String kind, int lotSize) {
+        out.println("  No " + kind + " inspects fewer units on average than screening every unit: inspect every unit"
+                + " of the lot (100% inspection), ATI " + lotSize + ".");
+    }
+
     /** The double plan as text, with its ATI and protection and the single least-inspection plan beside it. */
     private static String doubleText(DesignLeastInspection.Result result) {
         return Text.of(out -> {
@@ -91,16 +102,12 @@ public final class LeastInspectionRendering {
             int lotSize = result.lotSize();
             LeastInspectionDoubleSearch.Result found = result.doubleFound().found();
             String unit = model.countsUnits() ? "" : " per unit";
-            out.println("Least-inspection double plan for rectifying inspection (rejected lots screened 100%)");
-            out.println("  " + PlanWording.model(model, lotSize));
-            out.println("  protection: " + protection(result) + "; process average " + Percent.level(
-                    request.processAverage()) + unit);
+            printHeading(out, result, "double plan", unit);
             out.println("  searched: every n1 and n2 (n1 + n2 at most the lot), c1 < c2, r1 = c2 + 1; "
                     + found.plansCompared() + " plans evaluated, exact within that family");
             out.println();
             if (found.inspectEveryUnit()) {
-                out.println("  No double plan inspects fewer units on average than screening every unit: inspect"
-                        + " every unit of the lot (100% inspection), ATI " + lotSize + ".");
+                printEveryUnit(out, "double plan", lotSize);
                 return;
             }
             DoublePlan plan = found.plan();

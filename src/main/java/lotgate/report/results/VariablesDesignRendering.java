@@ -119,11 +119,8 @@ public final class VariablesDesignRendering {
     /** The design as JSON. */
     public static ObjectNode json(DesignVariablesPlan.Result result) {
         VariablesDesigner.Design design = result.design();
-        VariablesDesigner.Design known = result.known();
-        SinglePlan single = result.single();
         Measurement measurement = result.measurement();
         RiskPoints points = result.points();
-        SavedPlan saved = result.saved();
         VariablesDesigner.Design lowerDesign = result.lowerDesign();
         VariablesPlan plan = design.plan();
         ObjectNode node = Json.object();
@@ -151,12 +148,13 @@ public final class VariablesDesignRendering {
         node.put("risksMet", design.risks().meets(points));
         ObjectNode closed = node.putObject("knownSigma");
         closed.put("exactN", design.exactSize());
-        closed.put("n", known.plan().n());
+        closed.put("n", result.known().plan().n());
         closed.put("closedFormK", design.closedFormK());
-        closed.put("k", known.plan().k());
+        closed.put("k", result.known().plan().k());
         ObjectNode wallis = node.putObject("wallis");
         wallis.put("n", design.wallis());
         wallis.put("nRounded", (int) Math.ceil(design.wallis() - 1e-9));
+        SinglePlan single = result.single();
         if (single != null) {
             ObjectNode attribute = node.putObject("attribute");
             attribute.put("n", single.n());
@@ -175,8 +173,8 @@ public final class VariablesDesignRendering {
             lower.put("consumerRisk", lowerDesign.risks().consumerRisk());
             lower.put("risksMet", lowerDesign.risks().meets(measurement.lowerDesign().designedFor()));
         }
-        if (saved != null) {
-            node.put("fingerprint", saved.fingerprint());
+        if (result.saved() != null) {
+            node.put("fingerprint", result.saved().fingerprint());
         }
         return node;
     }
