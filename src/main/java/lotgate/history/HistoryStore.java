@@ -398,7 +398,7 @@ public final class HistoryStore implements AutoCloseable {
             }
         }
         List<StoredRecord> stored = new ArrayList<>();
-        append(contents, recordedAt, stored::add, () -> beforeCommit.accept(stored));
+        append(contents, recordedAt, stored::add, () -> beforeCommit.accept(stored), 0);
         return stored;
     }
 
@@ -409,7 +409,50 @@ public final class HistoryStore implements AutoCloseable {
      * @return how many records were appended
      */
     public long appendEach(Iterable<ObjectNode> contents, Instant recordedAt) {
-        return append(contents, recordedAt, stored -> { }, () -> { });
+        return appendEach(contents, 0, recordedAt);
+    }
+
+    /**
+     * Appends many records as {@link #appendEach(Iterable, Instant)} does, told how many there will be. On SQLite,
+     * records at least {@link #BULK} and at least as many as the store holds are written as a bulk load: with a
+     * larger page cache, and the store's own indexes dropped at the start of the transaction and created again
+     * before its commit (in one sorted pass each, where inserting keys one by one would touch pages all over the
+     * index). Readers never see the store without them, and a lot recorded twice is still refused, by the unique
+     * index's creation.
+     */
+    public long appendEach(Iterable<ObjectNode> contents, long expected, Instant recordedAt) {
+        if (postgres || expected < BULK) {
+            return append(contents, recordedAt, stored -> { }, () -> { }, 0);
+        }
+        int cache = pragma("cache_size");
+        try {
+            execute("PRAGMA cache_size = " + BULK_CACHE);
+            return append(contents, recordedAt, stored -> { }, () -> { }, expected);
+        } catch (SQLException e) {
+            throw new StoreException("history store " + location.shown() + ": cannot size the page cache ("
+                    + location.scrub(firstLine(e)) + ")", null);
+        } finally {
+            try {
+                execute("PRAGMA cache_size = " + cache);
+            } catch (SQLException ignored) {
+                // The connection is closed by the caller; its cache goes with it.
+            }
+        }
+    }
+
+    /** The fewest records an append writes as a bulk load (see {@link #appendEach(Iterable, long, Instant)}). */
+    static final long BULK = 1000;
+    /** SQLite's page cache during a bulk load, in kibibytes (negative: a size, not a page count); native memory. */
+    private static final int BULK_CACHE = -65536;
+
+    private int pragma(String name) {
+        try (Statement statement = connection.createStatement();
+                ResultSet value = statement.executeQuery("PRAGMA " + name)) {
+            return value.next() ? value.getInt(1) : 0;
+        } catch (SQLException e) {
+            throw new StoreException("history store " + location.shown() + ": cannot read " + name + " ("
+                    + location.scrub(firstLine(e)) + ")", null);
+        }
     }
 
     private static String identifierProblem(ObjectNode content) {
@@ -422,8 +465,13 @@ public final class HistoryStore implements AutoCloseable {
         return null;
     }
 
+    /**
+     * Appends records in one transaction, handing each to {@code each} and calling {@code beforeCommit} before the
+     * commit; {@code bulk} is the number of records of a bulk load on SQLite (0: lot by lot), whose indexes are
+     * created after the records when there are at least {@link #BULK} and at least as many as the store holds.
+     */
     private long append(Iterable<ObjectNode> contents, Instant recordedAt,
-            java.util.function.Consumer<StoredRecord> each, Runnable beforeCommit) {
+            java.util.function.Consumer<StoredRecord> each, Runnable beforeCommit, long bulk) {
         try {
             return transaction("record the lots", () -> {
                 Head head = lockedHead();
@@ -436,6 +484,7 @@ public final class HistoryStore implements AutoCloseable {
                 long first = head.seq();
                 long last = first;
                 String previous = head.hash();
+                List<String> indexes = bulk >= BULK && bulk >= first ? dropIndexes() : List.of();
                 try (Migrations.RecordInserter inserter = new Migrations.RecordInserter(connection, version)) {
                     for (ObjectNode content : contents) {
                         String problem = identifierProblem(content);
@@ -467,6 +516,7 @@ public final class HistoryStore implements AutoCloseable {
                         previous = hash;
                     }
                 }
+                createIndexes(indexes);
                 try (PreparedStatement update = connection.prepareStatement("UPDATE chain_head SET seq = ?, hash = ?"
                         + " WHERE id = 1")) {
                     update.setLong(1, last);
@@ -489,6 +539,61 @@ public final class HistoryStore implements AutoCloseable {
                     + " is already recorded as #" + holder + " in " + location.shown() + " (nothing was recorded)",
                     holder);
         }
+    }
+
+    /** Drops the indexes of the records and their defect counts, returning the statements that create them. */
+    private List<String> dropIndexes() throws SQLException {
+        List<String[]> indexes = new ArrayList<>();
+        try (Statement statement = connection.createStatement();
+                ResultSet result = statement.executeQuery("SELECT name, sql FROM sqlite_master WHERE type = 'index'"
+                        + " AND tbl_name IN ('lot_record', 'defect_count') AND sql IS NOT NULL ORDER BY name")) {
+            while (result.next()) {
+                indexes.add(new String[] {result.getString(1), result.getString(2)});
+            }
+        }
+        List<String> creations = new ArrayList<>();
+        for (String[] index : indexes) {
+            execute("DROP INDEX \"" + index[0].replace("\"", "\"\"") + "\"");
+            creations.add(index[1]);
+        }
+        return creations;
+    }
+
+    /**
+     * Creates the dropped indexes again with the statements they were created by. The unique lot key's index
+     * refuses a lot recorded twice as a lot-by-lot append would: the first record, in chain order, whose key a
+     * record before it holds.
+     */
+    private void createIndexes(List<String> creations) throws SQLException {
+        for (String creation : creations) {
+            try {
+                execute(creation);
+            } catch (SQLException e) {
+                if (!uniqueViolation(e)) {
+                    throw e;
+                }
+                KeyTaken taken = firstTakenKey();
+                if (taken == null) {
+                    throw e;
+                }
+                throw taken;
+            }
+        }
+    }
+
+    private KeyTaken firstTakenKey() throws SQLException {
+        java.util.Set<String> held = new java.util.HashSet<>();
+        try (Statement statement = connection.createStatement();
+                ResultSet result = statement.executeQuery("SELECT seq, lot_key, content FROM lot_record WHERE lot_key IN"
+                        + " (SELECT lot_key FROM lot_record WHERE lot_key IS NOT NULL GROUP BY lot_key HAVING COUNT(*) > 1)"
+                        + " ORDER BY seq")) {
+            while (result.next()) {
+                if (!held.add(result.getString(2))) {
+                    return new KeyTaken(result.getString(2), json(result.getLong(1), result.getString(3)));
+                }
+            }
+        }
+        return null;
     }
 
     private boolean uniqueViolation(SQLException e) {

@@ -175,7 +175,7 @@ public final class ImportHistory {
                             + " (nothing was imported)");
                 }
             }
-            long written = store.appendEach(() -> withSeverities(lots, parts, lotsRecorded),
+            long written = store.appendEach(() -> withSeverities(lots, parts, lotsRecorded), lots.size(),
                     Instant.now().truncatedTo(ChronoUnit.MILLIS));
             return new Result(written, checked.request().file(), store.location());
         }

@@ -1,0 +1,140 @@
+package lotgate.history;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.time.Instant;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * A bulk load on SQLite (indexes created after the records, a larger page cache) writes the same rows, hashes
+ * and indexes as recording the same lots one by one, and refuses a lot recorded twice in the same words.
+ */
+class BulkAppendTest {
+    private static final int LOTS = (int) HistoryStore.BULK + 200;
+
+    @TempDir
+    Path folder;
+
+    private final Instant at = Stores.now();
+
+    /** Two copies of one store holding three lots: one store id, so that both chains start from one hash. */
+    private Path[] twins() throws Exception {
+        Path first = folder.resolve("one-by-one.sqlite");
+        try (HistoryStore store = HistoryStore.open(first.toString())) {
+            for (int i = 1; i <= 3; i++) {
+                store.append(Stores.lot("Invented Supplier 0", "P-0", "L-" + i, true, i - 1), at);
+            }
+        }
+        assertFalse(Files.exists(Path.of(first + "-wal")), "the store was closed with its log folded in");
+        Path second = folder.resolve("bulk.sqlite");
+        Files.copy(first, second);
+        return new Path[] {first, second};
+    }
+
+    /** Invented lots of a few suppliers and parts, with defect counts, and a correction of the store's record 2. */
+    private static List<ObjectNode> lots() {
+        List<ObjectNode> lots = new ArrayList<>();
+        for (int i = 0; i < LOTS; i++) {
+            int found = i % 5;
+            Map<String, Integer> defects = found == 0 ? Map.of() : i % 2 == 0 ? Map.of("burr", found)
+                    : Map.of("crack", 1, "burr", found - 1);
+            lots.add(RecordContent.lot(new RecordContent.Lot("Invented Supplier " + i % 13, "P-" + i % 3, "B-" + i,
+                    5000, LocalDate.of(2025, 1, 1).plusDays(i / 13), "bench", found <= 3 ? "accept" : "reject", 132,
+                    found, defects, i % 11 == 0 ? "tightened" : "normal", "steady", 0, null), null, "import"));
+        }
+        ObjectNode correction = Stores.lot("Invented Supplier 0", "P-0", "L-2", true, 0);
+        correction.put("supersedes", 2).put("reason", "recount (invented)");
+        lots.add(LOTS / 2, correction);
+        return lots;
+    }
+
+    @Test
+    void aBulkLoadRecordsTheRowsHashesAndIndexesOfRecordingLotByLot() throws Exception {
+        Path[] stores = twins();
+        List<ObjectNode> lots = lots();
+        try (HistoryStore store = HistoryStore.open(stores[0].toString())) {
+            for (ObjectNode lot : lots) {
+                store.append(lot, at);
+            }
+        }
+        try (HistoryStore store = HistoryStore.open(stores[1].toString())) {
+            assertEquals(lots.size(), store.appendEach(lots, lots.size(), at));
+            HistoryStore.Verification verification = store.verify();
+            assertTrue(verification.intact(), verification.problem());
+            assertEquals(lots.size() + 3, verification.records());
+        }
+        for (String query : new String[] {"SELECT * FROM lot_record ORDER BY seq",
+                "SELECT * FROM defect_count ORDER BY seq, defect", "SELECT * FROM chain_head",
+                "SELECT type, name, tbl_name, sql FROM sqlite_master WHERE type = 'index' ORDER BY name"}) {
+            assertEquals(rows(stores[0], query), rows(stores[1], query), query);
+        }
+        assertEquals(3, rows(stores[1], "SELECT name FROM sqlite_master WHERE type = 'index' AND sql IS NOT NULL")
+                .size(), "the lot key, supplier and defect indexes");
+    }
+
+    @Test
+    void aBulkLoadRefusesALotTheStoreHoldsAsRecordingLotByLotDoes() throws Exception {
+        List<ObjectNode> lots = lots();
+        lots.add(700, Stores.lot("Invented Supplier 0", "P-0", "L-3", true, 0));
+        assertRefusedAlike(lots, "lot L-3 of Invented Supplier 0, part P-0 is already recorded as #3 in ");
+    }
+
+    @Test
+    void aBulkLoadRefusesALotListedTwiceAsRecordingLotByLotDoes() throws Exception {
+        List<ObjectNode> lots = lots();
+        lots.add(900, lots.get(400).deepCopy());
+        assertRefusedAlike(lots, "lot B-400 of Invented Supplier 10, part P-1 is already recorded as #0 in ");
+    }
+
+    private void assertRefusedAlike(List<ObjectNode> lots, String refusal) throws Exception {
+        Path[] stores = twins();
+        List<String> messages = new ArrayList<>();
+        for (int i = 0; i < 2; i++) {
+            long expected = i == 0 ? 0 : lots.size();
+            try (HistoryStore store = HistoryStore.open(stores[i].toString())) {
+                StoreException.DuplicateLot refused = assertThrows(StoreException.DuplicateLot.class,
+                        () -> store.appendEach(lots, expected, at));
+                messages.add(refused.getMessage().replace(stores[i].toString(), "STORE"));
+                HistoryStore.Verification verification = store.verify();
+                assertTrue(verification.intact(), verification.problem());
+                assertEquals(3, verification.records(), "nothing was recorded");
+            }
+        }
+        assertEquals(messages.get(0), messages.get(1));
+        assertTrue(messages.get(1).startsWith(refusal), messages.get(1));
+        String indexes = "SELECT name, sql FROM sqlite_master WHERE type = 'index' ORDER BY name";
+        assertEquals(rows(stores[0], indexes), rows(stores[1], indexes), "the indexes are back");
+    }
+
+    private static List<List<String>> rows(Path store, String query) throws SQLException {
+        List<List<String>> rows = new ArrayList<>();
+        try (Connection connection = DriverManager.getConnection("jdbc:sqlite:" + store);
+                Statement statement = connection.createStatement(); ResultSet result = statement.executeQuery(query)) {
+            int columns = result.getMetaData().getColumnCount();
+            while (result.next()) {
+                List<String> row = new ArrayList<>();
+                for (int c = 1; c <= columns; c++) {
+                    row.add(result.getString(c));
+                }
+                rows.add(row);
+            }
+        }
+        return rows;
+    }
+}
