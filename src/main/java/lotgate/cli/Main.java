@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;
+import java.lang.reflect.Constructor;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.PropertyResourceBundle;
@@ -142,7 +143,7 @@ public final class Main implements Runnable {
      * argument that is not an option), or every command when they name none or an unknown one.
      */
     static CommandLine commandLine(String... args) {
-        CommandLine cli = new CommandLine(new Main());
+        CommandLine cli = new CommandLine(new Main(), new Factory());
         String invoked = null;
         for (String arg : args) {
             if (!arg.startsWith("-")) {
@@ -162,6 +163,23 @@ public final class Main implements Runnable {
         cli.getCommandSpec().usageMessage().footerHeading("%nExit codes:%n").footer(EXIT_CODES);
         HelpLayout.apply(cli);
         return cli;
+    }
+
+    /**
+     * Creates lotgate's commands, option groups and converters through their declared constructors.
+     * picocli's own factory first tries the public way, which fails with an exception for these
+     * package-private classes before it falls back on the same call: some 30 exceptions per start.
+     */
+    static final class Factory implements CommandLine.IFactory {
+        @Override
+        public <K> K create(Class<K> type) throws Exception {
+            if (!type.getName().startsWith("lotgate.") || type.isInterface()) {
+                return CommandLine.defaultFactory().create(type);
+            }
+            Constructor<K> constructor = type.getDeclaredConstructor();
+            constructor.setAccessible(true);
+            return constructor.newInstance();
+        }
     }
 
     /**

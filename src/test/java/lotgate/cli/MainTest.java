@@ -32,6 +32,14 @@ class MainTest {
     }
 
     @Test
+    void theFactoryMakesLotgatesPackagePrivateClassesAndLeavesOthersToPicocli() throws Exception {
+        Main.Factory factory = new Main.Factory();
+        assertTrue(factory.create(Values.Quality.class) instanceof Values.Quality);
+        assertTrue(factory.create(DesignCommand.class) instanceof DesignCommand);
+        assertTrue(factory.create(java.util.List.class) instanceof java.util.ArrayList); // picocli's choice
+    }
+
+    @Test
     void everyCommandIsRegisteredUnderItsOwnName() {
         for (Map.Entry<String, Class<?>> command : Main.commands().entrySet()) {
             CommandLine.Command annotation = command.getValue().getAnnotation(CommandLine.Command.class);
