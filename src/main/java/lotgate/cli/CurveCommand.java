@@ -23,8 +23,7 @@ final class CurveCommand implements Runnable {
     @Override
     public void run() {
         format.print(EvaluatePlan.run(new EvaluatePlan.Request(planFile, defectClass, sampleSize.n, acceptance.c,
-                models.named(), models.lotSize(), aql.level, ltpd.level, upTo, steps, new EvaluatePlan.ChartFiles(
-                chart.file(), ocChart, aoqChart, atiChart, asnChart.file), curtailed.on)),
+                models.named(), models.lotSize(), aql.level, ltpd.level, upTo, steps, charts.files(), curtailed.on)),
                 CurveRendering::text, CurveRendering::json, CurveRendering::csv);
     }
 
@@ -60,24 +59,34 @@ final class CurveCommand implements Runnable {
     int steps;
 
     @Mixin
-    SharedOptions.CurvesChart chart;
-
-    @Option(names = "--oc-chart", paramLabel = "FILE", description = "Draw the OC curve alone; .png or .svg.")
-    Path ocChart;
-
-    @Option(names = "--aoq-chart", paramLabel = "FILE", description = "Draw the AOQ curve alone; .png or .svg.")
-    Path aoqChart;
-
-    @Option(names = "--ati-chart", paramLabel = "FILE",
-            description = "Draw the ATI curve alone (needs a lot size); .png or .svg.")
-    Path atiChart;
-
-    @Mixin
-    SharedOptions.AsnChart asnChart;
+    Charts charts;
 
     @Mixin
     SharedOptions.Curtailed curtailed;
 
     @Mixin
     OutputFormat format;
+
+    /** The charts the command draws: the curves stacked, or each alone. */
+    static final class Charts {
+        @Mixin
+        SharedOptions.CurvesChart all;
+
+        @Mixin
+        SharedOptions.OcChart oc;
+
+        @Option(names = "--aoq-chart", paramLabel = "FILE", description = "Draw the AOQ curve alone; .png or .svg.")
+        Path aoq;
+
+        @Option(names = "--ati-chart", paramLabel = "FILE",
+                description = "Draw the ATI curve alone (needs a lot size); .png or .svg.")
+        Path ati;
+
+        @Mixin
+        SharedOptions.AsnChart asn;
+
+        EvaluatePlan.ChartFiles files() {
+            return new EvaluatePlan.ChartFiles(all.file(), oc.file, aoq, ati, asn.file);
+        }
+    }
 }

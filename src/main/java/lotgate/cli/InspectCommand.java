@@ -13,6 +13,7 @@ import java.util.function.Supplier;
 import lotgate.inspection.ResultWords;
 import lotgate.jobs.InspectAtBench;
 import lotgate.jobs.JobException;
+import lotgate.jobs.SheetLayout;
 import lotgate.report.results.BenchRendering;
 import lotgate.sentencing.Stopping;
 import picocli.CommandLine.Command;
@@ -71,7 +72,7 @@ final class InspectCommand implements Runnable {
     @Override
     public void run() {
         InspectAtBench.Bench bench = InspectAtBench.start(new InspectAtBench.Request(planFile, sheet, prefix));
-        ResultWords words = SheetOptions.resultWords(spec, resultWords.mapping);
+        ResultWords words = SheetLayout.resultWords(resultWords.mapping);
         boolean terminal = System.console() != null && input.get() == System.in;
         PrintWriter out = spec.commandLine().getOut();
         out.print(BenchRendering.opening(bench));

@@ -1,10 +1,6 @@
 package lotgate.cli;
 
 import java.nio.file.Path;
-import java.time.LocalDate;
-import java.time.format.DateTimeParseException;
-import lotgate.inspection.Columns;
-import lotgate.inspection.LotDetails;
 import lotgate.jobs.SentenceLot;
 import lotgate.report.results.SentenceRendering;
 import picocli.CommandLine.Command;
@@ -12,7 +8,6 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /** Sentences a lot: reads its inspection sheet, applies a saved plan, and gives the verdict with its evidence. */
@@ -50,51 +45,10 @@ final class SentenceCommand implements Runnable {
     Path sheetFile;
 
     @Mixin
-    SharedOptions.Sheet sheet;
+    SheetOptions sheetOptions;
 
     @Mixin
-    SharedOptions.ColumnNames columnNames;
-
-    @Option(names = "--header-row", paramLabel = "ROW", converter = Values.SheetRow.class,
-            description = "The sheet row that holds the column names (default: the first of the top 50 rows that"
-                    + " names a result, defect class or value column; rows above it, such as a title block, are"
-                    + " passed over). 1 to 1048576.")
-    Integer headerRow;
-
-    @Mixin
-    SharedOptions.ResultWords resultWords;
-
-    @Option(names = "--delimiter", paramLabel = "CHAR",
-            description = "How a CSV sheet separates its values: comma, semicolon or tab (default: decided from the"
-                    + " header row).")
-    String delimiter;
-
-    @Option(names = "--rows", paramLabel = "FIRST-LAST",
-            description = "The sheet rows that form the sample, when the sheet holds more units (e.g. 2-126).")
-    String rows;
-
-    @Option(names = "--lot", paramLabel = "ID", description = "The lot's identifier.")
-    String lotId;
-
-    @Mixin
-    SharedOptions.Supplier supplier;
-
-    @Mixin
-    SharedOptions.Part part;
-
-    @Mixin
-    SharedOptions.LotSize lotSize;
-
-    @Option(names = "--received", paramLabel = "DATE", description = "The day the lot was received (2026-03-14).")
-    String received;
-
-    @Option(names = "--inspector", paramLabel = "NAME", description = "Who inspected the sample.")
-    String inspector;
-
-    @Option(names = "--lot-file", paramLabel = "FILE",
-            description = "Lot details as key/value rows (default: the workbook's 'lot' sheet, or NAME.lot.csv beside"
-                    + " a CSV sheet).")
-    Path lotFile;
+    LotOptions lot;
 
     @Mixin
     SharedOptions.Confidence confidence;
@@ -134,10 +88,11 @@ final class SentenceCommand implements Runnable {
 
     @Override
     public void run() {
-        int[] range = SheetOptions.rowRange(spec, rows);
-        SentenceLot.Request request = new SentenceLot.Request(planFile, sheetFile, sheet.name, columns(),
-                range[0], range[1], givenDetails(), lotFile, confidence.level, !noRecord, supersedes, reason, production,
-                storeOption.location(), new SentenceLot.Outputs(record.file, chart.file(), reports.files));
+        int[] range = sheetOptions.rowRange(spec);
+        SentenceLot.Request request = new SentenceLot.Request(planFile, sheetFile, sheetOptions.sheet.name,
+                sheetOptions.columns(spec), range[0], range[1], lot.given(spec), lot.file, confidence.level, !noRecord,
+                supersedes, reason, production, storeOption.location(), new SentenceLot.Outputs(record.file,
+                chart.file(), reports.files));
         if (!noRecord) {
             storeOption.prepareForRecording();
         }
@@ -154,34 +109,4 @@ final class SentenceCommand implements Runnable {
             throw new Main.Failure(ExitCode.REJECTED, null);
         }
     }
-
-    private LotDetails givenDetails() {
-        LocalDate day = null;
-        if (received != null) {
-            try {
-                day = LocalDate.parse(received.trim());
-            } catch (DateTimeParseException e) {
-                throw new ParameterException(spec.commandLine(), "--received " + received + ": give a date such as"
-                        + " 2026-03-14");
-            }
-        }
-        String[][] ids = {{"--lot", lotId}, {"--supplier", supplier.name}, {"--part", part.name}, {"--inspector", inspector}};
-        for (String[] id : ids) {
-            String problem = lotgate.history.Identifiers.problem(id[0], id[1]);
-            if (problem != null) {
-                throw new ParameterException(spec.commandLine(), problem);
-            }
-        }
-        return new LotDetails(blankToNull(lotId), blankToNull(supplier.name), blankToNull(part.name),
-                lotSize.size == null ? 0 : lotSize.size, day, blankToNull(inspector));
-    }
-
-    private static String blankToNull(String text) {
-        return text == null || text.isBlank() ? null : text.trim();
-    }
-
-    private Columns columns() {
-        return SheetOptions.columns(spec, columnNames.mapping, headerRow, delimiter, resultWords.mapping);
-    }
-
 }

@@ -3,6 +3,7 @@ package lotgate.cli;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /**
@@ -53,14 +54,20 @@ final class SharedOptions {
         }
     }
 
-    /** --oc-chart: the OC curves of the plans compared, on one chart. */
-    static final class OcCurvesChart extends NamedChart {
+    /** --oc-chart: the OC curve alone, or those of the plans compared on one chart. */
+    static final class OcChart {
         @Option(names = "--oc-chart", paramLabel = "FILE")
         Path file;
+    }
+
+    /** --oc-chart where --chart once drew the same (compare). */
+    static final class OcCurvesChart extends NamedChart {
+        @Mixin
+        OcChart chart;
 
         @Override
         Path named() {
-            return file;
+            return chart.file;
         }
     }
 

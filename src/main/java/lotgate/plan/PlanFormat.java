@@ -100,6 +100,17 @@ public final class PlanFormat {
         return JsonTree.indented(toJson(plan)) + "\n";
     }
 
+    /** A plan's name, description, creation time, model and lot size (when it has one), as its file holds them. */
+    public static void putIdentity(ObjectNode node, SavedPlan saved) {
+        node.put("name", saved.name());
+        node.put("description", saved.description());
+        node.put("created", saved.created().toString());
+        node.put("model", saved.model().name());
+        if (saved.lotSize() > 0) {
+            node.put("lotSize", saved.lotSize());
+        }
+    }
+
     static ObjectNode toJson(SavedPlan saved) {
         ObjectNode root = JsonNodeFactory.instance.objectNode();
         root.put("format", FORMAT);
@@ -107,13 +118,7 @@ public final class PlanFormat {
                 && !single.hasGap())
                 && saved.measurement() == null;
         root.put("formatVersion", singleOnly ? SINGLE_ONLY_VERSION : VERSION);
-        root.put("name", saved.name());
-        root.put("description", saved.description());
-        root.put("created", saved.created().toString());
-        root.put("model", saved.model().name());
-        if (saved.lotSize() > 0) {
-            root.put("lotSize", saved.lotSize());
-        }
+        putIdentity(root, saved);
         var classes = root.putArray("classes");
         for (ClassPlan criteria : saved.classes()) {
             ObjectNode entry = classes.addObject();

@@ -154,13 +154,7 @@ public final class Charts {
         }
         XYSeries end = new XYSeries("Where this lot's inspection stopped", false, true);
         end.add(stop, count);
-        XYSeriesCollection data = new XYSeriesCollection();
-        data.addSeries(accept);
-        data.addSeries(reject);
-        data.addSeries(found);
-        data.addSeries(end);
-        data.addSeries(acceptPoints);
-        data.addSeries(rejectPoints);
+        XYSeriesCollection data = collection(accept, reject, found, end, acceptPoints, rejectPoints);
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
         renderer.setSeriesPaint(0, ChartStyle.CALM);
         renderer.setSeriesStroke(0, ChartStyle.limit());
@@ -168,15 +162,9 @@ public final class Charts {
         renderer.setSeriesStroke(1, ChartStyle.limit());
         renderer.setSeriesPaint(2, ChartStyle.DATA);
         renderer.setSeriesStroke(2, new BasicStroke(2.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER));
-        renderer.setSeriesPaint(3, ChartStyle.INK);
-        renderer.setSeriesLinesVisible(3, false);
-        renderer.setSeriesShapesVisible(3, true);
-        renderer.setSeriesShape(3, ChartStyle.observed());
+        marksOnly(renderer, 3, ChartStyle.INK, ChartStyle.observed());
         for (int s = 4; s <= 5; s++) {
-            renderer.setSeriesPaint(s, s == 4 ? ChartStyle.CALM : ChartStyle.ALERT);
-            renderer.setSeriesLinesVisible(s, false);
-            renderer.setSeriesShapesVisible(s, true);
-            renderer.setSeriesShape(s, ChartStyle.designPoint());
+            marksOnly(renderer, s, s == 4 ? ChartStyle.CALM : ChartStyle.ALERT, ChartStyle.designPoint());
             renderer.setSeriesVisibleInLegend(s, false);
         }
         NumberAxis inspected = new NumberAxis("Units inspected");
@@ -229,7 +217,6 @@ public final class Charts {
 
     private static JFreeChart control(String title, List<ControlPoint> points, List<SwitchMark> switches,
             NumberAxis valueAxis, String valueName) {
-        XYSeriesCollection data = new XYSeriesCollection();
         XYSeries values = new XYSeries(valueName, false, true);
         XYSeries centre = new XYSeries("Centre line", false, true);
         XYSeries upper = new XYSeries("Upper control limit", false, true);
@@ -253,12 +240,7 @@ public final class Charts {
                 rejected.add(i, point.value());
             }
         }
-        data.addSeries(values);
-        data.addSeries(centre);
-        data.addSeries(upper);
-        data.addSeries(lower);
-        data.addSeries(outside);
-        data.addSeries(rejected);
+        XYSeriesCollection data = collection(values, centre, upper, lower, outside, rejected);
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
         renderer.setSeriesPaint(0, ChartStyle.DATA);
         renderer.setSeriesStroke(0, new BasicStroke(1.6f));
@@ -270,16 +252,10 @@ public final class Charts {
         renderer.setSeriesStroke(2, ChartStyle.limit());
         renderer.setSeriesPaint(3, ChartStyle.ALERT);
         renderer.setSeriesStroke(3, ChartStyle.limit());
-        renderer.setSeriesPaint(4, ChartStyle.ALERT);
-        renderer.setSeriesLinesVisible(4, false);
-        renderer.setSeriesShapesVisible(4, true);
-        renderer.setSeriesShape(4, ChartStyle.outside());
-        renderer.setSeriesPaint(5, ChartStyle.INK);
-        renderer.setSeriesLinesVisible(5, false);
-        renderer.setSeriesShapesVisible(5, true);
+        marksOnly(renderer, 4, ChartStyle.ALERT, ChartStyle.outside());
+        marksOnly(renderer, 5, ChartStyle.INK, ChartStyle.ring());
         renderer.setSeriesShapesFilled(5, false);
         renderer.setSeriesOutlineStroke(5, new BasicStroke(1.8f));
-        renderer.setSeriesShape(5, ChartStyle.ring());
         renderer.setUseOutlinePaint(false);
         renderer.setDrawOutlines(true);
 
@@ -613,6 +589,23 @@ public final class Charts {
             plot.addRangeMarker(marker);
         }
         return style(plot);
+    }
+
+    /** The series in the order their renderer numbers them. */
+    private static XYSeriesCollection collection(XYSeries... series) {
+        XYSeriesCollection data = new XYSeriesCollection();
+        for (XYSeries one : series) {
+            data.addSeries(one);
+        }
+        return data;
+    }
+
+    /** Draws a series as marks of the given colour and shape, without a line between them. */
+    private static void marksOnly(XYLineAndShapeRenderer renderer, int series, Color colour, Shape shape) {
+        renderer.setSeriesPaint(series, colour);
+        renderer.setSeriesLinesVisible(series, false);
+        renderer.setSeriesShapesVisible(series, true);
+        renderer.setSeriesShape(series, shape);
     }
 
     /** A renderer drawing one series as a 2-point-wide line of the given colour. */

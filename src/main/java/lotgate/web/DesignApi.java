@@ -215,41 +215,36 @@ final class DesignApi {
         return members;
     }
 
+    /** One curve's values at the table's quality levels ({@code y}, null where it has none) and their labels. */
+    private static Map<String, Object> curve(List<CurvePoint> table, Function<CurvePoint, Double> value,
+            Function<Double, String> label) {
+        List<Double> y = table.stream().map(value).toList();
+        return Map.of("y", y, "labels", y.stream().map(label).toList());
+    }
+
+    private static String units(double count) {
+        return String.format(Locale.ROOT, "%.1f units", count);
+    }
+
     /**
      * One drawn plan's curves over the common axis (its quality values added to {@code x} when given), named
      * after its class, with its design points on the OC curve.
      */
     private static Map<String, Object> series(Drawn drawn, Designed designed, PlanCurves.Result curves, List<Double> x) {
-        List<Double> oc = new ArrayList<>();
-        List<String> ocText = new ArrayList<>();
-        List<Double> aoq = new ArrayList<>();
-        List<String> aoqText = new ArrayList<>();
-        List<Double> ati = new ArrayList<>();
-        List<String> atiText = new ArrayList<>();
-        List<Double> asn = new ArrayList<>();
-        List<String> asnText = new ArrayList<>();
-        for (CurvePoint point : curves.points()) {
-            if (x != null) {
-                x.add(point.quality());
-            }
-            oc.add(point.acceptance());
-            ocText.add(Percent.probability(point.acceptance()));
-            aoq.add(point.aoq());
-            aoqText.add(Percent.level(point.aoq()));
-            ati.add(Double.isNaN(point.ati()) ? null : point.ati());
-            atiText.add(Double.isNaN(point.ati()) ? "" : String.format(Locale.ROOT, "%.1f units", point.ati()));
-            asn.add(point.asn());
-            asnText.add(String.format(Locale.ROOT, "%.1f units", point.asn()));
+        List<CurvePoint> table = curves.points();
+        if (x != null) {
+            table.forEach(point -> x.add(point.quality()));
         }
         Map<String, Object> series = new LinkedHashMap<>();
         series.put("name", drawn.defectClass() == null ? designed.label()
                 : drawn.defectClass().label() + ": " + label(drawn.plan()));
-        series.put("oc", Map.of("y", oc, "labels", ocText));
-        series.put("aoq", Map.of("y", aoq, "labels", aoqText));
+        series.put("oc", curve(table, CurvePoint::acceptance, Percent::probability));
+        series.put("aoq", curve(table, CurvePoint::aoq, Percent::level));
         if (designed.lotSize() > 0) {
-            series.put("ati", Map.of("y", ati, "labels", atiText));
+            series.put("ati", curve(table, point -> Double.isNaN(point.ati()) ? null : point.ati(),
+                    ati -> ati == null ? "" : units(ati)));
         }
-        series.put("asn", Map.of("y", asn, "labels", asnText));
+        series.put("asn", curve(table, CurvePoint::asn, DesignApi::units));
         List<Map<String, Object>> points = new ArrayList<>();
         if (drawn.defectClass() != null) {
             designPoint(points, drawn, designed.model(), "AQL", drawn.aql());

@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.List;
 import lotgate.jobs.ShowPlan;
 import lotgate.plan.ClassPlan;
+import lotgate.plan.PlanFormat;
 import lotgate.plan.SavedPlan;
 import lotgate.report.CsvTable;
 import lotgate.report.Json;
@@ -27,13 +28,7 @@ public final class PlanFileRendering {
         ObjectNode node = Json.object();
         node.put("file", planFile.toString());
         node.put("valid", true);
-        node.put("name", saved.name());
-        node.put("description", saved.description());
-        node.put("created", saved.created().toString());
-        node.put("model", saved.model().name());
-        if (saved.lotSize() > 0) {
-            node.put("lotSize", saved.lotSize());
-        }
+        PlanFormat.putIdentity(node, saved);
         node.put("sampleSize", saved.sampleSize());
         if (saved.unclassified()) {
             putClass(node, saved.classes().get(0));
@@ -50,7 +45,7 @@ public final class PlanFileRendering {
     }
 
     private static void putClass(ObjectNode node, ClassPlan criteria) {
-        node.setAll(lotgate.plan.PlanFormat.planJson(criteria.plan()));
+        node.setAll(PlanFormat.planJson(criteria.plan()));
         node.put("aql", criteria.designedFor().aql());
         node.put("alpha", criteria.designedFor().alpha());
         node.put("ltpd", criteria.designedFor().ltpd());
