@@ -30,7 +30,7 @@ import lotgate.files.IsoText;
  */
 public final class HistoryStore implements AutoCloseable {
     /** The schema version this lotgate writes; older stores are migrated when opened. */
-    public static final int SCHEMA_VERSION = 4;
+    public static final int SCHEMA_VERSION = 5;
     static final String GENESIS = "0".repeat(64);
 
     private final StoreLocation location;
@@ -120,17 +120,9 @@ public final class HistoryStore implements AutoCloseable {
                 connection = new org.postgresql.Driver().connect(location.url(), location.postgresProperties(environment));
             } else {
                 SqliteLibrary.prepare();
-                Properties properties = new Properties();
-                properties.setProperty("journal_mode", "WAL");
-                properties.setProperty("synchronous", "FULL");
-                properties.setProperty("busy_timeout", "60000");
-                properties.setProperty("foreign_keys", "true");
-                // lotgate numbers its records itself; without this the driver asks for the new row id after
-                // every insert (a fifth of the time an import spends writing).
-                properties.setProperty("jdbc.get_generated_keys", "false");
                 // The driver itself rather than DriverManager, which would first load and start every JDBC
                 // driver on the class path (PostgreSQL's and its logging: 15 ms of a short command).
-                connection = new org.sqlite.JDBC().connect(location.url(), properties);
+                connection = new org.sqlite.JDBC().connect(location.url(), sqliteSettings());
             }
             if (connection == null) {
                 throw new SQLException("the driver does not accept the address " + location.url());
@@ -150,6 +142,19 @@ public final class HistoryStore implements AutoCloseable {
             throw e;
         }
         return store;
+    }
+
+    /** The settings the store opens a SQLite connection with (the benchmarks open their bare SQL's so too). */
+    public static Properties sqliteSettings() {
+        Properties properties = new Properties();
+        properties.setProperty("journal_mode", "WAL");
+        properties.setProperty("synchronous", "FULL");
+        properties.setProperty("busy_timeout", "60000");
+        properties.setProperty("foreign_keys", "true");
+        // lotgate numbers its records itself; without this the driver asks for the new row id after
+        // every insert (a fifth of the time an import spends writing).
+        properties.setProperty("jdbc.get_generated_keys", "false");
+        return properties;
     }
 
     private static String firstLine(Exception e) {

@@ -24,7 +24,9 @@ import java.util.UUID;
  * <li>the store's identity (a random id, to which a new store's chain is anchored) and the lot key,
  * unique among records, that holds each lot (supplier, part, lot id) to one current record;
  * <li>the column that marks a lot accepted with a count between a reduced plan's acceptance and rejection
- * numbers, which reinstates normal inspection.
+ * numbers, which reinstates normal inspection;
+ * <li>an index of the corrections by the record each supersedes, so that finding a supplier's superseded
+ * records reads the corrections only, not every record of the store.
  * </ol>
  */
 final class Migrations {
@@ -37,6 +39,7 @@ final class Migrations {
             case 2 -> version2(connection);
             case 3 -> version3(connection);
             case 4 -> version4(connection);
+            case 5 -> version5(connection);
             default -> throw new IllegalArgumentException("no schema version " + version);
         }
     }
@@ -163,6 +166,13 @@ final class Migrations {
                 update.setLong(1, seq);
                 update.executeUpdate();
             }
+        }
+    }
+
+    private static void version5(Connection connection) throws SQLException {
+        try (Statement statement = connection.createStatement()) {
+            // Partial: a store holds few corrections, and the index costs the other records nothing.
+            statement.execute("CREATE INDEX lot_record_supersedes ON lot_record (supersedes) WHERE supersedes > 0");
         }
     }
 

@@ -84,8 +84,8 @@ class BulkAppendTest {
                 "SELECT type, name, tbl_name, sql FROM sqlite_master WHERE type = 'index' ORDER BY name"}) {
             assertEquals(rows(stores[0], query), rows(stores[1], query), query);
         }
-        assertEquals(3, rows(stores[1], "SELECT name FROM sqlite_master WHERE type = 'index' AND sql IS NOT NULL")
-                .size(), "the lot key, supplier and defect indexes");
+        assertEquals(4, rows(stores[1], "SELECT name FROM sqlite_master WHERE type = 'index' AND sql IS NOT NULL")
+                .size(), "the lot key, supplier, corrections and defect indexes");
     }
 
     @Test

@@ -125,6 +125,62 @@ class HistoryStoreTest {
         }
     }
 
+    /** The first column of every row of a query. */
+    private static List<String> query(String location, String queryText) throws SQLException {
+        String url = location.startsWith("jdbc:") ? location : "jdbc:sqlite:" + location;
+        List<String> values = new ArrayList<>();
+        try (Connection connection = DriverManager.getConnection(url); Statement statement = connection.createStatement();
+                java.sql.ResultSet rows = statement.executeQuery(queryText)) {
+            while (rows.next()) {
+                values.add(rows.getString(1));
+            }
+        }
+        return values;
+    }
+
+    @ParameterizedTest
+    @MethodSource("kinds")
+    void supersededRecordsAreFoundThroughAnIndexOfTheCorrectionsAfterMigration(String kind) throws SQLException {
+        String location = Stores.fresh(kind, folder);
+        Object before;
+        try (HistoryStore old = HistoryStore.open(location, 4)) {
+            old.append(Stores.lot("Invented Supplier", "P-1", "L-1", false, 5), Stores.now());
+            old.append(Stores.lot("Invented Supplier", "P-1", "L-2", true, 1), Stores.now());
+            old.append(Stores.lot("Invented Supplier", "P-1", "L-1", true, 2).put("supersedes", 1)
+                    .put("reason", "recount (invented)"), Stores.now());
+            before = old.defectTypesByLot("Invented Supplier", null);
+        }
+        try (HistoryStore store = HistoryStore.open(location)) {
+            assertEquals(HistoryStore.SCHEMA_VERSION, store.schemaVersion());
+            assertEquals(before, store.defectTypesByLot("Invented Supplier", null));
+            assertEquals(java.util.Map.of(2L, java.util.Map.of("burr", 1L), 3L, java.util.Map.of("burr", 2L)),
+                    store.defectTypesByLot("Invented Supplier", null), "the superseded record's counts are left out");
+            assertTrue(store.verify().intact(), store.verify().problem());
+        }
+        if (kind.equals("sqlite")) {
+            assertEquals(List.of("lot_record_supersedes"), query(location, "SELECT name FROM sqlite_master WHERE"
+                    + " type = 'index' AND name = 'lot_record_supersedes'"));
+            String plan = String.join(" ", planOf(location, "SELECT supersedes FROM lot_record WHERE supersedes > 0"));
+            assertTrue(plan.contains("lot_record_supersedes"), plan);
+        } else {
+            assertEquals(List.of("lot_record_supersedes"), query(location, "SELECT indexname FROM pg_indexes WHERE"
+                    + " schemaname = current_schema() AND indexname = 'lot_record_supersedes'"));
+        }
+    }
+
+    /** SQLite's plan of a query, its detail column joined. */
+    private static List<String> planOf(String location, String queryText) throws SQLException {
+        List<String> details = new ArrayList<>();
+        try (Connection connection = DriverManager.getConnection("jdbc:sqlite:" + location);
+                Statement statement = connection.createStatement();
+                java.sql.ResultSet rows = statement.executeQuery("EXPLAIN QUERY PLAN " + queryText)) {
+            while (rows.next()) {
+                details.add(rows.getString("detail"));
+            }
+        }
+        return details;
+    }
+
     @ParameterizedTest
     @MethodSource("kinds")
     void aLotThatReinstatesNormalInspectionIsMarkedAfterMigrationAndOnAppend(String kind) throws SQLException {
