@@ -58,8 +58,13 @@ final class LeastInspectionCommand implements Runnable {
     @Override
     public void run() {
         SaveTarget target = DesignCommand.SaveOptions.target(save);
-        DesignLeastInspection.Result result = DesignLeastInspection.run(new DesignLeastInspection.Request(
-                models.lotSize(), ltpd.level, beta.beta, aoql, processAverage, models.named(), target, schemes.name));
+        DesignLeastInspection.Request request = new DesignLeastInspection.Request(
+                models.lotSize(), ltpd.level, beta.beta, aoql, processAverage, models.named(), target, schemes.name);
+        DesignLeastInspection.Result result;
+        try (Progress search = Progress.onTerminal("least-inspection: double plans evaluated", 0,
+                format.kind == OutputFormat.Kind.text && request.isDouble())) {
+            result = DesignLeastInspection.run(request, search::at);
+        }
         format.print(result, LeastInspectionRendering::text, LeastInspectionRendering::json,
                 LeastInspectionRendering::csv);
     }

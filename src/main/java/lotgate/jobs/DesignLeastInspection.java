@@ -1,5 +1,6 @@
 package lotgate.jobs;
 
+import java.util.function.LongConsumer;
 import lotgate.plan.PlanFormat;
 import lotgate.plan.SavedPlan;
 import lotgate.report.Percent;
@@ -78,6 +79,14 @@ public final class DesignLeastInspection {
 
     /** Checks the request, finds the least-inspection plan, compares it, and saves it when asked. */
     public static Result run(Request request) {
+        return run(request, count -> { });
+    }
+
+    /**
+     * As {@link #run(Request)}, telling {@code plansEvaluated} how many double plans the double search has
+     * evaluated so far (it may take seconds for a large lot; the single search takes milliseconds and tells nothing).
+     */
+    public static Result run(Request request, LongConsumer plansEvaluated) {
         int lotSize = Checks.requiredLotSize(request.lotSize(), "the least inspection", "a lot needs at least 2 units");
         if (lotSize > 1_000_000) {
             throw JobException.invalid("lotSize", "--lot-size " + lotSize + ": least-inspection plans are computed"
@@ -130,7 +139,7 @@ public final class DesignLeastInspection {
                 ? designer.forLtpd(request.ltpd(), request.beta(), average)
                 : designer.forAoql(request.aoql(), average);
         if (request.isDouble()) {
-            return runDouble(request, model, lotSize, found);
+            return runDouble(request, model, lotSize, found, plansEvaluated);
         }
         if (found.inspectEveryUnit()) {
             if (request.save() != null) {
@@ -150,11 +159,12 @@ public final class DesignLeastInspection {
     }
 
     /** The double plan under the LTPD protection, beside the single least-inspection plan. */
-    private static Result runDouble(Request request, OcModel model, int lotSize, LeastInspectionDesigner.Result single) {
+    private static Result runDouble(Request request, OcModel model, int lotSize, LeastInspectionDesigner.Result single,
+            LongConsumer plansEvaluated) {
         LeastInspectionDoubleSearch.Result found;
         try {
             found = new LeastInspectionDoubleSearch(model, lotSize).forLtpd(request.ltpd(), request.beta(),
-                    request.processAverage());
+                    request.processAverage(), plansEvaluated);
         } catch (LeastInspectionDoubleSearch.OverBudget e) {
             throw JobException.invalid("scheme", "--scheme double: " + e.getMessage() + "; use the single plan");
         }

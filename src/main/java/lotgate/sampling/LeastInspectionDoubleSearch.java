@@ -1,5 +1,7 @@
 package lotgate.sampling;
 
+import java.util.function.LongConsumer;
+
 /**
  * Finds the double plan with the least average total inspection (ATI) at a process average, under rectifying
  * inspection, among the plans whose P(accept) at the LTPD is at most the consumer's risk: the Dodge-Romig
@@ -39,6 +41,7 @@ public final class LeastInspectionDoubleSearch {
     private final long budget;
     private long evaluated;
     private long work;
+    private LongConsumer plansEvaluated = count -> { };
 
     /**
      * @param model   the OC model (a hypergeometric model must be for the same lot size)
@@ -85,6 +88,15 @@ public final class LeastInspectionDoubleSearch {
      * @throws OverBudget when the search would need more than its budget of work
      */
     public Result forLtpd(double ltpd, double beta, double processAverage) {
+        return forLtpd(ltpd, beta, processAverage, count -> { });
+    }
+
+    /**
+     * As {@link #forLtpd(double, double, double)}, telling {@code plansEvaluated} the number of plans whose risk
+     * has been evaluated so far after each one (for a progress line: a large lot may take seconds).
+     */
+    public Result forLtpd(double ltpd, double beta, double processAverage, LongConsumer plansEvaluated) {
+        this.plansEvaluated = plansEvaluated;
         if (!(processAverage >= 0 && processAverage < model.maxQuality())) {
             throw new IllegalArgumentException("the process average must be 0 or more and below "
                     + model.maxQuality() + ", got " + processAverage);
@@ -278,6 +290,7 @@ public final class LeastInspectionDoubleSearch {
 
     private boolean protects(int n1, int c1, int n2, int c2, double point, double beta) {
         evaluated++;
+        plansEvaluated.accept(evaluated);
         work += (long) (c2 - c1) * (c2 + 1);
         if (work > budget) {
             throw new OverBudget(evaluated - 1);

@@ -175,6 +175,22 @@ class TableJobsTest {
     }
 
     @Test
+    void theDoubleSearchCountsEachPlanItEvaluatesForAProgressLine() {
+        java.util.List<Long> told = new java.util.ArrayList<>();
+        DesignLeastInspection.Result result = DesignLeastInspection.run(new DesignLeastInspection.Request(5000, 0.05,
+                0.10, null, 0.005, null, null, "double"), told::add);
+        long compared = result.doubleFound().found().plansCompared();
+        assertEquals(compared, told.size());
+        for (int i = 0; i < told.size(); i++) {
+            assertEquals(i + 1, told.get(i));
+        }
+        java.util.List<Long> single = new java.util.ArrayList<>();
+        DesignLeastInspection.run(new DesignLeastInspection.Request(5000, 0.05, 0.10, null, 0.005, null, null, null),
+                single::add);
+        assertTrue(single.isEmpty(), "the single search tells nothing");
+    }
+
+    @Test
     void theDoubleSchemeRefusesAnAoqlProtectionAndAnUnknownSchemeBeforeSaving() {
         Path file = folder.resolve("none.json");
         for (DesignLeastInspection.Request bad : List.of(
