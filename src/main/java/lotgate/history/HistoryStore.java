@@ -490,7 +490,8 @@ public final class HistoryStore implements AutoCloseable {
                 long last = first;
                 String previous = head.hash();
                 List<String> indexes = bulk >= BULK && bulk >= first ? dropIndexes() : List.of();
-                try (Migrations.RecordInserter inserter = new Migrations.RecordInserter(connection, version)) {
+                try (Migrations.RecordInserter inserter = new Migrations.RecordInserter(connection, version,
+                        !indexes.isEmpty())) {
                     for (ObjectNode content : contents) {
                         String problem = identifierProblem(content);
                         if (problem != null) {
@@ -506,6 +507,7 @@ public final class HistoryStore implements AutoCloseable {
                                     Migrations.text(content, "lot"));
                             long supersedes = content.path("supersedes").asLong(0);
                             if (supersedes > 0) {
+                                inserter.flush();
                                 release(supersedes);
                             }
                         }
@@ -520,6 +522,7 @@ public final class HistoryStore implements AutoCloseable {
                         each.accept(new StoredRecord(seq, recordedAt, text, previous, hash));
                         previous = hash;
                     }
+                    inserter.flush();
                 }
                 createIndexes(indexes);
                 try (PreparedStatement update = connection.prepareStatement("UPDATE chain_head SET seq = ?, hash = ?"

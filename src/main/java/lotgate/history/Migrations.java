@@ -222,75 +222,157 @@ final class Migrations {
         }
     }
 
-    /** Inserts records with statements prepared once, for appends of many records in one transaction. */
+    /**
+     * Inserts records with statements prepared once, for appends of many records in one transaction. A bulk
+     * load's inserter writes {@link #BULK_ROWS} records (and defect counts) to a statement, which saves the
+     * driver's work per statement; a row that breaks a constraint then fails a whole statement, so it is only for
+     * a load that fails as a whole anyway (see {@code HistoryStore.appendEach}). Its rows reach the database at
+     * {@link #flush}, at the latest.
+     */
     static final class RecordInserter implements AutoCloseable {
+        static final int BULK_ROWS = 16;
+        private static final String DEFECT_MARKS = "(?, ?, ?, ?, ?)";
         private final int version;
+        private final int rows;
+        private final int width;
         private final PreparedStatement record;
         private final PreparedStatement defects;
+        private final PreparedStatement records;
+        private final PreparedStatement defectRows;
+        private final Object[][] pendingRecords;
+        private final Object[][] pendingDefects;
+        private int recordsPending;
+        private int defectsPending;
 
         RecordInserter(Connection connection, int version) throws SQLException {
+            this(connection, version, false);
+        }
+
+        RecordInserter(Connection connection, int version, boolean bulk) throws SQLException {
             this.version = version;
+            this.rows = bulk ? BULK_ROWS : 1;
             String columns = "seq, recorded_at, kind, supplier, part, lot, lot_size, received, verdict, inspected,"
                     + " nonconforming, supersedes, content, previous_hash, hash";
-            String marks = "?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?";
             if (version >= 2) {
                 columns += ", severity, production";
-                marks += ", ?, ?";
             }
             if (version >= 3) {
                 columns += ", lot_key";
-                marks += ", ?";
             }
             if (version >= 4) {
                 columns += ", reinstates";
-                marks += ", ?";
             }
-            record = connection.prepareStatement("INSERT INTO lot_record (" + columns + ") VALUES (" + marks + ")");
-            defects = version >= 2 ? connection.prepareStatement("INSERT INTO defect_count (seq, supplier, part,"
-                    + " defect, units) VALUES (?, ?, ?, ?, ?)") : null;
+            width = columns.split(",").length;
+            String marks = "(" + String.join(", ", java.util.Collections.nCopies(width, "?")) + ")";
+            String insertRecords = "INSERT INTO lot_record (" + columns + ") VALUES ";
+            String insertDefects = "INSERT INTO defect_count (seq, supplier, part, defect, units) VALUES ";
+            record = connection.prepareStatement(insertRecords + marks);
+            defects = version >= 2 ? connection.prepareStatement(insertDefects + DEFECT_MARKS) : null;
+            records = bulk ? connection.prepareStatement(insertRecords + String.join(", ",
+                    java.util.Collections.nCopies(rows, marks))) : null;
+            defectRows = bulk && version >= 2 ? connection.prepareStatement(insertDefects + String.join(", ",
+                    java.util.Collections.nCopies(rows, DEFECT_MARKS))) : null;
+            pendingRecords = new Object[rows][];
+            pendingDefects = new Object[rows][];
         }
 
         void insert(long seq, Instant recordedAt, String text, JsonNode content, String previous, String hash,
                 String lotKey) throws SQLException {
-            PreparedStatement insert = record;
-            insert.setLong(1, seq);
-            insert.setString(2, recordedAt.toString());
-            insert.setString(3, text(content, "kind"));
-            insert.setString(4, text(content, "supplier"));
-            insert.setString(5, text(content, "part"));
-            insert.setString(6, text(content, "lot"));
-            insert.setInt(7, number(content, "lotSize"));
-            insert.setString(8, text(content, "received"));
-            insert.setString(9, text(content, "verdict"));
-            insert.setInt(10, number(content, "inspected"));
-            insert.setInt(11, number(content, "nonconforming"));
-            insert.setLong(12, content.path("supersedes").asLong(0));
-            insert.setString(13, text);
-            insert.setString(14, previous);
-            insert.setString(15, hash);
+            Object[] values = new Object[width];
+            values[0] = seq;
+            values[1] = recordedAt.toString();
+            values[2] = text(content, "kind");
+            values[3] = text(content, "supplier");
+            values[4] = text(content, "part");
+            values[5] = text(content, "lot");
+            values[6] = number(content, "lotSize");
+            values[7] = text(content, "received");
+            values[8] = text(content, "verdict");
+            values[9] = number(content, "inspected");
+            values[10] = number(content, "nonconforming");
+            values[11] = content.path("supersedes").asLong(0);
+            values[12] = text;
+            values[13] = previous;
+            values[14] = hash;
             if (version >= 2) {
-                insert.setString(16, text(content, "severity"));
-                insert.setString(17, text(content, "production"));
+                values[15] = text(content, "severity");
+                values[16] = text(content, "production");
             }
             if (version >= 3) {
-                insert.setString(18, lotKey);
+                values[17] = lotKey;
             }
             if (version >= 4) {
-                insert.setInt(19, reinstates(content));
+                values[18] = reinstates(content);
             }
-            insert.executeUpdate();
-            if (version >= 2) {
-                insertDefects(defects, seq, content);
+            if (rows == 1) {
+                bind(record, 0, values);
+                record.executeUpdate();
+                if (version >= 2) {
+                    insertDefects(defects, seq, content);
+                }
+                return;
+            }
+            pendingRecords[recordsPending++] = values;
+            if (recordsPending == rows) {
+                recordsPending = write(records, record, pendingRecords, recordsPending);
+            }
+            JsonNode types = content.get("defectTypes");
+            if (version >= 2 && types != null && types.isObject()) {
+                var fields = types.fields();
+                while (fields.hasNext()) {
+                    var entry = fields.next();
+                    pendingDefects[defectsPending++] = new Object[] {seq, values[3], values[4], entry.getKey(),
+                            entry.getValue().asLong()};
+                    if (defectsPending == rows) {
+                        defectsPending = write(defectRows, defects, pendingDefects, defectsPending);
+                    }
+                }
+            }
+        }
+
+        /** Writes the rows not yet written. */
+        void flush() throws SQLException {
+            recordsPending = write(records, record, pendingRecords, recordsPending);
+            defectsPending = write(defectRows, defects, pendingDefects, defectsPending);
+        }
+
+        /** Writes pending rows, all in one statement when they fill it, else one by one; returns 0. */
+        private static int write(PreparedStatement full, PreparedStatement one, Object[][] pending, int count)
+                throws SQLException {
+            if (count == pending.length && full != null) {
+                for (int i = 0; i < count; i++) {
+                    bind(full, i * pending[i].length, pending[i]);
+                }
+                full.executeUpdate();
+            } else {
+                for (int i = 0; i < count; i++) {
+                    bind(one, 0, pending[i]);
+                    one.executeUpdate();
+                }
+            }
+            java.util.Arrays.fill(pending, null);
+            return 0;
+        }
+
+        /** Binds a row's values from parameter {@code offset + 1} on: whole numbers as such, the rest as text. */
+        private static void bind(PreparedStatement statement, int offset, Object[] values) throws SQLException {
+            for (int i = 0; i < values.length; i++) {
+                Object value = values[i];
+                if (value instanceof Integer number) {
+                    statement.setInt(offset + i + 1, number);
+                } else if (value instanceof Long number) {
+                    statement.setLong(offset + i + 1, number);
+                } else {
+                    statement.setString(offset + i + 1, (String) value);
+                }
             }
         }
 
         @Override
         public void close() throws SQLException {
-            try {
-                record.close();
-            } finally {
-                if (defects != null) {
-                    defects.close();
+            for (PreparedStatement statement : new PreparedStatement[] {record, defects, records, defectRows}) {
+                if (statement != null) {
+                    statement.close();
                 }
             }
         }
