@@ -20,7 +20,8 @@ final class CompareCommand implements Runnable {
     @Override
     public void run() {
         format.print(ComparePlans.run(new ComparePlans.Request(plans, models.named(), models.lotSize(),
-                aql.level, ltpd.level, chart.file(), asnChart.file)), CompareRendering::text, CompareRendering::json, CompareRendering::csv);
+                marked.aql.level, marked.ltpd.level, chart.file(), asnChart.file)), CompareRendering::text,
+                CompareRendering::json, CompareRendering::csv);
     }
 
     @Parameters(arity = "2..*", paramLabel = "PLAN", description = "Two or more plans: plans/*.json files or n,c.")
@@ -30,10 +31,7 @@ final class CompareCommand implements Runnable {
     ModelOptions models;
 
     @Mixin
-    SharedOptions.Aql aql;
-
-    @Mixin
-    SharedOptions.Ltpd ltpd;
+    MarkedLevels marked;
 
     @Mixin
     SharedOptions.OcCurvesChart chart;

@@ -23,8 +23,8 @@ final class CurveCommand implements Runnable {
     @Override
     public void run() {
         format.print(EvaluatePlan.run(new EvaluatePlan.Request(planFile, defectClass, sampleSize.n, acceptance.c,
-                models.named(), models.lotSize(), aql.level, ltpd.level, upTo, steps, charts.files(), curtailed.on)),
-                CurveRendering::text, CurveRendering::json, CurveRendering::csv);
+                models.named(), models.lotSize(), marked.aql.level, marked.ltpd.level, upTo, steps, charts.files(),
+                curtailed.on)), CurveRendering::text, CurveRendering::json, CurveRendering::csv);
     }
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "PLAN", description = "A saved plan file (plans/*.json).")
@@ -44,10 +44,7 @@ final class CurveCommand implements Runnable {
     String defectClass;
 
     @Mixin
-    SharedOptions.Aql aql;
-
-    @Mixin
-    SharedOptions.Ltpd ltpd;
+    MarkedLevels marked;
 
     @Option(names = "--up-to", paramLabel = "LEVEL", converter = Values.Quality.class,
             description = "Highest incoming quality in the table and charts (default: a round level just past"

@@ -1,8 +1,10 @@
 package lotgate.inspection;
 
+import java.util.Collections;
 import java.util.EnumMap;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Objects;
 
 /**
  * How an inspection sheet's table is laid out: which header names stand for which column (the default names
@@ -10,7 +12,7 @@ import java.util.Map;
  * row holds them (searched for, or given), how a CSV sheet separates its values (decided, or given), and which
  * words a result column holds.
  */
-public final class Columns {
+public record Columns(Map<Role, String> names, int headerRow, Character delimiter, ResultWords resultWords) {
 
     /** What a column of an inspection sheet holds. */
     public enum Role {
@@ -21,67 +23,41 @@ public final class Columns {
         }
     }
 
-    private final Map<Role, String> names = new EnumMap<>(Role.class);
-    private int headerRow;
-    private Character delimiter;
-    private ResultWords words = ResultWords.standard();
-
-    private Columns() {
-        for (Role role : Role.values()) {
-            names.put(role, role.label());
+    /**
+     * The header name of each role, the header's sheet row (1 for the first; 0: searched for), the CSV separator
+     * given (null: decided from the header row) and the result words.
+     */
+    public Columns {
+        if (headerRow < 0 || headerRow > Cell.MAX_ROW) {
+            throw new IllegalArgumentException("header row " + headerRow + " is not a row of a sheet (1 to "
+                    + Cell.MAX_ROW + ")");
         }
-    }
-
-    private Columns copy() {
-        Columns copy = new Columns();
-        copy.names.putAll(names);
-        copy.headerRow = headerRow;
-        copy.delimiter = delimiter;
-        copy.words = words;
-        return copy;
+        names = Collections.unmodifiableMap(new EnumMap<>(names));
+        Objects.requireNonNull(resultWords, "resultWords");
     }
 
     /** These columns with the header on the given sheet row (1 for the first; 0: searched for). */
     public Columns withHeaderRow(int row) {
-        if (row < 0 || row > Cell.MAX_ROW) {
-            throw new IllegalArgumentException("header row " + row + " is not a row of a sheet (1 to " + Cell.MAX_ROW
-                    + ")");
-        }
-        Columns copy = copy();
-        copy.headerRow = row;
-        return copy;
+        return new Columns(names, row, delimiter, resultWords);
     }
 
     /** These columns, a CSV sheet's values separated by the character given rather than a decided one. */
     public Columns withDelimiter(char given) {
-        Columns copy = copy();
-        copy.delimiter = given;
-        return copy;
+        return new Columns(names, headerRow, given, resultWords);
     }
 
     /** These columns with the result words given. */
     public Columns withResultWords(ResultWords given) {
-        Columns copy = copy();
-        copy.words = given;
-        return copy;
+        return new Columns(names, headerRow, delimiter, given);
     }
 
-    /** The header's sheet row, or 0 when it is searched for. */
-    public int headerRow() {
-        return headerRow;
-    }
-
-    /** The CSV separator given, or null when it is decided from the header row. */
-    public Character delimiter() {
-        return delimiter;
-    }
-
-    public ResultWords resultWords() {
-        return words;
-    }
-
+    /** The roles' own names as headers, the header searched for, the separator decided, the standard words. */
     public static Columns standard() {
-        return new Columns();
+        Map<Role, String> names = new EnumMap<>(Role.class);
+        for (Role role : Role.values()) {
+            names.put(role, role.label());
+        }
+        return new Columns(names, 0, null, ResultWords.standard());
     }
 
     /**
@@ -90,7 +66,7 @@ public final class Columns {
      * @throws IllegalArgumentException naming the bad pair
      */
     public static Columns mapped(String mapping) {
-        Columns columns = new Columns();
+        Map<Role, String> names = new EnumMap<>(standard().names());
         for (String pair : mapping.split(",")) {
             if (pair.isBlank()) {
                 continue;
@@ -114,9 +90,9 @@ public final class Columns {
             if (header.isEmpty()) {
                 throw new IllegalArgumentException("no header name given for " + roleName);
             }
-            columns.names.put(role, header);
+            names.put(role, header);
         }
-        return columns;
+        return new Columns(names, 0, null, ResultWords.standard());
     }
 
     /** The role a header names (case and surrounding spaces ignored), or null. */

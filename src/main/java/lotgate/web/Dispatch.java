@@ -32,10 +32,8 @@ final class Dispatch extends Handler.Abstract {
             if (reply == null) {
                 reply = site.answer(exchange);
             }
-        } catch (FieldError error) {
-            reply = error.reply();
         } catch (Exchange.Refusal refusal) {
-            reply = Reply.text(refusal.status(), refusal.getMessage());
+            reply = refusal.reply();
         } catch (Exception | Error e) {
             reply = Reply.text(500, "internal fault: " + e.getClass().getSimpleName()
                     + " (run the command for the same job with --debug and report it)");

@@ -126,7 +126,7 @@ final class Exchange {
     }
 
     /** A request the workbench will not serve, with the HTTP status and the reason shown to the user. */
-    static final class Refusal extends RuntimeException {
+    static class Refusal extends RuntimeException {
         private static final long serialVersionUID = 1L;
         private final int status;
 
@@ -137,6 +137,11 @@ final class Exchange {
 
         int status() {
             return status;
+        }
+
+        /** The answer: the reason as plain text. */
+        Reply reply() {
+            return Reply.text(status, getMessage());
         }
     }
 }

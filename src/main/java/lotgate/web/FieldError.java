@@ -1,12 +1,12 @@
 package lotgate.web;
 
 /** A refusal about one field of a form, in the words the command would use; answered as JSON (400). */
-final class FieldError extends RuntimeException {
+final class FieldError extends Exchange.Refusal {
     private static final long serialVersionUID = 1L;
     private final String field;
 
     FieldError(String field, String message) {
-        super(message, null, false, false);
+        super(400, message);
         this.field = field;
     }
 
@@ -14,7 +14,8 @@ final class FieldError extends RuntimeException {
         return field;
     }
 
+    @Override
     Reply reply() {
-        return JsonText.refused(400, field, getMessage());
+        return JsonText.refused(status(), field, getMessage());
     }
 }
