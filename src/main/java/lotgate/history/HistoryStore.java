@@ -700,9 +700,7 @@ public final class HistoryStore implements AutoCloseable {
 
     /** The lots and actions of a supplier (all when null) and part (all when null), in record order. */
     public List<LotRow> rows(String supplier, String part) {
-        StringBuilder sql = new StringBuilder("SELECT seq, recorded_at, kind, supplier, part, lot, lot_size, received,"
-                + " verdict, inspected, nonconforming, severity, production, supersedes, hash, "
-                + (version >= 4 ? "reinstates" : "0") + " FROM lot_record WHERE 1 = 1");
+        StringBuilder sql = new StringBuilder("SELECT " + rowColumns() + " FROM lot_record WHERE 1 = 1");
         List<String> values = ofSupplierAndPart(sql, supplier, part);
         sql.append(" ORDER BY seq");
         return read("read the lots", () -> {
@@ -718,6 +716,68 @@ public final class HistoryStore implements AutoCloseable {
                 }
             }
             return rows;
+        });
+    }
+
+    /** The columns {@link #row} reads, in its order. */
+    private String rowColumns() {
+        return "seq, recorded_at, kind, supplier, part, lot, lot_size, received, verdict, inspected, nonconforming,"
+                + " severity, production, supersedes, hash, " + (version >= 4 ? "reinstates" : "0");
+    }
+
+    /**
+     * What an audit reads of one supplier and part, in one snapshot.
+     *
+     * @param rows         the records, as {@link #rows} lists them
+     * @param defectsByLot each lot's defect counts, as {@link #defectTypesByLot} reads them
+     * @param measured     the lots judged on measurements, as {@link #measuredLots} reads them
+     * @param contents     the content of each lot not accepted or judged on measurements, by sequence number
+     */
+    public record AuditReading(List<LotRow> rows, Map<Long, Map<String, Long>> defectsByLot,
+            List<MeasurementCharts.Row> measured, Map<Long, String> contents) {
+        /** The content of a lot that was not accepted (its decision record holds the evidence). */
+        public JsonNode content(long seq) {
+            return new StoredRecord(seq, null, contents.get(seq), null, null).json();
+        }
+    }
+
+    /**
+     * Reads what an audit of a supplier (not null) and part (null: all) needs in one transaction: its records with
+     * the content of the lots the audit shows more of in the same pass, then its lots' defect counts. The content
+     * of a rejected lot used to be read by a query of its own, and the measured lots by a second pass.
+     */
+    public AuditReading auditReading(String supplier, String part) {
+        StringBuilder sql = new StringBuilder("SELECT " + rowColumns() + ", CASE WHEN kind = 'lot' AND (verdict IS NULL"
+                + " OR verdict <> 'accept' OR content LIKE ?) THEN content END, CASE WHEN kind = 'lot' AND content"
+                + " LIKE ? THEN 1 ELSE 0 END FROM lot_record WHERE 1 = 1");
+        List<String> values = ofSupplierAndPart(sql, supplier, part);
+        sql.append(" ORDER BY seq");
+        return read("read the supplier's lots", () -> {
+            List<LotRow> rows = new ArrayList<>();
+            List<MeasurementCharts.Row> measured = new ArrayList<>();
+            Map<Long, String> contents = new HashMap<>();
+            try (PreparedStatement query = connection.prepareStatement(sql.toString())) {
+                query.setString(1, MEASURED_RECORDING);
+                query.setString(2, MEASURED_RECORDING);
+                for (int i = 0; i < values.size(); i++) {
+                    query.setString(i + 3, values.get(i));
+                }
+                try (ResultSet result = query.executeQuery()) {
+                    while (result.next()) {
+                        LotRow row = row(result);
+                        rows.add(row);
+                        String content = result.getString(17);
+                        if (content != null) {
+                            contents.put(row.seq(), content);
+                        }
+                        MeasurementCharts.Row lot = result.getInt(18) == 0 ? null : measured(row.seq(), content);
+                        if (lot != null) {
+                            measured.add(lot);
+                        }
+                    }
+                }
+            }
+            return new AuditReading(rows, defectsByLot(supplier, part), measured, contents);
         });
     }
 
@@ -776,25 +836,35 @@ public final class HistoryStore implements AutoCloseable {
                 if (part != null) {
                     query.setString(index++, part);
                 }
-                query.setString(index, "%\"recording\":\"measurements\"%");
+                query.setString(index, MEASURED_RECORDING);
                 try (ResultSet result = query.executeQuery()) {
                     while (result.next()) {
-                        com.fasterxml.jackson.databind.JsonNode content = new StoredRecord(result.getLong(1), null,
-                                result.getString(2), null, null).json();
-                        com.fasterxml.jackson.databind.JsonNode measured = content.path("decision").path("measurement");
-                        if (measured.isMissingNode()) {
-                            continue;
+                        MeasurementCharts.Row row = measured(result.getLong(1), result.getString(2));
+                        if (row != null) {
+                            rows.add(row);
                         }
-                        String received = content.path("received").isTextual() ? content.path("received").asText() : null;
-                        rows.add(new MeasurementCharts.Row(result.getLong(1), content.path("lot").asText(),
-                                received == null ? null : LocalDate.parse(received), measured.path("n").asInt(),
-                                measured.path("mean").asDouble(), measured.path("sampleStandardDeviation").asDouble(),
-                                measured.path("characteristic").asText(""), measured.path("unit").asText("")));
                     }
                 }
             }
             return rows;
         });
+    }
+
+    /** What a lot judged on measurements records of it (a LIKE pattern over its content, which may miss). */
+    private static final String MEASURED_RECORDING = "%\"recording\":\"measurements\"%";
+
+    /** A lot's sample size, mean and standard deviation from its decision record, or null when it has none. */
+    private static MeasurementCharts.Row measured(long seq, String text) {
+        JsonNode content = new StoredRecord(seq, null, text, null, null).json();
+        JsonNode measured = content.path("decision").path("measurement");
+        if (measured.isMissingNode()) {
+            return null;
+        }
+        String received = content.path("received").isTextual() ? content.path("received").asText() : null;
+        return new MeasurementCharts.Row(seq, content.path("lot").asText(), received == null ? null
+                : LocalDate.parse(received), measured.path("n").asInt(), measured.path("mean").asDouble(),
+                measured.path("sampleStandardDeviation").asDouble(), measured.path("characteristic").asText(""),
+                measured.path("unit").asText(""));
     }
 
     /** The record that holds a lot now (its latest correction, or the lot's only record), or 0 if none. */
@@ -866,15 +936,18 @@ public final class HistoryStore implements AutoCloseable {
      * of a period sums those of the period's lots.
      */
     public Map<Long, Map<String, Long>> defectTypesByLot(String supplier, String part) {
+        return read("read the defect types", () -> defectsByLot(supplier, part));
+    }
+
+    private Map<Long, Map<String, Long>> defectsByLot(String supplier, String part) throws SQLException {
+        // The partial index of the corrections (schema 5) keeps the subquery from reading every record.
         String sql = "SELECT seq, defect, units FROM defect_count WHERE supplier = ?"
                 + (part == null ? "" : " AND part = ?")
                 + " AND seq NOT IN (SELECT supersedes FROM lot_record WHERE supersedes > 0)";
-        return read("read the defect types", () -> {
-            Map<Long, Map<String, Long>> byLot = new java.util.HashMap<>();
-            eachRow(sql, supplier, part, result -> byLot.computeIfAbsent(result.getLong(1),
-                    k -> new LinkedHashMap<>()).merge(result.getString(2), result.getLong(3), Long::sum));
-            return byLot;
-        });
+        Map<Long, Map<String, Long>> byLot = new HashMap<>();
+        eachRow(sql, supplier, part, result -> byLot.computeIfAbsent(result.getLong(1),
+                k -> new LinkedHashMap<>()).merge(result.getString(2), result.getLong(3), Long::sum));
+        return byLot;
     }
 
     /** One supplier's totals over its effective lots (corrections replace what they supersede). */

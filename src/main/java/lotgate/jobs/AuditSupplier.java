@@ -50,18 +50,21 @@ public final class AuditSupplier {
         SupplierAudit audit;
         List<String> evidence = new ArrayList<>();
         try (HistoryStore store = HistoryStore.open(request.store(), false)) {
-            RecordedNames.Names names = RecordedNames.of(store, supplier, part);
-            if (!names.found()) {
-                throw RecordedNames.notFound(store, names);
+            HistoryStore.AuditReading reading = store.auditReading(supplier, part);
+            if (reading.rows().isEmpty()) {
+                // Nothing under the names as typed: the store's own spelling of them, if it has one.
+                RecordedNames.Names names = RecordedNames.of(store, supplier, part);
+                if (!names.found()) {
+                    throw RecordedNames.notFound(store, names);
+                }
+                supplier = names.supplier();
+                part = names.part();
+                reading = store.auditReading(supplier, part);
             }
-            supplier = names.supplier();
-            part = names.part();
-            List<LotRow> rows = store.rows(supplier, part);
-            audit = SupplierAudit.ofLots(supplier, part, request.from(), request.to(), rows,
-                    store.defectTypesByLot(supplier, part), rules, request.confidence(),
-                    store.measuredLots(supplier, part));
+            audit = SupplierAudit.ofLots(supplier, part, request.from(), request.to(), reading.rows(),
+                    reading.defectsByLot(), rules, request.confidence(), reading.measured());
             for (LotRow lot : audit.rejectedLots()) {
-                evidence.add(evidenceOf(store.record(lot.seq()).json()));
+                evidence.add(evidenceOf(reading.content(lot.seq())));
             }
         }
         for (Path report : request.reports()) {
