@@ -24,7 +24,7 @@ final class CompareCommand implements Runnable {
                 CompareRendering::json, CompareRendering::csv);
     }
 
-    @Parameters(arity = "2..*", paramLabel = "PLAN", description = "Two or more plans: plans/*.json files or n,c.")
+    @Parameters(arity = "1..*", paramLabel = "PLAN", description = "Two or more plans: plans/*.json files or n,c.")
     List<String> plans;
 
     @Mixin

@@ -24,7 +24,10 @@ import picocli.CommandLine.Option;
                 + " and consumer's risks, study their OC, AOQ, ATI and ASN curves, and save them under plans/ so that"
                 + " every inspector applies the same plan.", ""})
 public final class Main implements Runnable {
-    /** The exit codes, listed under the main command's help only (subcommands inherit its other attributes). */
+    /**
+     * The exit codes, listed under the main command's help only (subcommands inherit its other attributes);
+     * each line fits the help's width of 80.
+     */
     private static final String[] EXIT_CODES = {
             "   0  done (sentencing: lot accepted)",
             "   1  lot rejected",
@@ -35,7 +38,7 @@ public final class Main implements Runnable {
             "   6  an output file cannot be written",
             "   7  the history store cannot be used (unreachable, altered, or newer)",
             "   8  inspection is discontinued until a corrective action is recorded",
-            "   9  no decision yet: inspect more units (double, multiple and sequential plans)",
+            "   9  no decision yet: inspect more units (double, multiple, sequential plans)",
             "  70  internal fault (rerun with --debug)"};
 
     /**

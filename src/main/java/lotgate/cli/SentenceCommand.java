@@ -32,7 +32,8 @@ import picocli.CommandLine.Spec;
                 "",
                 "Exit code 0: accepted; 1: rejected; 4: the sheet holds fewer or more units than the plan samples;"
                         + " 8: inspection of the part is discontinued; 9: no decision yet, inspect more units;"
-                        + " 2 and 3: bad options or input; 7: the history store cannot be used.",
+                        + " 2 and 3: bad options or input; 6: a report or record cannot be written; 7: the history"
+                        + " store cannot be used.",
                 ""})
 final class SentenceCommand implements Runnable {
 

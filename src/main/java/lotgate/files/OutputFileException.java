@@ -29,6 +29,9 @@ public final class OutputFileException extends RuntimeException {
         if (cause instanceof java.nio.file.AccessDeniedException) {
             return "permission denied";
         }
+        if (cause instanceof java.nio.file.FileAlreadyExistsException taken && taken.getFile() != null) {
+            return taken.getFile() + " is a file, not a folder";
+        }
         if (cause instanceof java.nio.file.NoSuchFileException) {
             return "no such folder";
         }

@@ -42,6 +42,10 @@ public final class ComparePlans {
 
     /** Reads or builds each plan, computes its figures at the same levels, and draws the charts asked for. */
     public static Result run(Request request) {
+        if (request.plans().size() < 2) {
+            throw JobException.invalid("plans", "give two or more plans to compare (plans/*.json files or n,c),"
+                    + " got only " + String.join("", request.plans()));
+        }
         Checks.chartName("chart", request.chart());
         Checks.chartName("asnChart", request.asnChart());
         List<PlanChoice> choices = new ArrayList<>();

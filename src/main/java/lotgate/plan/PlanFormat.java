@@ -235,7 +235,14 @@ public final class PlanFormat {
             if (Files.size(file) > LARGEST_FILE) {
                 throw new InputFileException(file, "too large to be a plan file (over 1 MiB)");
             }
-            root = JsonTree.strict(withoutByteOrderMark(Files.readString(file, StandardCharsets.UTF_8)));
+            String text = withoutByteOrderMark(Files.readString(file, StandardCharsets.UTF_8));
+            if (!text.stripLeading().startsWith("{")) {
+                throw new InputFileException(file, "not a plan file: a plan file is the JSON that 'lotgate design"
+                        + " --save' writes, and this file does not start with '{'");
+            }
+            root = JsonTree.strict(text);
+        } catch (java.nio.charset.CharacterCodingException e) {
+            throw new InputFileException(file, "not a plan file: a plan file is UTF-8 JSON text, and this file is not");
         } catch (NoSuchFileException e) {
             throw new InputFileException(file, "no such plan file");
         } catch (JsonProcessingException e) {

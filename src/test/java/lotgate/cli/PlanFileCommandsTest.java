@@ -134,6 +134,15 @@ class PlanFileCommandsTest {
     }
 
     @Test
+    void compareWithOnePlanAsksForAnother() {
+        Cli.Result result = Cli.run("compare", "45,0", "--aql", "1%", "--ltpd", "5%");
+        assertEquals(ExitCode.USAGE, result.exitCode());
+        assertEquals("lotgate: give two or more plans to compare (plans/*.json files or n,c), got only 45,0"
+                + " (see 'lotgate compare --help')",
+                result.err().lines().findFirst().orElse(""));
+    }
+
+    @Test
     void aPlanWrittenWrongIsNamed() {
         Cli.Result result = Cli.run("compare", "45;0", "132,3", "--aql", "1%", "--ltpd", "5%");
         assertEquals(ExitCode.USAGE, result.exitCode());

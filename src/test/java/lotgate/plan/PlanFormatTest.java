@@ -105,6 +105,18 @@ class PlanFormatTest {
     }
 
     @Test
+    void aFileThatIsNoJsonObjectIsCalledNoPlanFile() throws IOException {
+        Path csv = folder.resolve("lots.csv");
+        Files.writeString(csv, "lot,supplier,part\nL-1,A,B\n");
+        assertEquals(csv + ": not a plan file: a plan file is the JSON that 'lotgate design --save' writes, and this"
+                + " file does not start with '{'", refused(csv));
+        Path binary = folder.resolve("sheet.xlsx");
+        Files.write(binary, new byte[] {0x50, 0x4b, 0x03, 0x04, (byte) 0xff, (byte) 0xfe, 0x00});
+        assertEquals(binary + ": not a plan file: a plan file is UTF-8 JSON text, and this file is not",
+                refused(binary));
+    }
+
+    @Test
     void duplicateKeysAreRefused() throws IOException {
         Path file = saved();
         Files.writeString(file, Files.readString(file).replace("\"model\" : \"binomial\"",

@@ -127,7 +127,7 @@ public final class DesignRendering {
         out.println();
         String unit = model.countsUnits() ? "" : " per unit";
         String row = indent + "%-6s %-22s %-11s %-24s %-8s%n";
-        out.printf(row, "point", "quality", "P(accept)", "risk", "allowed");
+        out.printf(indent + "%-6s %-22s %-11s %-24s %s%n", "point", "quality", "P(accept)", "risk", "allowed");
         out.printf(row, "AQL", Percent.level(points.aql()) + unit + pointNote(model, risks.aqlPoint(), lotSize),
                 Percent.probability(1 - risks.producerRisk()), "producer's " + Percent.probability(risks.producerRisk()),
                 String.format("%-8s%s", Percent.level(points.alpha()), verdict(risks.producerRisk() <= points.alpha())));
