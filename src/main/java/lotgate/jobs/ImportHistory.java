@@ -79,6 +79,7 @@ public final class ImportHistory {
         List<Integer> sheetRows = new ArrayList<>();
         Map<List<String>, Integer> seen = new HashMap<>();
         Map<String, Integer> columns = new HashMap<>();
+        Map<Object, Object> shared = new HashMap<>();
         HeaderSearch search = new HeaderSearch();
         source.findHeader(texts -> search.missing(texts).isEmpty());
         source.read(request.sheet(), (row, cells) -> {
@@ -100,7 +101,7 @@ public final class ImportHistory {
                 }
                 return;
             }
-            RecordContent.Lot lot = lot(file, source, sheetName, row, cells, columns);
+            RecordContent.Lot lot = lot(file, source, sheetName, row, cells, shared, columns);
             Integer first = seen.putIfAbsent(List.of(lot.supplier(), lot.part(), lot.lot()), row);
             if (first != null) {
                 throw new SheetException(file, source.whereRow(sheetName, row) + ": lot " + lot.lot() + " of "
@@ -231,8 +232,13 @@ public final class ImportHistory {
         };
     }
 
+    /**
+     * One checked lot. Its names, days and words are taken from {@code shared} where an earlier lot had them
+     * (added there otherwise): a long list repeats each supplier, part, inspector and day many times, and every
+     * lot is held until all are checked.
+     */
     private static RecordContent.Lot lot(Path file, SheetSource source, String sheetName, int row, List<Cell> cells,
-            Map<String, Integer> columns) {
+            Map<Object, Object> shared, Map<String, Integer> columns) {
         int widest = 0;
         for (Cell c : cells) {
             widest = Math.max(widest, c.column());
@@ -297,7 +303,7 @@ public final class ImportHistory {
                         throw bad.apply("defects", "defects '" + item.trim() + "': more than "
                                 + String.format(Locale.ROOT, "%,d", SampleReader.MAX_COUNT) + " of one type in a lot");
                     }
-                    defects.put(item.substring(0, colon).trim(), (int) sum);
+                    defects.put(sharedValue(shared, item.substring(0, colon).trim()), (int) sum);
                 } catch (NumberFormatException | StringIndexOutOfBoundsException e) {
                     throw bad.apply("defects", "defects '" + item.trim() + "' is not type:count, as in burr:2");
                 }
@@ -316,9 +322,24 @@ public final class ImportHistory {
                 throw bad.apply(name, problem);
             }
         }
-        return new RecordContent.Lot(cell.apply("supplier").text().trim(), cell.apply("part").text().trim(),
-                cell.apply("lot").text().trim(), lotSize, received, inspector == null ? null : inspector.text().trim(),
-                verdict, inspected, found, defects, null, production, 0, null);
+        return new RecordContent.Lot(sharedValue(shared, cell.apply("supplier").text().trim()),
+                sharedValue(shared, cell.apply("part").text().trim()), cell.apply("lot").text().trim(), lotSize,
+                sharedValue(shared, received), inspector == null ? null : sharedValue(shared, inspector.text().trim()),
+                sharedValue(shared, verdict), inspected, found, compact(defects), null,
+                sharedValue(shared, production), 0, null);
+    }
+
+    /** The defect counts in less memory where there are none or one (a linked map of one costs 170 bytes). */
+    private static Map<String, Integer> compact(Map<String, Integer> defects) {
+        if (defects.size() > 1) {
+            return defects;
+        }
+        return defects.isEmpty() ? Map.of() : Map.copyOf(defects);
+    }
+
+    @SuppressWarnings("unchecked")
+    private static <T> T sharedValue(Map<Object, Object> shared, T value) {
+        return (T) shared.computeIfAbsent(value, v -> v);
     }
 
     private static int whole(Cell cell, int least, Supplier<SheetException> bad) {

@@ -8,11 +8,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.sql.Connection;
-import java.sql.DriverManager;
-import java.sql.ResultSet;
-import java.sql.SQLException;
-import java.sql.Statement;
 import java.time.Instant;
 import java.time.LocalDate;
 import java.util.ArrayList;
@@ -82,10 +77,11 @@ class BulkAppendTest {
         for (String query : new String[] {"SELECT * FROM lot_record ORDER BY seq",
                 "SELECT * FROM defect_count ORDER BY seq, defect", "SELECT * FROM chain_head",
                 "SELECT type, name, tbl_name, sql FROM sqlite_master WHERE type = 'index' ORDER BY name"}) {
-            assertEquals(rows(stores[0], query), rows(stores[1], query), query);
+            assertEquals(Stores.rows(stores[0].toString(), query), Stores.rows(stores[1].toString(), query),
+                    query);
         }
-        assertEquals(4, rows(stores[1], "SELECT name FROM sqlite_master WHERE type = 'index' AND sql IS NOT NULL")
-                .size(), "the lot key, supplier, corrections and defect indexes");
+        assertEquals(4, Stores.rows(stores[1].toString(), "SELECT name FROM sqlite_master WHERE type = 'index'"
+                + " AND sql IS NOT NULL").size(), "the lot key, supplier, corrections and defect indexes");
     }
 
     @Test
@@ -119,22 +115,7 @@ class BulkAppendTest {
         assertEquals(messages.get(0), messages.get(1));
         assertTrue(messages.get(1).startsWith(refusal), messages.get(1));
         String indexes = "SELECT name, sql FROM sqlite_master WHERE type = 'index' ORDER BY name";
-        assertEquals(rows(stores[0], indexes), rows(stores[1], indexes), "the indexes are back");
-    }
-
-    private static List<List<String>> rows(Path store, String query) throws SQLException {
-        List<List<String>> rows = new ArrayList<>();
-        try (Connection connection = DriverManager.getConnection("jdbc:sqlite:" + store);
-                Statement statement = connection.createStatement(); ResultSet result = statement.executeQuery(query)) {
-            int columns = result.getMetaData().getColumnCount();
-            while (result.next()) {
-                List<String> row = new ArrayList<>();
-                for (int c = 1; c <= columns; c++) {
-                    row.add(result.getString(c));
-                }
-                rows.add(row);
-            }
-        }
-        return rows;
+        assertEquals(Stores.rows(stores[0].toString(), indexes), Stores.rows(stores[1].toString(), indexes),
+                "the indexes are back");
     }
 }

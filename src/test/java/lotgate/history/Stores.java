@@ -57,4 +57,22 @@ public final class Stores {
     public static Instant now() {
         return Instant.now().truncatedTo(java.time.temporal.ChronoUnit.MILLIS);
     }
+
+    /** Every row a query over a SQLite store's file answers, each column as text. */
+    public static java.util.List<java.util.List<String>> rows(String file, String query) throws SQLException {
+        java.util.List<java.util.List<String>> rows = new java.util.ArrayList<>();
+        try (Connection connection = DriverManager.getConnection("jdbc:sqlite:" + file);
+                Statement statement = connection.createStatement();
+                java.sql.ResultSet result = statement.executeQuery(query)) {
+            int columns = result.getMetaData().getColumnCount();
+            while (result.next()) {
+                java.util.List<String> row = new java.util.ArrayList<>();
+                for (int c = 1; c <= columns; c++) {
+                    row.add(result.getString(c));
+                }
+                rows.add(row);
+            }
+        }
+        return rows;
+    }
 }

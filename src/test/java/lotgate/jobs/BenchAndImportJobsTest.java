@@ -10,6 +10,7 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import lotgate.history.HistoryStore;
+import lotgate.history.Stores;
 import lotgate.inspection.ResultWords;
 import lotgate.inspection.SheetException;
 import lotgate.sentencing.Stopping;
@@ -133,6 +134,49 @@ class BenchAndImportJobsTest {
         assertTrue(refused.getMessage().contains("60 nonconforming in a sample of 50"), refused.getMessage());
         try (HistoryStore opened = HistoryStore.open(store, false)) {
             assertEquals(0, opened.verify().records());
+        }
+    }
+    @Test
+    void aLongListIsRecordedAsTheSameLotsAreInTwoShortLists() throws Exception {
+        // A list of at least HistoryStore's bulk size is written as a bulk load; two halves are written lot by lot.
+        String header = "lot,supplier,part,received,lot size,sample size,nonconforming,verdict,acceptance number,"
+                + "defects,production\n";
+        StringBuilder first = new StringBuilder(header);
+        StringBuilder second = new StringBuilder(header);
+        java.util.Random random = new java.util.Random(1100);
+        for (int i = 0; i < 1100; i++) {
+            int found = random.nextInt(10) < 8 ? random.nextInt(2) : 2 + random.nextInt(3);
+            String defects = found == 0 ? "" : found == 1 ? "burr:1" : "crack:1; burr:" + (found - 1);
+            (i < 550 ? first : second).append("L-" + i + ",Invented Supplier " + i % 5 + ",P-" + i % 2 + ","
+                    + java.time.LocalDate.of(2025, 1, 1).plusDays(i / 10) + ",2000,50," + found + ","
+                    + (found <= 2 ? "accept" : "reject") + ",2," + defects + "," + (i % 97 == 0 ? "irregular" : "steady")
+                    + "\n");
+        }
+        Path whole = folder.resolve("whole.csv");
+        Files.writeString(whole, first + second.substring(header.length()));
+        Path[] halves = {folder.resolve("first.csv"), folder.resolve("second.csv")};
+        Files.writeString(halves[0], first);
+        Files.writeString(halves[1], second);
+        String bulk = folder.resolve("bulk.sqlite").toString();
+        String byLot = folder.resolve("by-lot.sqlite").toString();
+        HistoryStore.open(bulk).close();
+        HistoryStore.open(byLot).close();
+        assertEquals(1100, ImportHistory.run(new ImportHistory.Request(whole, null, bulk)).recorded());
+        for (Path half : halves) {
+            assertEquals(550, ImportHistory.run(new ImportHistory.Request(half, null, byLot)).recorded());
+        }
+        String records = "SELECT seq, kind, supplier, part, lot, lot_size, received, verdict, inspected, nonconforming,"
+                + " supersedes, content, severity, production, lot_key, reinstates FROM lot_record ORDER BY seq";
+        String defects = "SELECT seq, supplier, part, defect, units FROM defect_count ORDER BY seq, defect";
+        for (String query : new String[] {records, defects}) {
+            assertEquals(Stores.rows(byLot, query), Stores.rows(bulk, query), query);
+        }
+        assertTrue(Stores.rows(bulk, "SELECT seq FROM lot_record WHERE severity = 'tightened'").size() > 10,
+                "the switching rules tightened inspection on some parts");
+        for (String store : new String[] {bulk, byLot}) {
+            try (HistoryStore opened = HistoryStore.open(store, false)) {
+                assertTrue(opened.verify().intact());
+            }
         }
     }
 }
