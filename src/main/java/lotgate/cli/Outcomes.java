@@ -23,7 +23,7 @@ final class Outcomes {
             message = cli.getParent() == null && !first.startsWith("-")
                     ? "unknown command '" + first + "'; the commands are "
                             + String.join(", ", cli.getSubcommands().keySet())
-                    : "unknown option or extra argument '" + first + "'";
+                    : "unknown option or extra argument '" + first + "'" + suggestion(cli.getCommandSpec(), first);
         }
         err.println("lotgate: " + lotgate.history.Identifiers.escape(lotgate.history.StoreLocation.masked(message))
                 + " (see '" + cli.getCommandSpec().qualifiedName() + " --help')");
@@ -32,6 +32,61 @@ final class Outcomes {
         }
         err.flush();
         return ExitCode.USAGE;
+    }
+
+    /**
+     * "; did you mean '--lot-size'?" when the unknown option is one of the command's long options written with
+     * other capitals or hyphens, or two typing slips away from exactly one of them; otherwise nothing.
+     */
+    static String suggestion(CommandLine.Model.CommandSpec spec, String typed) {
+        if (!typed.startsWith("--")) {
+            return "";
+        }
+        String written = typed.contains("=") ? typed.substring(0, typed.indexOf('=')) : typed;
+        String bare = written.substring(2).toLowerCase(java.util.Locale.ROOT);
+        String best = null;
+        int bestDistance = 3;
+        boolean tie = false;
+        for (CommandLine.Model.OptionSpec option : spec.options()) {
+            if (option.hidden()) {
+                continue;
+            }
+            for (String name : option.names()) {
+                if (!name.startsWith("--")) {
+                    continue;
+                }
+                String candidate = name.substring(2);
+                int distance = candidate.replace("-", "").equals(bare.replace("-", "")) ? 0 : distance(candidate, bare);
+                if (distance < bestDistance) {
+                    best = name;
+                    bestDistance = distance;
+                    tie = false;
+                } else if (distance == bestDistance && !name.equals(best)) {
+                    tie = true;
+                }
+            }
+        }
+        return best == null || tie ? "" : "; did you mean '" + best + "'?";
+    }
+
+    /** The Levenshtein distance: the fewest inserted, deleted or changed characters that make one word the other. */
+    static int distance(String a, String b) {
+        int[] previous = new int[b.length() + 1];
+        int[] current = new int[b.length() + 1];
+        for (int j = 0; j <= b.length(); j++) {
+            previous[j] = j;
+        }
+        for (int i = 1; i <= a.length(); i++) {
+            current[0] = i;
+            for (int j = 1; j <= b.length(); j++) {
+                int change = a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1;
+                current[j] = Math.min(Math.min(current[j - 1] + 1, previous[j] + 1), previous[j - 1] + change);
+            }
+            int[] swap = previous;
+            previous = current;
+            current = swap;
+        }
+        return previous[b.length()];
     }
 
     static int failure(Exception e, CommandLine cli, CommandLine.ParseResult parsed) {

@@ -40,6 +40,25 @@ class MainTest {
     }
 
     @Test
+    void aMistypedOptionGetsTheNearestName() {
+        String err = Cli.run("design", "--aql", "1%", "--ltpd", "5%", "--lotsize", "5000").err();
+        assertTrue(err.startsWith("lotgate: unknown option or extra argument '--lotsize'; did you mean '--lot-size'?"),
+                err);
+        err = Cli.run("design", "--AQL", "1%", "--ltpd", "5%").err();
+        assertTrue(err.startsWith("lotgate: unknown option or extra argument '--AQL'; did you mean '--aql'?"), err);
+        err = Cli.run("design", "--aql", "1%", "--ltpd", "5%", "--zzzzzzzz").err();
+        assertTrue(err.startsWith("lotgate: unknown option or extra argument '--zzzzzzzz' (see"), err);
+    }
+
+    @Test
+    void theEditDistanceIsLevenshteins() {
+        // The textbook example (common practice): kitten -> sitting takes 3 edits.
+        assertEquals(3, Outcomes.distance("kitten", "sitting"));
+        assertEquals(0, Outcomes.distance("", ""));
+        assertEquals(4, Outcomes.distance("", "abcd"));
+    }
+
+    @Test
     void everyCommandIsRegisteredUnderItsOwnName() {
         for (Map.Entry<String, Class<?>> command : Main.commands().entrySet()) {
             CommandLine.Command annotation = command.getValue().getAnnotation(CommandLine.Command.class);
