@@ -56,7 +56,7 @@ final class Outcomes {
                     continue;
                 }
                 String candidate = name.substring(2);
-                int distance = candidate.replace("-", "").equals(bare.replace("-", "")) ? 0 : distance(candidate, bare);
+                int distance = candidate.replace("-", "").equals(bare.replace("-", "")) ? 0 : lotgate.history.NameMatch.distance(candidate, bare);
                 if (distance < bestDistance) {
                     best = name;
                     bestDistance = distance;
@@ -67,26 +67,6 @@ final class Outcomes {
             }
         }
         return best == null || tie ? "" : "; did you mean '" + best + "'?";
-    }
-
-    /** The Levenshtein distance: the fewest inserted, deleted or changed characters that make one word the other. */
-    static int distance(String a, String b) {
-        int[] previous = new int[b.length() + 1];
-        int[] current = new int[b.length() + 1];
-        for (int j = 0; j <= b.length(); j++) {
-            previous[j] = j;
-        }
-        for (int i = 1; i <= a.length(); i++) {
-            current[0] = i;
-            for (int j = 1; j <= b.length(); j++) {
-                int change = a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1;
-                current[j] = Math.min(Math.min(current[j - 1] + 1, previous[j] + 1), previous[j - 1] + change);
-            }
-            int[] swap = previous;
-            previous = current;
-            current = swap;
-        }
-        return previous[b.length()];
     }
 
     static int failure(Exception e, CommandLine cli, CommandLine.ParseResult parsed) {

@@ -53,8 +53,11 @@ public final class NameMatch {
         return name.trim().replaceAll("\\s+", " ").toLowerCase(Locale.ROOT);
     }
 
-    /** Levenshtein distance; texts longer than 200 characters are never close. */
-    private static int distance(String a, String b) {
+    /**
+     * The Levenshtein distance: the fewest inserted, deleted or changed characters that make one text the other;
+     * texts longer than 200 characters are never close.
+     */
+    public static int distance(String a, String b) {
         if (a.length() > 200 || b.length() > 200) {
             return Integer.MAX_VALUE;
         }

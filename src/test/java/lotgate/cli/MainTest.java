@@ -53,9 +53,9 @@ class MainTest {
     @Test
     void theEditDistanceIsLevenshteins() {
         // The textbook example (common practice): kitten -> sitting takes 3 edits.
-        assertEquals(3, Outcomes.distance("kitten", "sitting"));
-        assertEquals(0, Outcomes.distance("", ""));
-        assertEquals(4, Outcomes.distance("", "abcd"));
+        assertEquals(3, lotgate.history.NameMatch.distance("kitten", "sitting"));
+        assertEquals(0, lotgate.history.NameMatch.distance("", ""));
+        assertEquals(4, lotgate.history.NameMatch.distance("", "abcd"));
     }
 
     @Test
