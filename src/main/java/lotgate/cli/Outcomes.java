@@ -3,6 +3,7 @@ package lotgate.cli;
 import java.io.PrintWriter;
 import lotgate.files.InputFileException;
 import lotgate.files.OutputFileException;
+import lotgate.history.NameMatch;
 import lotgate.jobs.JobException;
 import picocli.CommandLine;
 
@@ -56,7 +57,8 @@ final class Outcomes {
                     continue;
                 }
                 String candidate = name.substring(2);
-                int distance = candidate.replace("-", "").equals(bare.replace("-", "")) ? 0 : lotgate.history.NameMatch.distance(candidate, bare);
+                int distance = candidate.replace("-", "").equals(bare.replace("-", "")) ? 0
+                        : NameMatch.distance(candidate, bare);
                 if (distance < bestDistance) {
                     best = name;
                     bestDistance = distance;
