@@ -113,7 +113,7 @@ public final class SentenceText {
         lines.add("on the OC curve: a lot at the estimate is accepted " + percent(verdict.evidence()
                 .acceptanceAtObserved()) + " of the time; at the AQL " + percent(verdict.evidence().acceptanceAtAql())
                 + ", at the LTPD " + percent(verdict.evidence().acceptanceAtLtpd()));
-        lines.add("p-value against the AQL " + percent(decision.plan().designedFor().aql()) + ": " + percent(verdict
+        lines.add("p-value against the AQL " + Percent.level(decision.plan().designedFor().aql()) + ": " + percent(verdict
                 .evidence().pValue()) + " (the chance that a lot at the AQL gives a statistic this low or lower, at the"
                 + " nearer limit)");
         if (measured.normality() != null) {
@@ -200,7 +200,7 @@ public final class SentenceText {
             lines.add(verdict.defectClass().label() + ": " + counted(decision, verdict.found()) + " in " + verdict.inspected()
                     + " units (" + percent(evidence.observed()) + perUnit + ")");
             boolean fixed = verdict.plan() instanceof lotgate.sampling.SinglePlan;
-            lines.add("  p-value against the AQL " + percent(criteria.designedFor().aql()) + perUnit + ": "
+            lines.add("  p-value against the AQL " + Percent.level(criteria.designedFor().aql()) + perUnit + ": "
                     + percent(evidence.pValue()) + " (the chance of finding " + verdict.found()
                     + " or more in " + verdict.inspected() + " units of a lot at the AQL)");
             if (!fixed) {

@@ -157,6 +157,16 @@ class SentenceCommandTest {
     }
 
     @Test
+    void theEvidenceGivesTheAqlAsThePlanWasDesignedFor() throws Exception {
+        Path plan = folder.resolve("clips.json");
+        assertEquals(0, Cli.run("design", "--aql", "0.65%", "--ltpd", "5%", "--save", plan.toString()).exitCode());
+        Path file = sheet("clips.xlsx", 105, 7);
+        Cli.Result result = Cli.run("sentence", "--no-record", plan.toString(), file.toString(), "--lot", "C-1");
+        assertEquals(ExitCode.OK, result.exitCode(), result.err());
+        assertTrue(result.out().contains("p-value against the AQL 0.65%: "), result.out());
+    }
+
+    @Test
     void aSheetFarLargerThanTheSampleIsRefusedWithoutReadingItAll() throws Exception {
         Path file = folder.resolve("huge.csv");
         StringBuilder text = new StringBuilder("unit,result\n");
