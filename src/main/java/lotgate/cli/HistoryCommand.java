@@ -13,14 +13,12 @@ import picocli.CommandLine.Mixin;
 final class HistoryCommand implements Runnable {
     @Override
     public void run() {
-        format.print(ListHistory.run(new ListHistory.Request(supplier.name, part.name, storeOption.location())), HistoryRendering::text, HistoryRendering::json, HistoryRendering::csv);
+        format.print(ListHistory.run(new ListHistory.Request(lotOf.supplier.name, lotOf.part.name,
+                storeOption.location())), HistoryRendering::text, HistoryRendering::json, HistoryRendering::csv);
     }
 
     @Mixin
-    SharedOptions.Supplier supplier;
-
-    @Mixin
-    SharedOptions.Part part;
+    SupplierAndPart lotOf;
 
     @Mixin
     StoreOption storeOption;

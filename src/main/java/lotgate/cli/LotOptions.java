@@ -16,10 +16,7 @@ final class LotOptions {
     String lotId;
 
     @Mixin
-    SharedOptions.Supplier supplier;
-
-    @Mixin
-    SharedOptions.Part part;
+    SupplierAndPart lotOf;
 
     @Mixin
     SharedOptions.LotSize lotSize;
@@ -46,14 +43,15 @@ final class LotOptions {
                         + " 2026-03-14");
             }
         }
-        String[][] ids = {{"--lot", lotId}, {"--supplier", supplier.name}, {"--part", part.name}, {"--inspector", inspector}};
+        String[][] ids = {{"--lot", lotId}, {"--supplier", lotOf.supplier.name}, {"--part", lotOf.part.name},
+                {"--inspector", inspector}};
         for (String[] id : ids) {
             String problem = Identifiers.problem(id[0], id[1]);
             if (problem != null) {
                 throw new ParameterException(spec.commandLine(), problem);
             }
         }
-        return new LotDetails(blankToNull(lotId), blankToNull(supplier.name), blankToNull(part.name),
+        return new LotDetails(blankToNull(lotId), blankToNull(lotOf.supplier.name), blankToNull(lotOf.part.name),
                 lotSize.size == null ? 0 : lotSize.size, day, blankToNull(inspector));
     }
 

@@ -27,10 +27,7 @@ final class ReissueCommand implements Runnable {
     String which;
 
     @Mixin
-    SharedOptions.Supplier supplier;
-
-    @Mixin
-    SharedOptions.Part part;
+    SupplierAndPart lotOf;
 
     @Option(names = "--sheet-file", paramLabel = "FILE",
             description = "Where the inspection sheet is now, if it moved (it must be the same file: same SHA-256).")
@@ -67,7 +64,7 @@ final class ReissueCommand implements Runnable {
         Long seq = null;
         String lot = which;
         String number = which.startsWith("#") ? which.substring(1) : which;
-        if (number.matches("[0-9]{1,18}") && (which.startsWith("#") || supplier.name == null)) {
+        if (number.matches("[0-9]{1,18}") && (which.startsWith("#") || lotOf.supplier.name == null)) {
             seq = Long.parseLong(number);
             lot = null;
         }
@@ -80,7 +77,7 @@ final class ReissueCommand implements Runnable {
             }
         }
         ReissueLotOutputs.Result result = ReissueLotOutputs.run(new ReissueLotOutputs.Request(storeOption.location(),
-                seq, lot, supplier.name, part.name, sheetFile, planFile, columns, outputs));
+                seq, lot, lotOf.supplier.name, lotOf.part.name, sheetFile, planFile, columns, outputs));
         PrintWriter out = spec.commandLine().getOut();
         out.println("Lot " + result.decision().lot().lot() + ", record " + result.place().text() + ":");
         for (Path report : outputs.reports()) {
