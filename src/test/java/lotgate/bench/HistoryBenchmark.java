@@ -238,7 +238,7 @@ public class HistoryBenchmark {
     /**
      * What one supplier's audit reads: the supplier's records with every column the audit uses and, in the same
      * pass, the content of the lots it shows more of (the rejected ones, for their evidence, and those judged on
-     * measurements, for the mean and s charts), then the defect counts of its current lots.
+     * measurements, for the mean and s charts), then the defect counts of its lots that no correction superseded.
      */
     static long auditBareSql(String store) throws Exception {
         long sum = 0;
@@ -262,9 +262,10 @@ public class HistoryBenchmark {
                     }
                 }
             }
-            try (PreparedStatement types = connection.prepareStatement("SELECT d.seq, d.defect, d.units FROM"
-                    + " defect_count d JOIN lot_record r ON r.seq = d.seq WHERE d.supplier = ? AND r.lot_key IS NOT"
-                    + " NULL")) {
+            // Of the ways to leave out superseded records' counts, the quickest: a join on the records'
+            // lot key took 2 to 4 ms here, this subquery over the index of the corrections 0.4 ms.
+            try (PreparedStatement types = connection.prepareStatement("SELECT seq, defect, units FROM defect_count"
+                    + " WHERE supplier = ? AND seq NOT IN (SELECT supersedes FROM lot_record WHERE supersedes > 0)")) {
                 types.setString(1, AUDITED);
                 try (ResultSet rows = types.executeQuery()) {
                     while (rows.next()) {
