@@ -98,14 +98,54 @@ class BulkAppendTest {
         assertRefusedAlike(lots, "lot B-400 of Invented Supplier 10, part P-1 is already recorded as #0 in ");
     }
 
+    @Test
+    void aBulkLoadRefusesAControlCharacterInAnIdAsRecordingLotByLotDoes() throws Exception {
+        List<ObjectNode> lots = lots();
+        lots.get(800).put("inspector", "bench\u0007");
+        assertRefusedAlike(lots, StoreException.class, "history store STORE: inspector 'bench");
+    }
+
+    @Test
+    void aBulkLoadPassesOnWhatItsContentsThrowAndRecordsNothing() throws Exception {
+        List<ObjectNode> lots = lots();
+        Iterable<ObjectNode> failing = () -> new java.util.Iterator<>() {
+            private int next;
+
+            @Override
+            public boolean hasNext() {
+                return next < lots.size();
+            }
+
+            @Override
+            public ObjectNode next() {
+                if (next == 700) {
+                    throw new IllegalStateException("no lot 700 (invented failure)");
+                }
+                return lots.get(next++);
+            }
+        };
+        assertRefusedAlike(failing, lots.size(), StoreException.class,
+                "history store STORE: cannot record the lots (no lot 700 (invented failure))");
+    }
+
     private void assertRefusedAlike(List<ObjectNode> lots, String refusal) throws Exception {
+        assertRefusedAlike(lots, lots.size(), StoreException.DuplicateLot.class, refusal);
+    }
+
+    private void assertRefusedAlike(List<ObjectNode> lots, Class<? extends StoreException> kind, String refusal)
+            throws Exception {
+        assertRefusedAlike(lots, lots.size(), kind, refusal);
+    }
+
+    /** Appends the lots lot by lot to one twin and as a bulk load to the other: both refuse them alike. */
+    private void assertRefusedAlike(Iterable<ObjectNode> lots, int count, Class<? extends StoreException> kind,
+            String refusal) throws Exception {
         Path[] stores = twins();
         List<String> messages = new ArrayList<>();
         for (int i = 0; i < 2; i++) {
-            long expected = i == 0 ? 0 : lots.size();
+            long expected = i == 0 ? 0 : count;
             try (HistoryStore store = HistoryStore.open(stores[i].toString())) {
-                StoreException.DuplicateLot refused = assertThrows(StoreException.DuplicateLot.class,
-                        () -> store.appendEach(lots, expected, at));
+                StoreException refused = assertThrows(kind, () -> store.appendEach(lots, expected, at));
                 messages.add(refused.getMessage().replace(stores[i].toString(), "STORE"));
                 HistoryStore.Verification verification = store.verify();
                 assertTrue(verification.intact(), verification.problem());
