@@ -956,8 +956,10 @@ public final class HistoryStore implements AutoCloseable {
 
     /** Totals per supplier, by the store's own aggregation. */
     public List<SupplierTotals> supplierTotals() {
+        // SQLite would otherwise walk the supplier index and fetch each record in its order; reading the table in
+        // its own order and grouping as it goes takes half the time (100,000 lots: 110 to 170 ms instead of 260).
         String sql = "SELECT supplier, COUNT(*), SUM(CASE WHEN verdict = 'reject' THEN 1 ELSE 0 END), SUM(inspected),"
-                + " SUM(nonconforming) FROM lot_record WHERE kind = 'lot'"
+                + " SUM(nonconforming) FROM lot_record" + (postgres ? "" : " NOT INDEXED") + " WHERE kind = 'lot'"
                 + (version >= 3 ? " AND lot_key IS NOT NULL"
                         : " AND seq NOT IN (SELECT supersedes FROM lot_record WHERE supersedes > 0)")
                 + " GROUP BY supplier ORDER BY supplier";

@@ -57,7 +57,8 @@ public class HistoryBenchmark {
     /** Alternating rounds per report; each round times a batch of about {@link #BATCH_NANOS} on each side. */
     static final int ROUNDS = 40;
     static final long BATCH_NANOS = TimeUnit.MILLISECONDS.toNanos(100);
-    static final long WARM_UP_NANOS = TimeUnit.SECONDS.toNanos(5);
+    /** Alternating runs before the rounds: with 5 s the audit still ran 1.7 times slower than after 20 s. */
+    static final long WARM_UP_NANOS = TimeUnit.SECONDS.toNanos(20);
 
     private Path folder;
     private HistoryStore recorder;
@@ -225,9 +226,10 @@ public class HistoryBenchmark {
         long sum = 0;
         try (Connection connection = connect(store);
                 Statement statement = connection.createStatement();
+                // The table read in its own order, not through the supplier index: twice as quick.
                 ResultSet rows = statement.executeQuery("SELECT supplier, COUNT(*), SUM(CASE WHEN verdict = 'reject'"
-                        + " THEN 1 ELSE 0 END), SUM(inspected), SUM(nonconforming) FROM lot_record WHERE kind = 'lot'"
-                        + " AND lot_key IS NOT NULL GROUP BY supplier")) {
+                        + " THEN 1 ELSE 0 END), SUM(inspected), SUM(nonconforming) FROM lot_record NOT INDEXED WHERE"
+                        + " kind = 'lot' AND lot_key IS NOT NULL GROUP BY supplier")) {
             while (rows.next()) {
                 sum += rows.getString(1).length() + rows.getLong(2) + rows.getLong(3) + rows.getLong(4) + rows.getLong(5);
             }

@@ -32,7 +32,8 @@ import net.jqwik.api.Property;
  * ({@link HistoryStore#auditReading}); before, it read them query by query, a rejected lot's content by a query of
  * its own. Its result and its text, JSON and CSV are held to those of the query-by-query reading, kept here as the
  * oracle, on the demo's store and on random stores with corrections, corrective actions, measured lots, lots
- * without a received date, case-insensitive names, parts and periods.
+ * without a received date, case-insensitive names, parts and periods. On those stores the ranking's totals, which
+ * SQLite reads in the table's order, are held to those it gave through the supplier index.
  */
 class AuditReadingProperties {
 
@@ -190,6 +191,9 @@ class AuditReadingProperties {
         }
         try (HistoryStore history = HistoryStore.open(store)) {
             history.appendAll(records, Instant.parse("2026-01-05T08:00:00Z"));
+            if (!history.isPostgres()) {
+                assertEquals(totalsThroughTheSupplierIndex(store), history.supplierTotals());
+            }
         }
         for (String supplier : SUPPLIERS) {
             String typed = random.nextInt(4) == 0 ? supplier.toLowerCase(java.util.Locale.ROOT).replace(" ", "  ")
@@ -205,6 +209,24 @@ class AuditReadingProperties {
             sameAudit(request(typed, part, from, to, random.nextBoolean() ? "current" : "older",
                     random.nextBoolean() ? 0.95 : 0.9, store));
         }
+    }
+
+    /** The ranking's totals as SQLite gave them before it was told to read the table in its own order. */
+    private static List<HistoryStore.SupplierTotals> totalsThroughTheSupplierIndex(String store) {
+        List<HistoryStore.SupplierTotals> totals = new ArrayList<>();
+        try (java.sql.Connection connection = java.sql.DriverManager.getConnection("jdbc:sqlite:" + store);
+                java.sql.Statement statement = connection.createStatement();
+                java.sql.ResultSet result = statement.executeQuery("SELECT supplier, COUNT(*), SUM(CASE WHEN verdict"
+                        + " = 'reject' THEN 1 ELSE 0 END), SUM(inspected), SUM(nonconforming) FROM lot_record WHERE"
+                        + " kind = 'lot' AND lot_key IS NOT NULL GROUP BY supplier ORDER BY supplier")) {
+            while (result.next()) {
+                totals.add(new HistoryStore.SupplierTotals(result.getString(1), result.getLong(2), result.getLong(3),
+                        result.getLong(4), result.getLong(5)));
+            }
+        } catch (java.sql.SQLException e) {
+            throw new IllegalStateException(e);
+        }
+        return totals;
     }
 
     private static LocalDate day(Random random) {
