@@ -6,6 +6,7 @@ import java.io.PrintWriter;
 import java.io.UncheckedIOException;
 import java.lang.reflect.Constructor;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.PropertyResourceBundle;
 import java.util.ResourceBundle;
@@ -71,16 +72,20 @@ public final class Main implements Runnable {
     }
 
     /**
-     * The descriptions of the shared options (OptionTexts.properties), read as a file: the resource
-     * bundle search for locale variants, which the texts do not have, costs a short command 10 ms.
+     * The descriptions of the shared options (OptionTexts.properties), read as a file when a help text is
+     * drawn: only the help shows descriptions, and reading the file opens lotgate.jar's index of 18,000
+     * entries (15-20 ms), which a command whose classes all come from the class-data archive never opens
+     * otherwise. A resource bundle search for locale variants, which the texts do not have, would add 10 ms.
      */
-    private static final ResourceBundle OPTION_TEXTS;
+    private static final class OptionTexts {
+        static final ResourceBundle BUNDLE;
 
-    static {
-        try (InputStream in = Main.class.getResourceAsStream("OptionTexts.properties")) {
-            OPTION_TEXTS = new PropertyResourceBundle(in);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
+        static {
+            try (InputStream in = Main.class.getResourceAsStream("OptionTexts.properties")) {
+                BUNDLE = new PropertyResourceBundle(in);
+            } catch (IOException e) {
+                throw new UncheckedIOException(e);
+            }
         }
     }
 
@@ -90,12 +95,21 @@ public final class Main implements Runnable {
         if (System.getProperty("picocli.converters.excludes") == null) {
             System.setProperty("picocli.converters.excludes", "java\\.sql\\..*,java\\.time\\..*");
         }
+        // picocli's factory looks for Groovy's closure class, which lotgate does not have: the failed search opens
+        // lotgate.jar's index of 18,000 entries (15-20 ms) in a run whose classes all come from the class-data archive.
+        if (System.getProperty("picocli.disable.closures") == null) {
+            System.setProperty("picocli.disable.closures", "true");
+        }
         // POI logs through the Log4j API; lotgate has no log, so route it to the API's silent simple logger.
         System.setProperty("log4j.provider", "org.apache.logging.log4j.simple.internal.SimpleProvider");
         System.setProperty("log4j2.simplelogLevel", "OFF");
         System.setProperty("log4j2.statusLoggerLevel", "OFF");
         // Jetty (the workbench) brings SLF4J's API, which the SQLite driver then logs through; no provider is bound.
         System.setProperty("slf4j.internal.verbosity", "ERROR");
+        // Naming SLF4J's silent provider spares its search of the class path for others (a service look-up).
+        if (System.getProperty("slf4j.provider") == null) {
+            System.setProperty("slf4j.provider", "org.slf4j.helpers.NOP_FallbackServiceProvider");
+        }
     }
 
     @Option(names = "--debug", scope = CommandLine.ScopeType.INHERIT,
@@ -146,7 +160,6 @@ public final class Main implements Runnable {
      * argument that is not an option), or every command when they name none or an unknown one.
      */
     static CommandLine commandLine(String... args) {
-        CommandLine cli = new CommandLine(new Main(), new Factory());
         String invoked = null;
         for (String arg : args) {
             if (!arg.startsWith("-")) {
@@ -154,12 +167,23 @@ public final class Main implements Runnable {
                 break;
             }
         }
-        if (invoked != null && COMMANDS.containsKey(invoked) && !invoked.equals("help")) {
+        boolean one = invoked != null && COMMANDS.containsKey(invoked) && !invoked.equals("help");
+        if (one) {
+            AnnotationsAhead.start(List.of(Main.class, COMMANDS.get(invoked)));
+        }
+        CommandLine cli = new CommandLine(new Main(), new Factory());
+        if (one) {
             cli.addSubcommand(invoked, COMMANDS.get(invoked));
         } else {
             COMMANDS.forEach(cli::addSubcommand);
         }
-        cli.setResourceBundle(OPTION_TEXTS);
+        cli.setHelpFactory((spec, colors) -> {
+            CommandLine root = spec.root().commandLine();
+            if (root.getResourceBundle() == null) {
+                root.setResourceBundle(OptionTexts.BUNDLE);
+            }
+            return new CommandLine.Help(spec, colors);
+        });
         cli.setParameterExceptionHandler(Outcomes::usageError);
         cli.setExecutionExceptionHandler(Outcomes::failure);
         cli.setCaseInsensitiveEnumValuesAllowed(true);

@@ -72,18 +72,18 @@ public final class CurveRendering {
         for (CurvePoint point : table) {
             StringBuilder row = new StringBuilder(String.format("  %10s", Percent.level(point.quality())));
             if (finite) {
-                row.append(String.format(" %8d", point.defectives()));
+                row.append(Text.format(" %8d", point.defectives()));
             }
             row.append(String.format(" %11s %10s", Percent.probability(point.acceptance()),
                     Percent.measured(point.aoq())));
             if (ati) {
-                row.append(String.format(" %10.1f", point.ati()));
+                row.append(Text.format(" %10.1f", point.ati()));
             }
             if (staged) {
-                row.append(String.format(" %10.1f", result.asn(point)));
+                row.append(Text.format(" %10.1f", result.asn(point)));
             }
             if (wald != null) {
-                row.append(String.format(" %12s %10.1f", Percent.probability(wald.acceptance(point.quality())),
+                row.append(Text.format(" %12s %10.1f", Percent.probability(wald.acceptance(point.quality())),
                         wald.averageSampleNumber(point.quality())));
             }
             out.println(row);
