@@ -25,6 +25,8 @@ final class Outcomes {
                     ? "unknown command '" + first + "'; the commands are "
                             + String.join(", ", cli.getSubcommands().keySet())
                     : "unknown option or extra argument '" + first + "'" + suggestion(cli.getCommandSpec(), first);
+        } else if (e instanceof CommandLine.MissingParameterException missing) {
+            message = missing(cli.getCommandSpec(), missing.getMissing());
         }
         err.println("lotgate: " + lotgate.history.Identifiers.escape(lotgate.history.StoreLocation.masked(message))
                 + " (see '" + cli.getCommandSpec().qualifiedName() + " --help')");
@@ -33,6 +35,42 @@ final class Outcomes {
         }
         err.flush();
         return ExitCode.USAGE;
+    }
+
+    /**
+     * "missing SHEET; write 'lotgate sentence PLAN SHEET'" for arguments left out, "missing option --aql" for options:
+     * picocli's own wording quotes its labels with their syntax, which a reader need not parse.
+     */
+    static String missing(CommandLine.Model.CommandSpec spec, java.util.List<CommandLine.Model.ArgSpec> args) {
+        java.util.List<String> names = new java.util.ArrayList<>();
+        boolean positional = false;
+        for (CommandLine.Model.ArgSpec arg : args) {
+            if (arg instanceof CommandLine.Model.OptionSpec option) {
+                names.add("option " + option.longestName());
+            } else if (!positional) {
+                // picocli names the first argument missing; those after it are missing too.
+                int first = ((CommandLine.Model.PositionalParamSpec) arg).index().min();
+                for (CommandLine.Model.PositionalParamSpec parameter : spec.positionalParameters()) {
+                    if (parameter.required() && parameter.index().min() >= first) {
+                        names.add(parameter.paramLabel());
+                    }
+                }
+                positional = true;
+            }
+        }
+        String list = names.size() == 1 ? names.get(0)
+                : String.join(", ", names.subList(0, names.size() - 1)) + " and " + names.get(names.size() - 1);
+        if (!positional) {
+            return "missing " + list;
+        }
+        StringBuilder synopsis = new StringBuilder(spec.qualifiedName());
+        for (CommandLine.Model.PositionalParamSpec parameter : spec.positionalParameters()) {
+            if (!parameter.hidden()) {
+                String label = parameter.paramLabel() + (parameter.arity().max() > 1 ? "..." : "");
+                synopsis.append(' ').append(parameter.required() ? label : "[" + label + "]");
+            }
+        }
+        return "missing " + list + "; write '" + synopsis + "'";
     }
 
     /**

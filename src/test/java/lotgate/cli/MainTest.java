@@ -96,6 +96,33 @@ class MainTest {
     }
 
     @Test
+    void aMissingArgumentIsNamedWithWhereItGoes() {
+        Cli.Result none = Cli.run("sentence");
+        assertEquals(2, none.exitCode());
+        assertEquals("lotgate: missing PLAN and SHEET; write 'lotgate sentence PLAN SHEET' (see 'lotgate sentence --help')\n",
+                none.err());
+        Cli.Result one = Cli.run("sentence", "plans/bolts.json");
+        assertEquals(2, one.exitCode());
+        assertEquals("lotgate: missing SHEET; write 'lotgate sentence PLAN SHEET' (see 'lotgate sentence --help')\n",
+                one.err());
+        Cli.Result compare = Cli.run("compare", "--aql", "1%");
+        assertEquals(2, compare.exitCode());
+        assertEquals("lotgate: missing PLAN; write 'lotgate compare PLAN...' (see 'lotgate compare --help')\n",
+                compare.err());
+    }
+
+    @Test
+    void aMissingOptionIsNamedPlainly() {
+        Cli.Result result = Cli.run("corrective-action", "--part", "AF-M8-40", "--reason", "new die");
+        assertEquals(2, result.exitCode());
+        assertEquals("lotgate: missing option --supplier (see 'lotgate corrective-action --help')\n", result.err());
+        Cli.Result two = Cli.run("corrective-action", "--reason", "new die");
+        assertEquals(2, two.exitCode());
+        assertEquals("lotgate: missing option --supplier and option --part (see 'lotgate corrective-action --help')\n",
+                two.err());
+    }
+
+    @Test
     void versionAloneAndWithTheHelpOfACommand() {
         Cli.Result alone = Cli.run("--version");
         assertEquals(0, alone.exitCode());
