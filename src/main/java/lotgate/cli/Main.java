@@ -119,9 +119,17 @@ public final class Main implements Runnable {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
+    /** lotgate alone: the list of commands with what each does, on standard error, and exit code 2. */
     @Override
     public void run() {
-        throw new CommandLine.ParameterException(spec.commandLine(), "name a command, e.g. 'lotgate design --help'");
+        CommandLine cli = spec.commandLine();
+        PrintWriter err = cli.getErr();
+        err.print("lotgate: name a command, e.g. 'lotgate design --aql 1% --ltpd 5%'. The commands:"
+                + System.lineSeparator() + cli.getHelp().commandList()
+                + "'lotgate COMMAND --help' tells a command's options; 'lotgate --help' also lists the exit codes."
+                + System.lineSeparator());
+        err.flush();
+        throw new Failure(ExitCode.USAGE, null);
     }
 
     public static void main(String[] args) {

@@ -96,6 +96,21 @@ class MainTest {
     }
 
     @Test
+    void lotgateAloneListsTheCommandsWithWhatEachDoes() {
+        Cli.Result result = Cli.run();
+        assertEquals(2, result.exitCode());
+        assertEquals("", result.out());
+        String[] lines = result.err().split("\n");
+        assertEquals("lotgate: name a command, e.g. 'lotgate design --aql 1% --ltpd 5%'. The commands:", lines[0]);
+        assertEquals("  design             Design a sampling plan from the producer's and consumer's", lines[1]);
+        assertEquals("'lotgate COMMAND --help' tells a command's options; 'lotgate --help' also lists the exit codes.",
+                lines[lines.length - 1]);
+        for (String name : Main.commands().keySet()) {
+            assertTrue(result.err().contains("\n  " + name + " "), name);
+        }
+    }
+
+    @Test
     void aMissingArgumentIsNamedWithWhereItGoes() {
         Cli.Result none = Cli.run("sentence");
         assertEquals(2, none.exitCode());
