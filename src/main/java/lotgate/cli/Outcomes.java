@@ -158,6 +158,7 @@ final class Outcomes {
             case BAD_INPUT -> ExitCode.BAD_INPUT;
             case INCOMPLETE_SAMPLE -> ExitCode.INCOMPLETE_SAMPLE;
             case DISCONTINUED -> ExitCode.DISCONTINUED;
+            case NO_PLAN -> ExitCode.NO_PLAN;
         };
     }
 

@@ -166,7 +166,8 @@ public final class DesignLeastInspection {
             found = new LeastInspectionDoubleSearch(model, lotSize).forLtpd(request.ltpd(), request.beta(),
                     request.processAverage(), plansEvaluated);
         } catch (LeastInspectionDoubleSearch.OverBudget e) {
-            throw JobException.invalid("scheme", "--scheme double: " + e.getMessage() + "; use the single plan");
+            throw new JobException(JobException.Kind.NO_PLAN, "scheme", "--scheme double: " + e.getMessage()
+                    + "; use the single plan");
         }
         double singleLtpd5 = single.inspectEveryUnit() ? Double.NaN
                 : new lotgate.sampling.OperatingCharacteristic(single.plan(), model, lotSize).qualityAt(0.05);

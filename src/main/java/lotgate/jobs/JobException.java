@@ -18,7 +18,9 @@ public final class JobException extends RuntimeException {
         /** The sample on the sheet holds fewer or more units than the plan inspects. */
         INCOMPLETE_SAMPLE,
         /** Inspection of the supplier's part is discontinued until a corrective action is recorded. */
-        DISCONTINUED
+        DISCONTINUED,
+        /** No sampling plan meets the request, or none could be proved to before a search reached its limit. */
+        NO_PLAN
     }
 
     private final Kind kind;

@@ -25,6 +25,24 @@ class TableCommandsTest {
     }
 
     @Test
+    void aSearchThatReachesItsLimitExitsAsNoPlanMeetsTheRequest() {
+        // The search's own limit takes tens of seconds to reach; its refusal is the job's, passed on as it is.
+        picocli.CommandLine cli = Main.commandLine("least-inspection");
+        java.io.StringWriter err = new java.io.StringWriter();
+        cli.setErr(new java.io.PrintWriter(err, true));
+        picocli.CommandLine.ParseResult parsed = cli.parseArgs("least-inspection", "-N", "1000000", "--ltpd", "1%",
+                "-p", "0.9%", "--scheme", "double");
+        lotgate.jobs.JobException stopped = new lotgate.jobs.JobException(lotgate.jobs.JobException.Kind.NO_PLAN,
+                "scheme", "--scheme double: the search stopped after evaluating 812 plans without proving one the least"
+                        + "; use the single plan");
+        int code = Outcomes.failure(stopped, cli.getSubcommands().get("least-inspection"), parsed);
+        assertEquals(5, code);
+        assertEquals("lotgate: --scheme double: the search stopped after evaluating 812 plans without proving one the"
+                + " least; use the single plan\n", err.toString());
+        assertEquals(ExitCode.NO_PLAN, Outcomes.exitCode(lotgate.jobs.JobException.Kind.NO_PLAN));
+    }
+
+    @Test
     void leastInspectionHelpNamesTheModelItUsesWhenNoneIsGiven() {
         String help = Cli.run("least-inspection", "--help").out().replaceAll("\\s+", " ");
         assertTrue(help.contains("hypergeometric (the lot of --lot-size units itself, type A; the default)"), help);
