@@ -22,6 +22,7 @@ final class CompareCommand implements Runnable {
         format.print(ComparePlans.run(new ComparePlans.Request(plans, models.named(), models.lotSize(),
                 marked.aql.level, marked.ltpd.level, chart.file(), asnChart.file)), CompareRendering::text,
                 CompareRendering::json, CompareRendering::csv);
+        format.written("OC chart", chart.file(), "ASN chart", asnChart.file);
     }
 
     @Parameters(arity = "1..*", paramLabel = "PLAN", description = "Two or more plans: plans/*.json files or n,c.")

@@ -25,6 +25,9 @@ final class CurveCommand implements Runnable {
         format.print(EvaluatePlan.run(new EvaluatePlan.Request(planFile, defectClass, sampleSize.n, acceptance.c,
                 models.named(), models.lotSize(), marked.aql.level, marked.ltpd.level, upTo, steps, charts.files(),
                 curtailed.on)), CurveRendering::text, CurveRendering::json, CurveRendering::csv);
+        EvaluatePlan.ChartFiles drawn = charts.files();
+        format.written("OC, AOQ and ATI chart", drawn.all(), "OC chart", drawn.oc(), "AOQ chart", drawn.aoq(),
+                "ATI chart", drawn.ati(), "ASN chart", drawn.asn());
     }
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "PLAN", description = "A saved plan file (plans/*.json).")

@@ -29,4 +29,30 @@ final class OutputFormat {
         }
         out.flush();
     }
+
+    /**
+     * After a text output, one line per file the command wrote, "  OC chart written to FILE", as sentence words its
+     * report and chart; JSON and CSV output stay the result alone. Each pair is a label and its file, null when not
+     * written.
+     */
+    void written(Object... labelsAndFiles) {
+        if (kind != Kind.text) {
+            return;
+        }
+        StringBuilder lines = new StringBuilder();
+        for (int i = 0; i < labelsAndFiles.length; i += 2) {
+            Object file = labelsAndFiles[i + 1];
+            java.util.Collection<?> files = file instanceof java.util.Collection<?> many ? many
+                    : file == null ? java.util.List.of() : java.util.List.of(file);
+            for (Object each : files) {
+                lines.append("  ").append(labelsAndFiles[i]).append(" written to ").append(each)
+                        .append(System.lineSeparator());
+            }
+        }
+        if (lines.length() > 0) {
+            PrintWriter out = command.commandLine().getOut();
+            out.print(System.lineSeparator() + lines);
+            out.flush();
+        }
+    }
 }

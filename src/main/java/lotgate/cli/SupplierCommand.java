@@ -20,6 +20,7 @@ final class SupplierCommand implements Runnable {
         format.print(AuditSupplier.run(new AuditSupplier.Request(supplier, part.name, from, to, switching.rules,
                 audit.confidence.level, audit.reports.files, audit.storeOption.location())), AuditRendering::text,
                 AuditRendering::json, AuditRendering::csv);
+        format.written("report", audit.reports.files);
     }
 
     @Parameters(index = "0", paramLabel = "SUPPLIER", description = "The supplier, as recorded.")

@@ -15,6 +15,7 @@ final class SuppliersCommand implements Runnable {
     public void run() {
         format.print(RankSuppliers.run(new RankSuppliers.Request(audit.confidence.level, audit.reports.files,
                 audit.storeOption.location())), RankingRendering::text, RankingRendering::json, RankingRendering::csv);
+        format.written("report", audit.reports.files);
     }
 
     @Mixin

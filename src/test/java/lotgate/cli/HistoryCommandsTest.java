@@ -257,9 +257,14 @@ class HistoryCommandsTest {
         Path html = folder.resolve("audit.html");
         Path xlsx = folder.resolve("audit.xlsx");
         Path ranking = folder.resolve("ranking.html");
-        assertEquals(0, Cli.run("supplier", evil, "--store", store, "--report", html.toString(), "--report",
-                xlsx.toString()).exitCode());
-        assertEquals(0, Cli.run("suppliers", "--store", store, "--report", ranking.toString()).exitCode());
+        Cli.Result audit = Cli.run("supplier", evil, "--store", store, "--report", html.toString(), "--report",
+                xlsx.toString());
+        assertEquals(0, audit.exitCode(), audit.err());
+        assertTrue(audit.out().endsWith("\n\n  report written to " + html + "\n  report written to " + xlsx + "\n"),
+                audit.out());
+        Cli.Result ranked = Cli.run("suppliers", "--store", store, "--report", ranking.toString());
+        assertEquals(0, ranked.exitCode(), ranked.err());
+        assertTrue(ranked.out().endsWith("\n\n  report written to " + ranking + "\n"), ranked.out());
         for (Path page : List.of(html, ranking)) {
             String text = Files.readString(page);
             assertFalse(text.contains("<script>alert"), page.toString());

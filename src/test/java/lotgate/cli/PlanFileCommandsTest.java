@@ -2,6 +2,7 @@ package lotgate.cli;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
@@ -105,6 +106,24 @@ class PlanFileCommandsTest {
         assertArrayEquals(new byte[] {(byte) 0x89, 'P', 'N', 'G', 0x0d, 0x0a, 0x1a, 0x0a}, head);
         String text = Files.readString(svg);
         assertTrue(text.contains("<svg") && text.contains("OC curve of n = 132, c = 3"));
+        assertTrue(result.out().endsWith("\n\n  OC, AOQ and ATI chart written to " + png + "\n  OC chart written to " + svg
+                + "\n  ATI chart written to " + folder.resolve("charts/ati.svg") + "\n"), result.out());
+    }
+
+    @Test
+    void compareSaysWhichChartsItWroteInTextOnly() {
+        Path oc = folder.resolve("oc.png");
+        Path asn = folder.resolve("asn.svg");
+        Cli.Result text = Cli.run("compare", "132,3", "45,0", "--aql", "1%", "--ltpd", "5%", "--oc-chart", oc.toString(),
+                "--asn-chart", asn.toString());
+        assertEquals(0, text.exitCode(), text.err());
+        assertTrue(text.out().endsWith("\n\n  OC chart written to " + oc + "\n  ASN chart written to " + asn + "\n"),
+                text.out());
+        Cli.Result csv = Cli.run("compare", "132,3", "45,0", "--aql", "1%", "--ltpd", "5%", "--oc-chart", oc.toString(),
+                "--format", "csv");
+        assertEquals(0, csv.exitCode(), csv.err());
+        assertFalse(csv.out().contains("written"), csv.out());
+        assertEquals("", csv.err());
     }
 
     @Test
