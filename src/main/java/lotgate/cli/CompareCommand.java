@@ -19,6 +19,7 @@ import picocli.CommandLine.Parameters;
 final class CompareCommand implements Runnable {
     @Override
     public void run() {
+        format.outputs(chart.file(), asnChart.file);
         format.print(ComparePlans.run(new ComparePlans.Request(plans, models.named(), models.lotSize(),
                 marked.aql.level, marked.ltpd.level, chart.file(), asnChart.file)), CompareRendering::text,
                 CompareRendering::json, CompareRendering::csv);

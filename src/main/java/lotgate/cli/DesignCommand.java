@@ -104,6 +104,12 @@ final class DesignCommand implements Runnable {
 
     @Override
     public void run() {
+        format.outputs(save == null ? null : save.file);
+        design();
+        format.written();
+    }
+
+    private void design() {
         OcModel model = models.resolve();
         int lotSize = models.lotSizeOrZero();
         String scheme = schemes.name;

@@ -58,6 +58,7 @@ final class LeastInspectionCommand implements Runnable {
     @Override
     public void run() {
         SaveTarget target = DesignCommand.SaveOptions.target(save);
+        format.outputs(save == null ? null : save.file);
         DesignLeastInspection.Request request = new DesignLeastInspection.Request(
                 models.lotSize(), ltpd.level, beta.beta, aoql, processAverage, models.named(), target, schemes.name);
         DesignLeastInspection.Result result;
@@ -67,5 +68,6 @@ final class LeastInspectionCommand implements Runnable {
         }
         format.print(result, LeastInspectionRendering::text, LeastInspectionRendering::json,
                 LeastInspectionRendering::csv);
+        format.written();
     }
 }

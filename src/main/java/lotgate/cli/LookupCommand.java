@@ -97,10 +97,12 @@ final class LookupCommand implements Runnable {
     @Override
     public void run() {
         SaveTarget target = DesignCommand.SaveOptions.target(save);
+        format.outputs(save == null ? null : save.file, family == null ? null : family.file);
         PlanFromTables.FamilyTarget familyTarget = family == null ? null
                 : new PlanFromTables.FamilyTarget(family.file, family.description, family.replace);
         PlanFromTables.Result result = PlanFromTables.run(new PlanFromTables.Request(models.lotSize(), level, aql,
                 severity, schemes.name, models.named(), target, familyTarget));
         format.print(result, TableRendering::text, TableRendering::json, TableRendering::csv);
+        format.written();
     }
 }

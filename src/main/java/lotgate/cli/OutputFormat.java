@@ -19,6 +19,29 @@ final class OutputFormat {
     @Spec(Spec.Target.MIXEE)
     CommandSpec command;
 
+    /** The folders of the command's output files that did not exist before it ran (its writes create them). */
+    private final java.util.Set<java.nio.file.Path> newFolders = new java.util.LinkedHashSet<>();
+
+    /**
+     * Notes, before the command writes, which of its output files' folders do not exist yet, so that {@link #written}
+     * can say they were created. Each argument is a file, a collection of files, or null.
+     */
+    void outputs(Object... files) {
+        for (Object file : files) {
+            for (Object each : each(file)) {
+                java.nio.file.Path folder = ((java.nio.file.Path) each).getParent();
+                if (folder != null && !java.nio.file.Files.isDirectory(folder)) {
+                    newFolders.add(folder);
+                }
+            }
+        }
+    }
+
+    private static java.util.Collection<?> each(Object file) {
+        return file instanceof java.util.Collection<?> many ? many
+                : file == null ? java.util.List.of() : java.util.List.of(file);
+    }
+
     /** Prints a job's result in the format asked for; only that format's rendering is made. */
     <R> void print(R result, Function<R, String> text, Function<R, ObjectNode> json, Function<R, String> csv) {
         PrintWriter out = command.commandLine().getOut();
@@ -32,8 +55,8 @@ final class OutputFormat {
 
     /**
      * After a text output, one line per file the command wrote, "  OC chart written to FILE", as sentence words its
-     * report and chart; JSON and CSV output stay the result alone. Each pair is a label and its file, null when not
-     * written.
+     * report and chart, then one line per folder it created for them (noted by {@link #outputs}); JSON and CSV output
+     * stay the result alone. Each pair is a label and its file (or files), null when not written.
      */
     void written(Object... labelsAndFiles) {
         if (kind != Kind.text) {
@@ -41,11 +64,14 @@ final class OutputFormat {
         }
         StringBuilder lines = new StringBuilder();
         for (int i = 0; i < labelsAndFiles.length; i += 2) {
-            Object file = labelsAndFiles[i + 1];
-            java.util.Collection<?> files = file instanceof java.util.Collection<?> many ? many
-                    : file == null ? java.util.List.of() : java.util.List.of(file);
-            for (Object each : files) {
+            for (Object each : each(labelsAndFiles[i + 1])) {
                 lines.append("  ").append(labelsAndFiles[i]).append(" written to ").append(each)
+                        .append(System.lineSeparator());
+            }
+        }
+        for (java.nio.file.Path folder : newFolders) {
+            if (java.nio.file.Files.isDirectory(folder)) {
+                lines.append("  folder ").append(folder).append(" did not exist and was created")
                         .append(System.lineSeparator());
             }
         }

@@ -17,6 +17,7 @@ import picocli.CommandLine.Parameters;
 final class SupplierCommand implements Runnable {
     @Override
     public void run() {
+        format.outputs(audit.reports.files);
         format.print(AuditSupplier.run(new AuditSupplier.Request(supplier, part.name, from, to, switching.rules,
                 audit.confidence.level, audit.reports.files, audit.storeOption.location())), AuditRendering::text,
                 AuditRendering::json, AuditRendering::csv);

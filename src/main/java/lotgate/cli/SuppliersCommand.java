@@ -13,6 +13,7 @@ import picocli.CommandLine.Mixin;
 final class SuppliersCommand implements Runnable {
     @Override
     public void run() {
+        format.outputs(audit.reports.files);
         format.print(RankSuppliers.run(new RankSuppliers.Request(audit.confidence.level, audit.reports.files,
                 audit.storeOption.location())), RankingRendering::text, RankingRendering::json, RankingRendering::csv);
         format.written("report", audit.reports.files);

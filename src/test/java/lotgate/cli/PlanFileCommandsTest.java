@@ -107,7 +107,26 @@ class PlanFileCommandsTest {
         String text = Files.readString(svg);
         assertTrue(text.contains("<svg") && text.contains("OC curve of n = 132, c = 3"));
         assertTrue(result.out().endsWith("\n\n  OC, AOQ and ATI chart written to " + png + "\n  OC chart written to " + svg
-                + "\n  ATI chart written to " + folder.resolve("charts/ati.svg") + "\n"), result.out());
+                + "\n  ATI chart written to " + folder.resolve("charts/ati.svg") + "\n  folder " + folder.resolve("charts")
+                + " did not exist and was created\n"), result.out());
+    }
+
+    @Test
+    void savingIntoAFolderThatDoesNotExistCreatesItAndSaysSo() {
+        Path plan = folder.resolve("plans/new/bolts.json");
+        Cli.Result result = Cli.run("design", "--aql", "1%", "--ltpd", "5%", "--save", plan.toString());
+        assertEquals(0, result.exitCode(), result.err());
+        assertTrue(Files.isRegularFile(plan));
+        assertTrue(result.out().endsWith("\n\n  folder " + folder.resolve("plans/new") + " did not exist and was created\n"),
+                result.out());
+        Cli.Result again = Cli.run("design", "--aql", "1%", "--ltpd", "5%", "--save", folder.resolve("plans/new/nuts.json")
+                .toString());
+        assertEquals(0, again.exitCode(), again.err());
+        assertFalse(again.out().contains("did not exist"), again.out());
+        Cli.Result json = Cli.run("design", "--aql", "1%", "--ltpd", "5%", "--format", "json", "--save",
+                folder.resolve("other/bolts.json").toString());
+        assertEquals(0, json.exitCode(), json.err());
+        assertFalse(json.out().contains("did not exist"), json.out());
     }
 
     @Test
