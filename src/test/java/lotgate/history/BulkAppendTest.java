@@ -10,15 +10,23 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.time.LocalDate;
+import java.io.BufferedReader;
+import java.io.InputStreamReader;
+import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
+import java.util.Iterator;
 import java.util.List;
 import java.util.Map;
+import java.util.Random;
+import java.util.concurrent.atomic.AtomicReference;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * A bulk load on SQLite (indexes created after the records, a larger page cache) writes the same rows, hashes
- * and indexes as recording the same lots one by one, and refuses a lot recorded twice in the same words.
+ * A bulk load on SQLite (indexes created after the records, a larger page cache, a rollback journal) writes the
+ * same rows, hashes and indexes as recording the same lots one by one, and refuses a lot recorded twice in the same
+ * words; it leaves the store in its write-ahead log mode, holds nothing back from a store opened during the load,
+ * and a load killed on the way records nothing.
  */
 class BulkAppendTest {
     private static final int LOTS = (int) HistoryStore.BULK + 200;
@@ -108,22 +116,9 @@ class BulkAppendTest {
     @Test
     void aBulkLoadPassesOnWhatItsContentsThrowAndRecordsNothing() throws Exception {
         List<ObjectNode> lots = lots();
-        Iterable<ObjectNode> failing = () -> new java.util.Iterator<>() {
-            private int next;
-
-            @Override
-            public boolean hasNext() {
-                return next < lots.size();
-            }
-
-            @Override
-            public ObjectNode next() {
-                if (next == 700) {
-                    throw new IllegalStateException("no lot 700 (invented failure)");
-                }
-                return lots.get(next++);
-            }
-        };
+        Iterable<ObjectNode> failing = running(lots, 700, () -> {
+            throw new IllegalStateException("no lot 700 (invented failure)");
+        });
         assertRefusedAlike(failing, lots.size(), StoreException.class,
                 "history store STORE: cannot record the lots (no lot 700 (invented failure))");
     }
@@ -157,5 +152,124 @@ class BulkAppendTest {
         String indexes = "SELECT name, sql FROM sqlite_master WHERE type = 'index' ORDER BY name";
         assertEquals(Stores.rows(stores[0].toString(), indexes), Stores.rows(stores[1].toString(), indexes),
                 "the indexes are back");
+    }
+
+    /** The lots, running {@code action} as the load asks for the lot at {@code index} (from 0). */
+    private static Iterable<ObjectNode> running(List<ObjectNode> lots, int index, Runnable action) {
+        return () -> new Iterator<>() {
+            private int next;
+
+            @Override
+            public boolean hasNext() {
+                return next < lots.size();
+            }
+
+            @Override
+            public ObjectNode next() {
+                if (next == index) {
+                    action.run();
+                }
+                return lots.get(next++);
+            }
+        };
+    }
+
+    private static List<String> journalFiles(Path store) {
+        List<String> files = new ArrayList<>();
+        for (String suffix : new String[] {"-journal", "-wal"}) {
+            if (Files.exists(Path.of(store + suffix))) {
+                files.add(suffix);
+            }
+        }
+        return files;
+    }
+
+    @Test
+    void aBulkLoadThatHasTheStoreToItselfWritesThroughARollbackJournalAndLeavesTheLogModeAfter() throws Exception {
+        Path file = twins()[1];
+        List<ObjectNode> lots = lots();
+        List<List<String>> midway = new ArrayList<>();
+        try (HistoryStore store = HistoryStore.open(file.toString())) {
+            store.appendEach(running(lots, lots.size() / 2, () -> midway.add(journalFiles(file))), lots.size(), at);
+            assertEquals(List.of(List.of("wal")), Stores.rows(file.toString(), "PRAGMA journal_mode"));
+        }
+        assertEquals(List.of(List.of("-journal")), midway, "a rollback journal and no log during the load");
+        assertEquals(List.of(), journalFiles(file), "nothing left beside the store");
+        try (HistoryStore store = HistoryStore.open(file.toString())) {
+            assertEquals(lots.size() + 3, store.verify().records());
+        }
+    }
+
+    @Test
+    void aBulkLoadStaysInTheLogWhileAnotherConnectionHasTheStoreOpen() throws Exception {
+        Path file = twins()[1];
+        List<ObjectNode> lots = lots();
+        List<List<String>> midway = new ArrayList<>();
+        try (HistoryStore reader = HistoryStore.open(file.toString());
+                HistoryStore store = HistoryStore.open(file.toString())) {
+            assertEquals(3, reader.rows(null, null).size());
+            store.appendEach(running(lots, lots.size() / 2, () -> midway.add(journalFiles(file))), lots.size(), at);
+            assertEquals(lots.size() + 3, reader.rows(null, null).size());
+        }
+        assertEquals(List.of(List.of("-wal")), midway, "the log, and no rollback journal, during the load");
+    }
+
+    @Test
+    void aStoreOpenedDuringABulkLoadWaitsForItsCommit() throws Exception {
+        Path file = twins()[1];
+        List<ObjectNode> lots = lots();
+        AtomicReference<Object> seen = new AtomicReference<>();
+        Thread opener = new Thread(() -> {
+            try (HistoryStore store = HistoryStore.open(file.toString())) {
+                seen.set(store.rows(null, null).size());
+            } catch (RuntimeException e) {
+                seen.set(e);
+            }
+        });
+        try (HistoryStore store = HistoryStore.open(file.toString())) {
+            store.appendEach(running(lots, lots.size() / 2, () -> {
+                opener.start();
+                // The opener finds the store held in rollback-journal mode and waits between its tries.
+                while (opener.isAlive() && opener.getState() != Thread.State.TIMED_WAITING) {
+                    Thread.onSpinWait();
+                }
+            }), lots.size(), at);
+        }
+        opener.join();
+        assertEquals(lots.size() + 3, seen.get(), "the opener read the store after the load's commit");
+    }
+
+    @Test
+    void aBulkLoadKilledOnTheWayRecordsNothingAndTheStoreOpensAsBefore() throws Exception {
+        Path file = twins()[1];
+        String classpath = System.getProperty("surefire.test.class.path", System.getProperty("java.class.path"));
+        Random random = new Random(2859);
+        int count = 5000;
+        for (int round = 0; round < 3; round++) {
+            Process process = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                    "-Xmx128m", "-Dlog4j.provider=org.apache.logging.log4j.simple.internal.SimpleProvider", "-cp",
+                    classpath, BulkRecorder.class.getName(), file.toString(), Integer.toString(count))
+                    .redirectErrorStream(true).start();
+            // A count of lots handed over, not a time, so that a slow machine moves the kill point nowhere.
+            String killAt = "writing " + (1 + random.nextInt(count / 100 - 1));
+            try (BufferedReader out = new BufferedReader(new InputStreamReader(process.getInputStream(),
+                    StandardCharsets.UTF_8))) {
+                String line = out.readLine();
+                while (line != null && !line.equals(killAt)) {
+                    line = out.readLine();
+                }
+                assertEquals(killAt, line, "round " + round + ": the load ended before it was killed");
+                process.destroyForcibly(); // SIGKILL on Linux
+            }
+            process.waitFor();
+            try (HistoryStore store = HistoryStore.open(file.toString())) {
+                HistoryStore.Verification verification = store.verify();
+                assertTrue(verification.intact(), "round " + round + ": " + verification.problem());
+                assertEquals(3, verification.records(), "round " + round + ": nothing was recorded");
+            }
+            assertEquals(List.of(List.of("wal")), Stores.rows(file.toString(), "PRAGMA journal_mode"));
+            assertEquals(4, Stores.rows(file.toString(), "SELECT name FROM sqlite_master WHERE type = 'index'"
+                    + " AND sql IS NOT NULL").size(), "round " + round + ": the indexes are there");
+        }
     }
 }
