@@ -67,6 +67,12 @@ class JsonTreeTest {
         assertEquals(MAPPER.readTree(compact), JsonTree.strict(compact));
     }
 
+    /** Trees of text, whole numbers, booleans and nulls, written without the generator, and names of any text. */
+    @Property(tries = 500)
+    void aPlainTreeIsWrittenSortedAsTheMapperWritesIt(@ForAll("plainTrees") JsonNode tree) throws IOException {
+        assertEquals(MAPPER.writeValueAsString(sortedByMapper(tree)), JsonTree.sortedCompact(tree));
+    }
+
     @Test
     void aNameGivenTwiceIsRefusedWhereItStands() {
         JsonParseException e = assertThrows(JsonParseException.class,
@@ -115,25 +121,43 @@ class JsonTreeTest {
         return tree(3);
     }
 
+    @Provide
+    Arbitrary<JsonNode> plainTrees() {
+        // Control characters, quotes, backslashes, slashes, Latin-1, line separators, an emoji and a lone surrogate.
+        Arbitrary<String> text = Arbitraries.strings().withCharRange('\u0000', '\u00ff')
+                .withChars('\u2028', '\u2029', '\ud83d', '\ude00', '\ud800', '\u202e').ofMaxLength(12);
+        JsonNodeFactory nodes = JsonNodeFactory.instance;
+        return tree(3, Arbitraries.oneOf(
+                Arbitraries.integers().map(nodes::numberNode),
+                Arbitraries.longs().map(nodes::numberNode),
+                text.map(nodes::textNode),
+                Arbitraries.of(true, false).map(nodes::booleanNode),
+                Arbitraries.just(nodes.nullNode())), text);
+    }
+
     private static Arbitrary<JsonNode> tree(int depth) {
         JsonNodeFactory nodes = JsonNodeFactory.instance;
-        Arbitrary<JsonNode> leaf = Arbitraries.oneOf(
+        return tree(depth, Arbitraries.oneOf(
                 Arbitraries.integers().map(nodes::numberNode),
                 Arbitraries.longs().map(nodes::numberNode),
                 Arbitraries.doubles().map(nodes::numberNode),
                 Arbitraries.strings().ofMaxLength(12).map(nodes::textNode),
                 Arbitraries.of(true, false).map(nodes::booleanNode),
-                Arbitraries.just(nodes.nullNode()));
+                Arbitraries.just(nodes.nullNode())), Arbitraries.strings().alpha().ofMaxLength(6));
+    }
+
+    private static Arbitrary<JsonNode> tree(int depth, Arbitrary<JsonNode> leaf, Arbitrary<String> names) {
+        JsonNodeFactory nodes = JsonNodeFactory.instance;
         if (depth == 0) {
             return leaf;
         }
-        Arbitrary<JsonNode> inner = tree(depth - 1);
+        Arbitrary<JsonNode> inner = tree(depth - 1, leaf, names);
         Arbitrary<JsonNode> array = inner.list().ofMaxSize(4).map(elements -> {
             ArrayNode a = nodes.arrayNode();
             elements.forEach(a::add);
             return a;
         });
-        Arbitrary<JsonNode> object = Arbitraries.maps(Arbitraries.strings().alpha().ofMaxLength(6), inner)
+        Arbitrary<JsonNode> object = Arbitraries.maps(names, inner)
                 .ofMaxSize(4).map(fields -> {
                     ObjectNode o = nodes.objectNode();
                     fields.forEach(o::set);
