@@ -216,9 +216,13 @@ public class HistoryBenchmark {
                 .getSystemLoadAverage());
     }
 
-    /** A connection opened as the store opens its own (HistoryStore.open): the same driver and settings. */
+    /** A connection opened as the store opens its own (HistoryStore.open): the same driver, settings and mode. */
     private static Connection connect(String store) throws Exception {
-        return new org.sqlite.JDBC().connect("jdbc:sqlite:" + store, HistoryStore.sqliteSettings());
+        Connection connection = new org.sqlite.JDBC().connect("jdbc:sqlite:" + store, HistoryStore.sqliteSettings());
+        try (Statement statement = connection.createStatement()) {
+            statement.execute("PRAGMA journal_mode = WAL");
+        }
+        return connection;
     }
 
     /** The totals per supplier of the current lots, which the ranking ranks. */
