@@ -25,7 +25,7 @@ final class CurveCommand implements Runnable {
         EvaluatePlan.ChartFiles drawn = charts.files();
         format.outputs(drawn.all(), drawn.oc(), drawn.aoq(), drawn.ati(), drawn.asn());
         format.print(EvaluatePlan.run(new EvaluatePlan.Request(planFile, defectClass, sampleSize.n, acceptance.c,
-                models.named(), models.lotSize(), marked.aql.level, marked.ltpd.level, upTo, steps, charts.files(),
+                models.named(), models.lotSize(), marked.aql.level, marked.ltpd.level, upTo, steps, drawn,
                 curtailed.on)), CurveRendering::text, CurveRendering::json, CurveRendering::csv);
         format.written("OC, AOQ and ATI chart", drawn.all(), "OC chart", drawn.oc(), "AOQ chart", drawn.aoq(),
                 "ATI chart", drawn.ati(), "ASN chart", drawn.asn());

@@ -1,6 +1,8 @@
 package lotgate.cli;
 
 import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.List;
 import lotgate.files.InputFileException;
 import lotgate.files.OutputFileException;
 import lotgate.history.NameMatch;
@@ -41,8 +43,8 @@ final class Outcomes {
      * "missing SHEET; write 'lotgate sentence PLAN SHEET'" for arguments left out, "missing option --aql" for options:
      * picocli's own wording quotes its labels with their syntax, which a reader need not parse.
      */
-    static String missing(CommandLine.Model.CommandSpec spec, java.util.List<CommandLine.Model.ArgSpec> args) {
-        java.util.List<String> names = new java.util.ArrayList<>();
+    static String missing(CommandLine.Model.CommandSpec spec, List<CommandLine.Model.ArgSpec> args) {
+        List<String> names = new ArrayList<>();
         boolean positional = false;
         for (CommandLine.Model.ArgSpec arg : args) {
             if (arg instanceof CommandLine.Model.OptionSpec option) {

@@ -2,6 +2,12 @@ package lotgate.cli;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Collection;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Set;
 import java.util.function.Function;
 import lotgate.report.Json;
 import picocli.CommandLine.Model.CommandSpec;
@@ -20,7 +26,7 @@ final class OutputFormat {
     CommandSpec command;
 
     /** The folders of the command's output files that did not exist before it ran (its writes create them). */
-    private final java.util.Set<java.nio.file.Path> newFolders = new java.util.LinkedHashSet<>();
+    private final Set<Path> newFolders = new LinkedHashSet<>();
 
     /**
      * Notes, before the command writes, which of its output files' folders do not exist yet, so that {@link #written}
@@ -29,17 +35,17 @@ final class OutputFormat {
     void outputs(Object... files) {
         for (Object file : files) {
             for (Object each : each(file)) {
-                java.nio.file.Path folder = ((java.nio.file.Path) each).getParent();
-                if (folder != null && !java.nio.file.Files.isDirectory(folder)) {
+                Path folder = ((Path) each).getParent();
+                if (folder != null && !Files.isDirectory(folder)) {
                     newFolders.add(folder);
                 }
             }
         }
     }
 
-    private static java.util.Collection<?> each(Object file) {
-        return file instanceof java.util.Collection<?> many ? many
-                : file == null ? java.util.List.of() : java.util.List.of(file);
+    private static Collection<?> each(Object file) {
+        return file instanceof Collection<?> many ? many
+                : file == null ? List.of() : List.of(file);
     }
 
     /** Prints a job's result in the format asked for; only that format's rendering is made. */
@@ -69,8 +75,8 @@ final class OutputFormat {
                         .append(System.lineSeparator());
             }
         }
-        for (java.nio.file.Path folder : newFolders) {
-            if (java.nio.file.Files.isDirectory(folder)) {
+        for (Path folder : newFolders) {
+            if (Files.isDirectory(folder)) {
                 lines.append("  folder ").append(folder).append(" did not exist and was created")
                         .append(System.lineSeparator());
             }
