@@ -59,11 +59,38 @@ public final class JsonTree {
         return write(node, true, false);
     }
 
-    /** The tree as compact text with the names of every object in sorted order, at every level. */
+    /**
+     * The tree as compact text with the names of every object in sorted order, at every level. A tree of plain
+     * values is written into this thread's shared builder; any other is written again by {@link #write} into a writer
+     * of its own, which never calls back here, so the builder's partial text is never in use twice.
+     */
     public static String sortedCompact(JsonNode node) {
-        StringBuilder text = new StringBuilder(512);
+        StringBuilder text = BUILDER.get();
+        if (text.capacity() > KEPT_CAPACITY) {
+            text = new StringBuilder(512);
+            BUILDER.set(text);
+        }
+        text.setLength(0);
         return plainSorted(text, node) ? text.toString() : write(node, false, true);
     }
+
+    /** The compact text of an array of texts, as {@link #sortedCompact} writes it (a lot key's). */
+    public static String textArray(String... texts) {
+        StringBuilder out = new StringBuilder(16 + 2 * texts.length + Arrays.stream(texts).mapToInt(String::length).sum());
+        out.append('[');
+        for (int i = 0; i < texts.length; i++) {
+            if (i > 0) {
+                out.append(',');
+            }
+            quoted(out, texts[i]);
+        }
+        return out.append(']').toString();
+    }
+
+    /** One builder per thread for {@link #sortedCompact}: an import writes a record's text per lot. */
+    private static final ThreadLocal<StringBuilder> BUILDER = ThreadLocal.withInitial(() -> new StringBuilder(512));
+    /** A builder grown past this by a large tree is not kept. */
+    private static final int KEPT_CAPACITY = 1 << 16;
 
     private static final JsonStringEncoder QUOTES = JsonStringEncoder.getInstance();
     private static final Comparator<Map.Entry<String, JsonNode>> BY_NAME = Map.Entry.comparingByKey();

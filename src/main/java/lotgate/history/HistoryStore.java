@@ -21,6 +21,7 @@ import java.util.Properties;
 import java.util.TreeMap;
 import lotgate.files.CanonicalJson;
 import lotgate.files.IsoText;
+import lotgate.files.MadeAhead;
 
 /**
  * The lot history: an append-only chain of records in an embedded SQLite file or a shared
@@ -377,9 +378,7 @@ public final class HistoryStore implements AutoCloseable {
 
     /** The key that holds a lot to one current record: the hash of its supplier, part and lot id. */
     static String lotKey(String supplier, String part, String lot) {
-        com.fasterxml.jackson.databind.node.ArrayNode key = com.fasterxml.jackson.databind.node.JsonNodeFactory.instance
-                .arrayNode().add(supplier).add(part).add(lot);
-        return CanonicalJson.sha256(CanonicalJson.text(key));
+        return CanonicalJson.sha256(CanonicalJson.textArray(supplier, part, lot));
     }
 
     // ---- writing ----
@@ -563,36 +562,27 @@ public final class HistoryStore implements AutoCloseable {
                 String previous = head.hash();
                 List<String> indexes = bulk >= BULK && bulk >= first ? dropIndexes() : List.of();
                 try (Migrations.RecordInserter inserter = new Migrations.RecordInserter(connection, version,
-                        !indexes.isEmpty())) {
-                    for (ObjectNode content : contents) {
-                        String problem = identifierProblem(content);
-                        if (problem != null) {
-                            throw new StoreException("history store " + location.shown() + ": " + problem
-                                    + " (nothing was recorded)");
-                        }
-                        String text = CanonicalJson.text(content);
-                        long seq = ++last;
-                        String hash = StoredRecord.hashOf(previous, seq, recordedAt, text);
-                        String key = null;
-                        if (version >= 3 && "lot".equals(Migrations.text(content, "kind"))) {
-                            key = lotKey(Migrations.text(content, "supplier"), Migrations.text(content, "part"),
-                                    Migrations.text(content, "lot"));
-                            long supersedes = content.path("supersedes").asLong(0);
-                            if (supersedes > 0) {
-                                inserter.flush();
-                                release(supersedes);
-                            }
+                        !indexes.isEmpty());
+                        MadeAhead<Made> made = new MadeAhead<>(contents.iterator(), new Maker(first, previous,
+                                recordedAt.toString(), inserter), bulk >= BULK)) {
+                    while (made.hasNext()) {
+                        Made record = made.next();
+                        if (record.supersedes() > 0) {
+                            inserter.flush();
+                            release(record.supersedes());
                         }
                         try {
-                            inserter.insert(seq, recordedAt, text, content, previous, hash, key);
+                            inserter.insert(record.row());
                         } catch (SQLException e) {
-                            if (key != null && uniqueViolation(e)) {
-                                throw new KeyTaken(key, content);
+                            if (record.key() != null && uniqueViolation(e)) {
+                                throw new KeyTaken(record.key(), record.row().content());
                             }
                             throw e;
                         }
-                        each.accept(new StoredRecord(seq, recordedAt, text, previous, hash));
-                        previous = hash;
+                        each.accept(new StoredRecord(record.row().seq(), recordedAt, record.text(), previous,
+                                record.hash()));
+                        last = record.row().seq();
+                        previous = record.hash();
                     }
                     inserter.flush();
                 }
@@ -618,6 +608,50 @@ public final class HistoryStore implements AutoCloseable {
                     + Migrations.text(taken.content, "supplier") + ", part " + Migrations.text(taken.content, "part")
                     + " is already recorded as #" + holder + " in " + location.shown() + " (nothing was recorded)",
                     holder);
+        }
+    }
+
+    /** A record made ready to be written: its row, canonical text, chain hash, lot key, and the record it corrects. */
+    private record Made(Migrations.RecordInserter.Row row, String text, String hash, String key, long supersedes) {
+    }
+
+    /**
+     * Makes each content into the record that follows the one before it in the chain. It touches no connection, so
+     * that a bulk load runs it on a thread of its own ({@link MadeAhead}) while the records before are written.
+     */
+    private final class Maker implements java.util.function.Function<ObjectNode, Made> {
+        private final String recordedAt;
+        private final Migrations.RecordInserter inserter;
+        private long seq;
+        private String previous;
+
+        Maker(long seq, String previous, String recordedAt, Migrations.RecordInserter inserter) {
+            this.seq = seq;
+            this.previous = previous;
+            this.recordedAt = recordedAt;
+            this.inserter = inserter;
+        }
+
+        @Override
+        public Made apply(ObjectNode content) {
+            String problem = identifierProblem(content);
+            if (problem != null) {
+                throw new StoreException("history store " + location.shown() + ": " + problem + " (nothing was recorded)");
+            }
+            String text = CanonicalJson.text(content);
+            seq++;
+            String hash = StoredRecord.hashOf(previous, seq, recordedAt, text);
+            String key = null;
+            long supersedes = 0;
+            if (version >= 3 && "lot".equals(Migrations.text(content, "kind"))) {
+                key = lotKey(Migrations.text(content, "supplier"), Migrations.text(content, "part"),
+                        Migrations.text(content, "lot"));
+                supersedes = content.path("supersedes").asLong(0);
+            }
+            Made made = new Made(inserter.row(seq, recordedAt, text, content, previous, hash, key), text, hash, key,
+                    supersedes);
+            previous = hash;
+            return made;
         }
     }
 

@@ -276,11 +276,24 @@ final class Migrations {
             pendingDefects = new Object[rows][];
         }
 
+        /** A record's row and its defect counts' rows, ready to be written. */
+        record Row(long seq, JsonNode content, Object[] values, Object[][] defects) {
+        }
+
         void insert(long seq, Instant recordedAt, String text, JsonNode content, String previous, String hash,
                 String lotKey) throws SQLException {
+            insert(row(seq, recordedAt.toString(), text, content, previous, hash, lotKey));
+        }
+
+        /**
+         * The values of a record's row and of its defect counts' rows; touches no connection, so that a bulk load
+         * makes them on a thread of its own while the rows before are written.
+         */
+        Row row(long seq, String recordedAt, String text, JsonNode content, String previous, String hash,
+                String lotKey) {
             Object[] values = new Object[width];
             values[0] = seq;
-            values[1] = recordedAt.toString();
+            values[1] = recordedAt;
             values[2] = text(content, "kind");
             values[3] = text(content, "supplier");
             values[4] = text(content, "part");
@@ -304,28 +317,45 @@ final class Migrations {
             if (version >= 4) {
                 values[18] = reinstates(content);
             }
-            if (rows == 1) {
-                bind(record, 0, values);
-                record.executeUpdate();
-                if (version >= 2) {
-                    insertDefects(defects, seq, content);
-                }
-                return;
-            }
-            pendingRecords[recordsPending++] = values;
-            if (recordsPending == rows) {
-                recordsPending = write(records, record, pendingRecords, recordsPending);
-            }
+            Object[][] defectValues = NO_ROWS;
             JsonNode types = content.get("defectTypes");
-            if (version >= 2 && types != null && types.isObject()) {
+            if (version >= 2 && types != null && types.isObject() && !types.isEmpty()) {
+                defectValues = new Object[types.size()][];
+                int i = 0;
                 var fields = types.fields();
                 while (fields.hasNext()) {
                     var entry = fields.next();
-                    pendingDefects[defectsPending++] = new Object[] {seq, values[3], values[4], entry.getKey(),
+                    defectValues[i++] = new Object[] {seq, values[3], values[4], entry.getKey(),
                             entry.getValue().asLong()};
-                    if (defectsPending == rows) {
-                        defectsPending = write(defectRows, defects, pendingDefects, defectsPending);
+                }
+            }
+            return new Row(seq, content, values, defectValues);
+        }
+
+        private static final Object[][] NO_ROWS = new Object[0][];
+
+        /** Writes a row made by {@link #row} (in a bulk load, once enough rows are pending to fill a statement). */
+        void insert(Row row) throws SQLException {
+            if (rows == 1) {
+                bind(record, 0, row.values());
+                record.executeUpdate();
+                if (row.defects().length > 0) {
+                    for (Object[] defect : row.defects()) {
+                        bind(defects, 0, defect);
+                        defects.addBatch();
                     }
+                    defects.executeBatch();
+                }
+                return;
+            }
+            pendingRecords[recordsPending++] = row.values();
+            if (recordsPending == rows) {
+                recordsPending = write(records, record, pendingRecords, recordsPending);
+            }
+            for (Object[] defect : row.defects()) {
+                pendingDefects[defectsPending++] = defect;
+                if (defectsPending == rows) {
+                    defectsPending = write(defectRows, defects, pendingDefects, defectsPending);
                 }
             }
         }

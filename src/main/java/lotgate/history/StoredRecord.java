@@ -18,6 +18,11 @@ public record StoredRecord(long seq, Instant recordedAt, String content, String 
 
     /** The chain's hash of a record: SHA-256 over the previous hash, the place, the time and the content. */
     public static String hashOf(String previousHash, long seq, Instant recordedAt, String content) {
-        return lotgate.files.CanonicalJson.sha256(previousHash + "\n" + seq + "\n" + recordedAt + "\n" + content);
+        return hashOf(previousHash, seq, recordedAt.toString(), content);
+    }
+
+    /** The chain's hash of a record whose time is given as the store writes it (ISO-8601, as Instant prints). */
+    static String hashOf(String previousHash, long seq, String recordedAt, String content) {
+        return lotgate.files.CanonicalJson.sha256Lines(previousHash, Long.toString(seq), recordedAt, content);
     }
 }

@@ -73,6 +73,36 @@ class JsonTreeTest {
         assertEquals(MAPPER.writeValueAsString(sortedByMapper(tree)), JsonTree.sortedCompact(tree));
     }
 
+    /** A lot key's text, written without a tree, as the mapper writes the array of its texts. */
+    @Property(tries = 300)
+    void anArrayOfTextsIsWrittenAsTheMapperWritesIt(@ForAll("texts") List<String> texts) throws IOException {
+        ArrayNode array = JsonNodeFactory.instance.arrayNode();
+        texts.forEach(array::add);
+        assertEquals(MAPPER.writeValueAsString(array), CanonicalJson.textArray(texts.toArray(String[]::new)));
+    }
+
+    /**
+     * The hash of lines fed to the digest piece by piece equals the JDK's SHA-256 (java.security.MessageDigest)
+     * of the joined text in UTF-8, for texts longer than the digest's buffer and with any characters.
+     */
+    @Property(tries = 300)
+    void linesAreHashedAsTheirJoinedTextIs(@ForAll("texts") List<String> lines, @ForAll int repeat)
+            throws Exception {
+        List<String> longer = new ArrayList<>(lines);
+        longer.add("x".repeat(Math.floorMod(repeat, 9000)) + String.join("", lines));
+        String joined = String.join("\n", longer);
+        String expected = java.util.HexFormat.of().formatHex(java.security.MessageDigest.getInstance("SHA-256")
+                .digest(joined.getBytes(java.nio.charset.StandardCharsets.UTF_8)));
+        assertEquals(expected, CanonicalJson.sha256Lines(longer.toArray(String[]::new)));
+        assertEquals(expected, CanonicalJson.sha256(joined));
+    }
+
+    @Provide
+    Arbitrary<List<String>> texts() {
+        return Arbitraries.strings().withCharRange('\u0000', '\u00ff')
+                .withChars('\u2028', '\ud83d', '\ude00', '\ud800', '\u00e9').ofMaxLength(40).list().ofMaxSize(5);
+    }
+
     @Test
     void aNameGivenTwiceIsRefusedWhereItStands() {
         JsonParseException e = assertThrows(JsonParseException.class,

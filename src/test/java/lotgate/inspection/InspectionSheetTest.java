@@ -234,6 +234,54 @@ class InspectionSheetTest {
         assertTrue(refused(latin).endsWith("not UTF-8 text; save the CSV as UTF-8"), refused(latin));
     }
 
+    /** A CSV file long enough (over 1 MiB) to be parsed on a thread of its own while its rows are handled. */
+    private Path longCsv(String name, int rows, String lastLine) throws IOException {
+        StringBuilder text = new StringBuilder("unit,result,remark\n");
+        for (int i = 1; i <= rows; i++) {
+            text.append('U').append(i).append(",pass,a remark long enough to fill the file quickly\n");
+        }
+        text.append(lastLine);
+        Path file = folder.resolve(name);
+        Files.writeString(file, text);
+        assertTrue(Files.size(file) > 1 << 20, "the file must be long enough to be parsed ahead");
+        return file;
+    }
+
+    private static boolean parsingThreadAlive() {
+        return Thread.getAllStackTraces().keySet().stream()
+                .anyMatch(t -> t.getName().equals("lotgate-made-ahead") && t.isAlive());
+    }
+
+    @Test
+    void aReaderThatStopsEarlyInALongCsvStopsItsParsingQuietly() throws IOException {
+        Path file = longCsv("long.csv", 30_000, "");
+        for (int stopAt : new int[] {2, 700, 5_000}) {
+            List<Integer> seen = new ArrayList<>();
+            SheetSource.open(file).read(null, (row, cells) -> {
+                seen.add(row);
+                if (row == stopAt) {
+                    throw new RowHandler.Stop();
+                }
+            });
+            assertEquals(stopAt, seen.size());
+            assertEquals(stopAt, seen.get(seen.size() - 1));
+            // Closing waits for the parsing thread, which may have been stopped in the middle of a read.
+            assertTrue(!parsingThreadAlive(), "the parsing thread outlived its reader");
+        }
+        Files.delete(file);
+    }
+
+    @Test
+    void aBadByteFarIntoALongCsvIsReportedAfterTheRowsBeforeIt() throws IOException {
+        Path file = longCsv("nul.csv", 30_000, "U30001,pass,\0\n");
+        List<Integer> seen = new ArrayList<>();
+        SheetException refused = assertThrows(SheetException.class,
+                () -> SheetSource.open(file).read(null, (row, cells) -> seen.add(row)));
+        assertTrue(refused.getMessage().endsWith("not a text file (it holds NUL bytes)"), refused.getMessage());
+        assertEquals(30_001, seen.size(), "every row before the bad one is handled first");
+        assertTrue(!parsingThreadAlive(), "the parsing thread outlived its reader");
+    }
+
     /** Rewrites one entry of an .xlsx package (or adds it), keeping the others. */
     private Path withEntry(Path xlsx, String entry, byte[] content, String name) throws IOException {
         return Packages.withEntry(xlsx, entry, content, folder.resolve(name));

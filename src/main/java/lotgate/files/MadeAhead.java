@@ -1,0 +1,147 @@
+package lotgate.files;
+
+import java.util.ArrayList;
+import java.util.Iterator;
+import java.util.List;
+import java.util.NoSuchElementException;
+import java.util.concurrent.ArrayBlockingQueue;
+import java.util.concurrent.BlockingQueue;
+import java.util.function.Function;
+
+/**
+ * The items of an iterator, each made into another by a function, in order; with {@code ahead}, the iterating and
+ * making run on a thread of their own, a few batches ahead of the reader: a bulk load makes its records (canonical
+ * JSON, chain hashes, lot keys) while the driver writes the ones before, and a long CSV file is parsed while its rows
+ * are checked. Whatever the iterator or the function throws is thrown to the reader in its place, after the items
+ * before it. Closing stops the thread and waits for it, so that nothing it touched is touched by it after (a reader
+ * that stops early may leave a few batches made for nothing).
+ */
+public final class MadeAhead<R> implements Iterator<R>, AutoCloseable {
+    private static final int BATCH = 256;
+    private static final int BATCHES = 8;
+    private static final Object END = new Object();
+
+    private record Failure(Throwable thrown) {
+    }
+
+    private final Iterator<R> inline;
+    private final BlockingQueue<Object> batches;
+    private final Thread thread;
+    private volatile boolean closed;
+    private List<R> batch = List.of();
+    private int next;
+    private boolean ended;
+
+    public <T> MadeAhead(Iterator<T> items, Function<T, R> make, boolean ahead) {
+        if (!ahead) {
+            inline = new Iterator<>() {
+                @Override
+                public boolean hasNext() {
+                    return items.hasNext();
+                }
+
+                @Override
+                public R next() {
+                    return make.apply(items.next());
+                }
+            };
+            batches = null;
+            thread = null;
+            return;
+        }
+        inline = null;
+        batches = new ArrayBlockingQueue<>(BATCHES);
+        thread = new Thread(() -> {
+            List<R> made = new ArrayList<>(BATCH);
+            try {
+                while (!closed && items.hasNext()) {
+                    made.add(make.apply(items.next()));
+                    if (made.size() == BATCH) {
+                        batches.put(made);
+                        made = new ArrayList<>(BATCH);
+                    }
+                }
+                batches.put(made);
+                batches.put(END);
+            } catch (InterruptedException e) {
+                // Closed by the reader: nothing more is wanted.
+            } catch (Throwable thrown) {
+                try {
+                    // The items made before the failure come first, in their batch.
+                    batches.put(made);
+                    batches.put(new Failure(thrown));
+                } catch (InterruptedException e) {
+                    // Closed by the reader, which no longer reads the failure.
+                }
+            }
+        }, "lotgate-made-ahead");
+        thread.setDaemon(true);
+        thread.start();
+    }
+
+    @Override
+    public boolean hasNext() {
+        if (inline != null) {
+            return inline.hasNext();
+        }
+        while (next == batch.size()) {
+            if (ended) {
+                return false;
+            }
+            Object taken;
+            try {
+                taken = batches.take();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new IllegalStateException("interrupted while waiting for the items made ahead", e);
+            }
+            if (taken == END) {
+                ended = true;
+            } else if (taken instanceof Failure failure) {
+                ended = true;
+                if (failure.thrown() instanceof RuntimeException e) {
+                    throw e;
+                }
+                if (failure.thrown() instanceof Error e) {
+                    throw e;
+                }
+                throw new IllegalStateException(failure.thrown());
+            } else {
+                @SuppressWarnings("unchecked")
+                List<R> made = (List<R>) taken;
+                batch = made;
+                next = 0;
+            }
+        }
+        return true;
+    }
+
+    @Override
+    public R next() {
+        if (!hasNext()) {
+            throw new NoSuchElementException();
+        }
+        return inline != null ? inline.next() : batch.get(next++);
+    }
+
+    @Override
+    public void close() {
+        if (thread == null) {
+            return;
+        }
+        closed = true;
+        thread.interrupt();
+        batches.clear();
+        boolean interrupted = false;
+        while (thread.isAlive()) {
+            try {
+                thread.join();
+            } catch (InterruptedException e) {
+                interrupted = true;
+            }
+        }
+        if (interrupted) {
+            Thread.currentThread().interrupt();
+        }
+    }
+}
