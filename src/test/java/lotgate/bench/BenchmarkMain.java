@@ -29,6 +29,10 @@ public final class BenchmarkMain {
             WorkbenchLoad.run();
             return;
         }
+        if (include.equals("ImportBenchmark")) {
+            ImportBenchmark.compareRounds();
+            return;
+        }
         if (include.equals("DesignLatency")) {
             DesignLatency.run();
             return;
@@ -109,15 +113,6 @@ public final class BenchmarkMain {
             HistoryBenchmark.comparePairs();
             System.out.println();
         }
-        String imports = ImportBenchmark.class.getName() + ".";
-        if (scores.containsKey(imports + "importLots") && scores.containsKey(imports + "bareSqlite3Import")) {
-            System.out.println("Import of " + ImportBenchmark.LOTS + " lots into a fresh store, -Xmx256m (ms, same run;"
-                    + " target: at most 5 times sqlite3's bare import)");
-            System.out.printf("%-44s %10.0f   sqlite3 %9.0f   ratio %5.2f%n", "lotgate import (whole command)",
-                    scores.get(imports + "importLots"), scores.get(imports + "bareSqlite3Import"),
-                    scores.get(imports + "importLots") / scores.get(imports + "bareSqlite3Import"));
-            System.out.println();
-        }
         Double sentence = scores.get(SentencingBenchmark.class.getName() + ".sentence");
         Double bare = scores.get(SentencingBenchmark.class.getName() + ".bareSaxPass");
         if (sentence != null && bare != null) {
@@ -127,6 +122,9 @@ public final class BenchmarkMain {
             System.out.printf("%-44s %12.2f   (target: at most 1.30)%n", "ratio sentence / bare pass", sentence / bare);
         }
         if (include.equals(ALL)) {
+            // The import against sqlite3, in alternating rounds of a JVM of its own, after the JMH benchmarks.
+            ImportBenchmark.compareRounds();
+            System.out.println();
             // The workbench's bounded load test on loopback runs after the JMH benchmarks.
             System.out.println();
             WorkbenchLoad.run();

@@ -198,11 +198,11 @@ public class HistoryBenchmark {
         return (System.nanoTime() - begin) / 1e6 / runs;
     }
 
-    private static double median(double[] values) {
+    static double median(double[] values) {
         return quantile(values, 0.5);
     }
 
-    private static double quantile(double[] values, double q) {
+    static double quantile(double[] values, double q) {
         double[] sorted = values.clone();
         Arrays.sort(sorted);
         double place = q * (sorted.length - 1);
@@ -211,7 +211,7 @@ public class HistoryBenchmark {
         return sorted[below] + (place - below) * (sorted[above] - sorted[below]);
     }
 
-    private static String load() {
+    static String load() {
         return String.format(java.util.Locale.ROOT, "%.2f", ManagementFactory.getOperatingSystemMXBean()
                 .getSystemLoadAverage());
     }

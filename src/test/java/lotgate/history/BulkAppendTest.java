@@ -92,6 +92,34 @@ class BulkAppendTest {
                 + " AND sql IS NOT NULL").size(), "the lot key, supplier, corrections and defect indexes");
     }
 
+    /** A new store takes 16 KiB pages; one made with SQLite's default 4 KiB keeps them, and takes loads alike. */
+    @Test
+    void aNewStoreTakesLargerPagesAndAnOlderStoreKeepsItsOwn() throws Exception {
+        Path[] stores = twins();
+        assertEquals(List.of(List.of(String.valueOf(HistoryStore.PAGE_SIZE))), pageSize(stores[0]));
+        try (var connection = java.sql.DriverManager.getConnection("jdbc:sqlite:" + stores[1]);
+                var statement = connection.createStatement()) {
+            statement.execute("PRAGMA journal_mode = DELETE");
+            statement.execute("PRAGMA page_size = 4096");
+            statement.execute("VACUUM");
+            statement.execute("PRAGMA journal_mode = WAL");
+        }
+        assertEquals(List.of(List.of("4096")), pageSize(stores[1]));
+        List<ObjectNode> lots = lots();
+        try (HistoryStore store = HistoryStore.open(stores[1].toString())) {
+            assertEquals(lots.size(), store.appendEach(lots, lots.size(), at));
+            store.append(Stores.lot("Invented Supplier 0", "P-0", "L-after", true, 0), at);
+            HistoryStore.Verification verification = store.verify();
+            assertTrue(verification.intact(), verification.problem());
+            assertEquals(lots.size() + 4, verification.records());
+        }
+        assertEquals(List.of(List.of("4096")), pageSize(stores[1]));
+    }
+
+    private static List<List<String>> pageSize(Path store) throws Exception {
+        return Stores.rows(store.toString(), "PRAGMA page_size");
+    }
+
     @Test
     void aBulkLoadRefusesALotTheStoreHoldsAsRecordingLotByLotDoes() throws Exception {
         List<ObjectNode> lots = lots();
