@@ -317,35 +317,15 @@ final class Migrations {
             if (version >= 4) {
                 values[18] = reinstates(content);
             }
-            Object[][] defectValues = NO_ROWS;
-            JsonNode types = content.get("defectTypes");
-            if (version >= 2 && types != null && types.isObject() && !types.isEmpty()) {
-                defectValues = new Object[types.size()][];
-                int i = 0;
-                var fields = types.fields();
-                while (fields.hasNext()) {
-                    var entry = fields.next();
-                    defectValues[i++] = new Object[] {seq, values[3], values[4], entry.getKey(),
-                            entry.getValue().asLong()};
-                }
-            }
-            return new Row(seq, content, values, defectValues);
+            return new Row(seq, content, values, version >= 2 ? defectCounts(seq, content) : NO_ROWS);
         }
-
-        private static final Object[][] NO_ROWS = new Object[0][];
 
         /** Writes a row made by {@link #row} (in a bulk load, once enough rows are pending to fill a statement). */
         void insert(Row row) throws SQLException {
             if (rows == 1) {
                 bind(record, 0, row.values());
                 record.executeUpdate();
-                if (row.defects().length > 0) {
-                    for (Object[] defect : row.defects()) {
-                        bind(defects, 0, defect);
-                        defects.addBatch();
-                    }
-                    defects.executeBatch();
-                }
+                insertDefects(defects, row.defects());
                 return;
             }
             pendingRecords[recordsPending++] = row.values();
@@ -411,26 +391,38 @@ final class Migrations {
     private static void insertDefects(Connection connection, long seq, JsonNode content) throws SQLException {
         try (PreparedStatement insert = connection.prepareStatement("INSERT INTO defect_count (seq, supplier, part,"
                 + " defect, units) VALUES (?, ?, ?, ?, ?)")) {
-            insertDefects(insert, seq, content);
+            insertDefects(insert, defectCounts(seq, content));
         }
     }
 
-    private static void insertDefects(PreparedStatement insert, long seq, JsonNode content) throws SQLException {
-        JsonNode types = content.get("defectTypes");
-        if (types == null || !types.isObject() || types.isEmpty()) {
+    private static void insertDefects(PreparedStatement insert, Object[][] rows) throws SQLException {
+        if (rows.length == 0) {
             return;
         }
-        var fields = types.fields();
-        while (fields.hasNext()) {
-            var entry = fields.next();
-            insert.setLong(1, seq);
-            insert.setString(2, text(content, "supplier"));
-            insert.setString(3, text(content, "part"));
-            insert.setString(4, entry.getKey());
-            insert.setLong(5, entry.getValue().asLong());
+        for (Object[] row : rows) {
+            RecordInserter.bind(insert, 0, row);
             insert.addBatch();
         }
         insert.executeBatch();
+    }
+
+    private static final Object[][] NO_ROWS = new Object[0][];
+
+    /** The defect_count rows of a record: seq, supplier, part, defect type and units, one per type it counts. */
+    private static Object[][] defectCounts(long seq, JsonNode content) {
+        JsonNode types = content.get("defectTypes");
+        if (types == null || !types.isObject() || types.isEmpty()) {
+            return NO_ROWS;
+        }
+        Object[][] rows = new Object[types.size()][];
+        int i = 0;
+        var fields = types.fields();
+        while (fields.hasNext()) {
+            var entry = fields.next();
+            rows[i++] = new Object[] {seq, text(content, "supplier"), text(content, "part"), entry.getKey(),
+                    entry.getValue().asLong()};
+        }
+        return rows;
     }
 
     /** The columns verification reads, in this order, for a schema version. */
