@@ -2,6 +2,7 @@ package lotgate.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import lotgate.history.HistoryStore;
 import lotgate.jobs.ImportHistory;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -14,7 +15,7 @@ import picocli.CommandLine.Spec;
         description = {"Reads one past lot per row under a header row (columns, any order: lot, supplier, part,"
                 + " received, sample size, nonconforming, verdict; optional: lot size, acceptance number, inspector,"
                 + " defects as 'type:count; type:count', production steady or irregular) and records them in the"
-                + " file's order in one transaction. Every row is checked first; one bad cell records nothing.", ""})
+                + " file's order in one transaction. One bad cell records nothing.", ""})
 final class ImportCommand implements Runnable {
     @Parameters(index = "0", paramLabel = "FILE", description = "The list of past lots: .xlsx, .xls or .csv.")
     Path file;
@@ -31,17 +32,45 @@ final class ImportCommand implements Runnable {
     @Override
     public void run() {
         ImportHistory.Request request = new ImportHistory.Request(file, sheet.name, storeOption.location());
-        ImportHistory.Lots lots;
-        try (Progress reading = Progress.onTerminal("import: reading rows", 0, true)) {
-            lots = ImportHistory.check(request, reading::at);
-        }
-        storeOption.prepareForRecording();
+        HistoryStore[] opened = new HistoryStore[1];
         ImportHistory.Result result;
-        try (Progress recording = Progress.onTerminal("import: recording lots", lots.lots().size(), true)) {
-            result = ImportHistory.record(lots, recording::at);
+        try (Shown shown = new Shown()) {
+            result = ImportHistory.run(request, () -> opened[0] = storeOption.openQuietly(),
+                    System.console() == null ? ImportHistory.Watch.NONE : shown);
         }
+        storeOption.announceIfCreated(opened[0]);
         PrintWriter out = spec.commandLine().getOut();
         out.println("Imported " + result.recorded() + " lots from " + result.file() + " into " + result.store() + ".");
         out.flush();
+    }
+
+    /**
+     * The import's progress line: the rows checked, then the lots recorded (of how many, when the whole list was
+     * checked first). The rows are told from the thread that checks them, the lots from the one that records.
+     */
+    private static final class Shown implements ImportHistory.Watch, AutoCloseable {
+        private Progress line = Progress.onTerminal("import: checking rows", 0, true);
+
+        @Override
+        public synchronized void rowRead(long row) {
+            line.at(row);
+        }
+
+        @Override
+        public synchronized void recording(long lots) {
+            line.close();
+            line = Progress.onTerminal(lots > 0 ? "import: recording lots" : "import: checking and recording lots",
+                    lots, true);
+        }
+
+        @Override
+        public synchronized void recorded(long lots) {
+            line.at(lots);
+        }
+
+        @Override
+        public synchronized void close() {
+            line.close();
+        }
     }
 }

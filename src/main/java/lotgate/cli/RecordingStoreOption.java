@@ -29,21 +29,33 @@ final class RecordingStoreOption extends StoreOption {
         openForRecording().close();
     }
 
-    /** Opens the store to record into it, creating it only where allowed. */
+    /** Opens the store to record into it, creating it only where allowed, and says when it created it. */
     HistoryStore openForRecording() {
-        HistoryStore store;
+        HistoryStore store = openQuietly();
+        announceIfCreated(store);
+        return store;
+    }
+
+    /**
+     * Opens the store to record into it, creating it only where allowed, without a word: a job that may remove a
+     * store it created after a failure says so by {@link #announceIfCreated} once it has succeeded.
+     */
+    HistoryStore openQuietly() {
         try {
-            store = HistoryStore.open(location(), create || !given());
+            return HistoryStore.open(location(), create || !given());
         } catch (StoreException.Missing missing) {
             throw new StoreException.Missing(missing.getMessage() + "; give --create-store to start a new store there"
                     + " (nothing was recorded)");
         }
-        if (store.created()) {
+    }
+
+    /** Says on stderr that the store was created, when opening it did. */
+    void announceIfCreated(HistoryStore store) {
+        if (store != null && store.created()) {
             PrintWriter err = mixee.commandLine().getErr();
             err.println("lotgate: created a new history store " + store.location() + " (store id " + store.storeId()
                     + ")");
             err.flush();
         }
-        return store;
     }
 }

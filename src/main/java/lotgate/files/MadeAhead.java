@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.NoSuchElementException;
 import java.util.concurrent.ArrayBlockingQueue;
 import java.util.concurrent.BlockingQueue;
+import java.util.function.Consumer;
 import java.util.function.Function;
 
 /**
@@ -51,32 +52,76 @@ public final class MadeAhead<R> implements Iterator<R>, AutoCloseable {
         }
         inline = null;
         batches = new ArrayBlockingQueue<>(BATCHES);
-        thread = new Thread(() -> {
-            List<R> made = new ArrayList<>(BATCH);
-            try {
-                while (!closed && items.hasNext()) {
-                    made.add(make.apply(items.next()));
-                    if (made.size() == BATCH) {
-                        batches.put(made);
-                        made = new ArrayList<>(BATCH);
-                    }
+        thread = start(sink -> {
+            while (!closed && items.hasNext()) {
+                sink.accept(make.apply(items.next()));
+            }
+        }, "lotgate-made-ahead");
+    }
+
+    private MadeAhead(Consumer<Consumer<R>> producer, String name) {
+        inline = null;
+        batches = new ArrayBlockingQueue<>(BATCHES);
+        thread = start(producer, name);
+    }
+
+    /**
+     * The items a producer hands to the consumer it is given, run on a thread of its own (named {@code name}) a few
+     * batches ahead of the reader: the rows of a list of past lots are checked while the lots before are recorded.
+     * Once the reader has closed, the consumer throws, which ends the producer.
+     */
+    public static <R> MadeAhead<R> pushed(Consumer<Consumer<R>> producer, String name) {
+        return new MadeAhead<>(producer, name);
+    }
+
+    /** Thrown by a closed reader's consumer, to end its producer. */
+    private static final class Stopped extends RuntimeException {
+        Stopped() {
+            super(null, null, false, false);
+        }
+    }
+
+    private Thread start(Consumer<Consumer<R>> producer, String name) {
+        Thread started = new Thread(() -> {
+            List<List<R>> made = new ArrayList<>(List.of(new ArrayList<>(BATCH)));
+            Consumer<R> sink = item -> {
+                if (closed) {
+                    throw new Stopped();
                 }
-                batches.put(made);
+                List<R> batch = made.get(0);
+                batch.add(item);
+                if (batch.size() == BATCH) {
+                    try {
+                        batches.put(batch);
+                    } catch (InterruptedException e) {
+                        throw new Stopped();
+                    }
+                    made.set(0, new ArrayList<>(BATCH));
+                }
+            };
+            try {
+                producer.accept(sink);
+                batches.put(made.get(0));
                 batches.put(END);
             } catch (InterruptedException e) {
                 // Closed by the reader: nothing more is wanted.
             } catch (Throwable thrown) {
+                if (closed) {
+                    // Closed by the reader (the producer may have wrapped what the consumer threw).
+                    return;
+                }
                 try {
                     // The items made before the failure come first, in their batch.
-                    batches.put(made);
+                    batches.put(made.get(0));
                     batches.put(new Failure(thrown));
                 } catch (InterruptedException e) {
                     // Closed by the reader, which no longer reads the failure.
                 }
             }
-        }, "lotgate-made-ahead");
-        thread.setDaemon(true);
-        thread.start();
+        }, name);
+        started.setDaemon(true);
+        started.start();
+        return started;
     }
 
     @Override

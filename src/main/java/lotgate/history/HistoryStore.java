@@ -14,6 +14,7 @@ import java.time.Instant;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -242,6 +243,43 @@ public final class HistoryStore implements AutoCloseable {
         }
     }
 
+    /**
+     * Closes a SQLite store that this opening created and removes its file (with its journal or log), when a
+     * failure left it holding nothing: a command that was refused leaves no new store behind. Any other store is
+     * only closed.
+     */
+    public void discardIfCreated() {
+        close();
+        if (!created || postgres) {
+            return;
+        }
+        Path file = location.file();
+        for (String suffix : new String[] {"", "-journal", "-wal", "-shm"}) {
+            try {
+                Files.deleteIfExists(file.resolveSibling(file.getFileName() + suffix));
+            } catch (java.io.IOException e) {
+                throw new StoreException("cannot remove the new history store " + location.shown()
+                        + " after the failure (" + e.getMessage() + "); remove it by hand", e);
+            }
+        }
+    }
+
+    /**
+     * The fewest records an append of many ({@link #appendEach(Iterable, long, Instant)}) writes as a bulk load into
+     * this store now: {@link #BULK}, or as many as the store holds if more; none on PostgreSQL, where records are
+     * written one by one.
+     */
+    public long bulkLoadFrom() {
+        if (postgres) {
+            return Long.MAX_VALUE;
+        }
+        return read("count the records", () -> {
+            Head head = lockedHead();
+            // A store without its chain head is damaged; the append says so.
+            return head == null ? BULK : Math.max(BULK, head.seq());
+        });
+    }
+
     private interface Work<T> {
         T run() throws SQLException;
     }
@@ -404,6 +442,13 @@ public final class HistoryStore implements AutoCloseable {
     }
 
     /** The work before the commit failed: the transaction is rolled back and its own exception passed on. */
+    /** What the contents of an append threw (a list being checked as it is read), passed on as it is. */
+    private static final class ContentsFailed extends StoreException {
+        ContentsFailed(RuntimeException cause) {
+            super("the records' contents failed", cause);
+        }
+    }
+
     private static final class BeforeCommitFailed extends StoreException {
         BeforeCommitFailed(RuntimeException cause) {
             super("the work before the commit failed", cause);
@@ -463,7 +508,8 @@ public final class HistoryStore implements AutoCloseable {
     }
 
     /**
-     * Appends many records as {@link #appendEach(Iterable, Instant)} does, told how many there will be. On SQLite,
+     * Appends many records as {@link #appendEach(Iterable, Instant)} does, told how many there will be at least
+     * ({@code expected}; a stream that is still being read may hold more). On SQLite,
      * records at least {@link #BULK} and at least as many as the store holds are written as a bulk load: with a
      * larger page cache, and the store's own indexes (but a partial one) dropped at the start of the transaction
      * and created again before its commit (in one sorted pass each, where inserting keys one by one would touch
@@ -522,7 +568,7 @@ public final class HistoryStore implements AutoCloseable {
     }
 
     /** The fewest records an append writes as a bulk load (see {@link #appendEach(Iterable, long, Instant)}). */
-    static final long BULK = 1000;
+    public static final long BULK = 1000;
     /**
      * SQLite's page cache during a bulk load, in kibibytes (negative: a size, not a page count); native memory, taken
      * as pages are used. 100,000 lots fill 83 MB: with 64 MB, creating each index read the table back from the file.
@@ -571,7 +617,7 @@ public final class HistoryStore implements AutoCloseable {
                 List<String> indexes = bulk >= BULK && bulk >= first ? dropIndexes() : List.of();
                 try (Migrations.RecordInserter inserter = new Migrations.RecordInserter(connection, version,
                         !indexes.isEmpty());
-                        MadeAhead<Made> made = new MadeAhead<>(contents.iterator(), new Maker(first, previous,
+                        MadeAhead<Made> made = new MadeAhead<>(passingOn(contents.iterator()), new Maker(first, previous,
                                 recordedAt.toString(), inserter), bulk >= BULK)) {
                     while (made.hasNext()) {
                         Made record = made.next();
@@ -608,7 +654,7 @@ public final class HistoryStore implements AutoCloseable {
                 }
                 return last - first;
             });
-        } catch (BeforeCommitFailed failed) {
+        } catch (BeforeCommitFailed | ContentsFailed failed) {
             throw (RuntimeException) failed.getCause();
         } catch (KeyTaken taken) {
             long holder = holderOf(taken.key);
@@ -616,6 +662,31 @@ public final class HistoryStore implements AutoCloseable {
                     + Migrations.text(taken.content, "supplier") + ", part " + Migrations.text(taken.content, "part")
                     + " is already recorded as #" + holder + " in " + location.shown() + " (nothing was recorded)",
                     holder);
+        }
+    }
+
+    /** The contents, whatever they throw (but a store's failure) passed on to the caller as it is. */
+    private static Iterator<ObjectNode> passingOn(Iterator<ObjectNode> contents) {
+        return new Iterator<>() {
+            @Override
+            public boolean hasNext() {
+                return passedOn(contents::hasNext);
+            }
+
+            @Override
+            public ObjectNode next() {
+                return passedOn(contents::next);
+            }
+        };
+    }
+
+    private static <T> T passedOn(java.util.function.Supplier<T> step) {
+        try {
+            return step.get();
+        } catch (StoreException e) {
+            throw e;
+        } catch (RuntimeException e) {
+            throw new ContentsFailed(e);
         }
     }
 

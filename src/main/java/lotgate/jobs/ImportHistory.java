@@ -5,6 +5,7 @@ import java.nio.file.Path;
 import java.time.Instant;
 import java.time.LocalDate;
 import java.time.temporal.ChronoUnit;
+import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.Iterator;
@@ -13,11 +14,15 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.function.BiFunction;
+import java.util.function.Consumer;
 import java.util.function.Function;
 import java.util.function.LongConsumer;
 import java.util.function.Supplier;
+import java.util.function.ToLongFunction;
+import lotgate.files.MadeAhead;
 import lotgate.history.HistoryStore;
 import lotgate.history.Identifiers;
+import lotgate.history.LotRow;
 import lotgate.history.RecordContent;
 import lotgate.history.Severity;
 import lotgate.history.SeverityTracker;
@@ -25,15 +30,21 @@ import lotgate.history.SupplierHistory;
 import lotgate.history.SwitchingRules;
 import lotgate.inspection.Cell;
 import lotgate.inspection.Days;
+import lotgate.inspection.RowHandler;
 import lotgate.inspection.SampleReader;
 import lotgate.inspection.SheetException;
 import lotgate.inspection.SheetSource;
 
 /**
- * Importing past lots from a spreadsheet or CSV into the history, all or nothing: every row is checked first
- * ({@link #check}), then the lots are recorded in the file's order in one transaction ({@link #record}), each
- * with the inspection severity the switching rules had its part under. A bad cell or a lot already recorded is
- * a {@link SheetException} naming the file, sheet and cell or row, and records nothing.
+ * Importing past lots from a spreadsheet or CSV into the history, all or nothing: every row is checked, and the
+ * lots are recorded in the file's order in one transaction, each with the inspection severity the switching rules
+ * had its part under. A bad cell or a lot already recorded is a {@link SheetException} naming the file, sheet and
+ * cell or row, and records nothing.
+ *
+ * <p>A short list is checked whole before the store is touched. A long one, of at least as many lots as a bulk load
+ * takes ({@link HistoryStore#bulkLoadFrom}), is checked on a thread of its own while the lots before are recorded,
+ * so that no more than the first of its lots are held at once; a bad row far down then rolls the transaction back,
+ * and a store that this import created is removed again.
  */
 public final class ImportHistory {
 
@@ -54,6 +65,36 @@ public final class ImportHistory {
     public record Result(long recorded, Path file, String store) {
     }
 
+    /** What an import tells as it goes (from any of its threads, one call at a time); each is ignored by default. */
+    public interface Watch {
+        /** A sheet row was read. */
+        default void rowRead(long row) {
+        }
+
+        /** The lots begin to be recorded: this many, or 0 while the rest of the list is still being checked. */
+        default void recording(long lots) {
+        }
+
+        /** This many lots are recorded so far (committed only when the import returns). */
+        default void recorded(long lots) {
+        }
+
+        /** Told nothing. */
+        Watch NONE = new Watch() {
+        };
+    }
+
+    /** A checked lot and the sheet row it came from. */
+    private record Checked(RecordContent.Lot lot, int row) {
+    }
+
+    /** Where the rows were read: to name a row in a message. */
+    private record Origin(Path file, SheetSource source, String sheetName) {
+        String where(int row) {
+            return source.whereRow(sheetName, row);
+        }
+    }
+
     private static final List<String> REQUIRED = List.of("lot", "supplier", "part", "received", "sample size",
             "nonconforming", "verdict");
     private static final List<String> OPTIONAL = List.of("lot size", "acceptance number", "inspector", "defects",
@@ -62,9 +103,43 @@ public final class ImportHistory {
     private ImportHistory() {
     }
 
-    /** Reads and checks every row (the store must exist); records the lots. */
+    /** Imports into a store that must exist. */
     public static Result run(Request request) {
-        return record(check(request, row -> { }), row -> { });
+        return run(request, () -> HistoryStore.open(request.store(), false), Watch.NONE);
+    }
+
+    /**
+     * Imports the list into the store {@code open} opens (it may create it: a store created here is removed again
+     * when the import fails), telling {@code watch} how far it is.
+     */
+    public static Result run(Request request, Supplier<HistoryStore> open, Watch watch) {
+        Origin[] origin = new Origin[1];
+        HistoryStore store = null;
+        try (MadeAhead<Checked> rows = MadeAhead.pushed(sink -> check(request, watch::rowRead, opened ->
+                origin[0] = opened, sink, ImportHistory::hash), "lotgate-import-check")) {
+            List<Checked> lead = new ArrayList<>();
+            long bulkFrom = HistoryStore.BULK;
+            while (lead.size() < bulkFrom && rows.hasNext()) {
+                lead.add(rows.next());
+                if (lead.size() == HistoryStore.BULK && store == null) {
+                    store = open.get();
+                    bulkFrom = store.bulkLoadFrom();
+                }
+            }
+            if (store == null) {
+                store = open.get();
+            }
+            Result result = lead.size() < bulkFrom
+                    ? record(store, origin[0], lead, watch)
+                    : recordStreaming(store, origin[0], lead, rows, watch);
+            store.close();
+            return result;
+        } catch (RuntimeException | Error e) {
+            if (store != null) {
+                store.discardIfCreated();
+            }
+            throw e;
+        }
     }
 
     /**
@@ -72,15 +147,36 @@ public final class ImportHistory {
      * list; tells {@code rowsRead} each sheet row read.
      */
     public static Lots check(Request request, LongConsumer rowsRead) {
+        return check(request, rowsRead, ImportHistory::hash);
+    }
+
+    /** Checks every row as {@link #check(Request, LongConsumer)} does, with a lot's hash given (tests make it weak). */
+    static Lots check(Request request, LongConsumer rowsRead, ToLongFunction<RecordContent.Lot> hash) {
+        Origin[] origin = new Origin[1];
+        List<RecordContent.Lot> lots = new ArrayList<>();
+        List<Integer> rows = new ArrayList<>();
+        check(request, rowsRead, opened -> origin[0] = opened, checked -> {
+            lots.add(checked.lot());
+            rows.add(checked.row());
+        }, hash);
+        return new Lots(request, origin[0].source(), origin[0].sheetName(), lots, rows);
+    }
+
+    /**
+     * Checks every row, handing each lot to {@code lots} in the file's order and telling {@code opened} where
+     * they are read before the first; refuses a missing column, a bad cell, a lot listed twice or an empty list.
+     */
+    private static void check(Request request, LongConsumer rowsRead, Consumer<Origin> opened,
+            Consumer<Checked> lots, ToLongFunction<RecordContent.Lot> hash) {
         Path file = request.file();
         SheetSource source = SheetSource.open(file);
         String sheetName = request.sheet() != null ? request.sheet() : source.sheetNames().get(0);
-        List<RecordContent.Lot> lots = new ArrayList<>();
-        List<Integer> sheetRows = new ArrayList<>();
-        Map<List<String>, Integer> seen = new HashMap<>();
+        opened.accept(new Origin(file, source, sheetName));
+        SeenLots seen = new SeenLots();
         Map<String, Integer> columns = new HashMap<>();
         Map<Object, Object> shared = new HashMap<>();
         HeaderSearch search = new HeaderSearch();
+        long[] count = new long[1];
         source.findHeader(texts -> search.missing(texts).isEmpty());
         source.read(request.sheet(), (row, cells) -> {
             rowsRead.accept(row);
@@ -102,22 +198,125 @@ public final class ImportHistory {
                 return;
             }
             RecordContent.Lot lot = lot(file, source, sheetName, row, cells, shared, columns);
-            Integer first = seen.putIfAbsent(List.of(lot.supplier(), lot.part(), lot.lot()), row);
+            List<Integer> alike = seen.add(hash.applyAsLong(lot), row);
+            Integer first = alike.isEmpty() ? null : listedAt(request, columns, alike, lot);
             if (first != null) {
                 throw new SheetException(file, source.whereRow(sheetName, row) + ": lot " + lot.lot() + " of "
                         + lot.supplier() + ", part " + lot.part() + " is listed twice (first " + source.whereRow(
                         sheetName, first) + "); a lot is recorded once (nothing was imported)");
             }
-            lots.add(lot);
-            sheetRows.add(row);
+            count[0]++;
+            lots.accept(new Checked(lot, row));
         });
         if (columns.isEmpty()) {
             throw search.refusal(file, source, sheetName);
         }
-        if (lots.isEmpty()) {
+        if (count[0] == 0) {
             throw new SheetException(file, "no lots to import below the header");
         }
-        return new Lots(request, source, sheetName, lots, sheetRows);
+    }
+
+    /**
+     * The lots listed so far, each by a 64-bit hash of its supplier, part and lot and the row it came on: 12 bytes
+     * a lot in a table at most half full, where the texts themselves took about 170 (a list of 400,000 lots held 68
+     * MB). Two lots of one hash are told apart by reading the earlier rows again ({@link #listedAt}): a lot listed
+     * twice is refused naming both rows, and two lots that only share a hash are both taken.
+     */
+    static final class SeenLots {
+        private long[] hashes = new long[1 << 12];
+        private int[] rows = new int[hashes.length];
+        private int size;
+        /** The later rows of each hash that more than one row had. */
+        private final Map<Long, List<Integer>> more = new HashMap<>();
+
+        /** Notes the row's lot by its hash; returns the earlier rows of the same hash, in order (empty: none). */
+        List<Integer> add(long hash, int row) {
+            long key = hash == 0 ? 1 : hash; // 0 marks an empty place
+            int mask = hashes.length - 1;
+            for (int i = place(key) & mask; ; i = (i + 1) & mask) {
+                if (hashes[i] == 0) {
+                    hashes[i] = key;
+                    rows[i] = row;
+                    if (++size * 2 > hashes.length) {
+                        grow();
+                    }
+                    return List.of();
+                }
+                if (hashes[i] == key) {
+                    List<Integer> earlier = new ArrayList<>();
+                    earlier.add(rows[i]);
+                    List<Integer> later = more.computeIfAbsent(key, k -> new ArrayList<>());
+                    earlier.addAll(later);
+                    later.add(row);
+                    return earlier;
+                }
+            }
+        }
+
+        private static int place(long key) {
+            // MurmurHash3's finalizer, so that nearby hashes spread over the table.
+            long h = key;
+            h = (h ^ (h >>> 33)) * 0xff51afd7ed558ccdL;
+            h = (h ^ (h >>> 33)) * 0xc4ceb9fe1a85ec53L;
+            return (int) (h ^ (h >>> 33));
+        }
+
+        private void grow() {
+            long[] oldHashes = hashes;
+            int[] oldRows = rows;
+            hashes = new long[oldHashes.length * 2];
+            rows = new int[hashes.length];
+            int mask = hashes.length - 1;
+            for (int j = 0; j < oldHashes.length; j++) {
+                if (oldHashes[j] != 0) {
+                    int i = place(oldHashes[j]) & mask;
+                    while (hashes[i] != 0) {
+                        i = (i + 1) & mask;
+                    }
+                    hashes[i] = oldHashes[j];
+                    rows[i] = oldRows[j];
+                }
+            }
+        }
+    }
+
+    /** A lot's 64-bit FNV-1a hash of its supplier, part and lot, each text ended by a character no name holds. */
+    static long hash(RecordContent.Lot lot) {
+        long h = 0xcbf29ce484222325L;
+        for (String text : new String[] {lot.supplier(), lot.part(), lot.lot()}) {
+            for (int i = 0; i < text.length(); i++) {
+                h = (h ^ text.charAt(i)) * 0x100000001b3L;
+            }
+            h = (h ^ 0xffff) * 0x100000001b3L;
+        }
+        return h;
+    }
+
+    /**
+     * The first of the earlier rows (in order) that lists the same lot, read again from the file, or null when
+     * they only share its hash.
+     */
+    private static Integer listedAt(Request request, Map<String, Integer> columns, List<Integer> rows,
+            RecordContent.Lot lot) {
+        SheetSource again = SheetSource.open(request.file());
+        String sheetName = request.sheet() != null ? request.sheet() : again.sheetNames().get(0);
+        HeaderSearch search = new HeaderSearch();
+        again.findHeader(texts -> search.missing(texts).isEmpty());
+        int last = rows.get(rows.size() - 1);
+        Integer[] found = new Integer[1];
+        again.read(request.sheet(), (row, cells) -> {
+            if (row > last || found[0] != null) {
+                throw new RowHandler.Stop();
+            }
+            if (rows.contains(row)) {
+                RecordContent.Lot earlier = lot(request.file(), again, sheetName, row, cells, new HashMap<>(), columns);
+                if (earlier.supplier().equals(lot.supplier()) && earlier.part().equals(lot.part())
+                        && earlier.lot().equals(lot.lot())) {
+                    found[0] = row;
+                }
+            }
+        });
+        return found[0];
     }
 
     /**
@@ -162,28 +361,68 @@ public final class ImportHistory {
      * {@code lotsRecorded} each lot as it is written. The store must exist.
      */
     public static Result record(Lots checked, LongConsumer lotsRecorded) {
-        List<RecordContent.Lot> lots = checked.lots();
+        List<Checked> lots = new ArrayList<>();
+        for (int i = 0; i < checked.lots().size(); i++) {
+            lots.add(new Checked(checked.lots().get(i), checked.rows().get(i)));
+        }
         try (HistoryStore store = HistoryStore.open(checked.request().store(), false)) {
-            Map<String, Part> parts = new HashMap<>();
-            for (int i = 0; i < lots.size(); i++) {
-                RecordContent.Lot lot = lots.get(i);
-                Part part = parts.computeIfAbsent(key(lot), k -> Part.of(store, lot));
-                Long existing = part.recorded().get(lot.lot());
-                if (existing != null) {
-                    throw new SheetException(checked.request().file(), checked.source().whereRow(checked.sheetName(),
-                            checked.rows().get(i)) + ": lot " + lot.lot() + " of " + lot.supplier() + ", part "
-                            + lot.part() + " is already recorded as #" + existing + " in " + store.location()
-                            + " (nothing was imported)");
-                }
-            }
-            long written = store.appendEach(() -> withSeverities(lots, parts, lotsRecorded), lots.size(),
-                    Instant.now().truncatedTo(ChronoUnit.MILLIS));
-            return new Result(written, checked.request().file(), store.location());
+            return record(store, new Origin(checked.request().file(), checked.source(), checked.sheetName()), lots,
+                    new Watch() {
+                        @Override
+                        public void recorded(long lots) {
+                            lotsRecorded.accept(lots);
+                        }
+                    });
         }
     }
 
-    private static String key(RecordContent.Lot lot) {
-        return lot.supplier() + "\u0000" + lot.part();
+    /** Records lots all checked: each part's history is read as the part first comes. */
+    private static Result record(HistoryStore store, Origin origin, List<Checked> lots, Watch watch) {
+        Map<PartKey, Part> parts = new HashMap<>();
+        for (Checked checked : lots) {
+            Part part = parts.computeIfAbsent(key(checked.lot()), k -> Part.of(store, checked.lot()));
+            part.refuseRecorded(store, origin, checked);
+        }
+        watch.recording(lots.size());
+        long written = store.appendEach(() -> withSeverities(lots.iterator(), parts, store, origin, watch),
+                lots.size(), Instant.now().truncatedTo(ChronoUnit.MILLIS));
+        return new Result(written, origin.file(), store.location());
+    }
+
+    /**
+     * Records the lots of a long list while the rest of it is still being checked (on the threads of the bulk
+     * load): every part's history is read first, in one pass, since the store holds no more lots than the list.
+     */
+    private static Result recordStreaming(HistoryStore store, Origin origin, List<Checked> lead,
+            Iterator<Checked> rest, Watch watch) {
+        Map<PartKey, Part> parts = Part.all(store);
+        long expected = lead.size();
+        ArrayDeque<Checked> first = new ArrayDeque<>(lead);
+        lead.clear();
+        Iterator<Checked> all = new Iterator<>() {
+            @Override
+            public boolean hasNext() {
+                return !first.isEmpty() || rest.hasNext();
+            }
+
+            @Override
+            public Checked next() {
+                Checked next = first.poll();
+                return next != null ? next : rest.next();
+            }
+        };
+        watch.recording(0);
+        long written = store.appendEach(() -> withSeverities(all, parts, store, origin, watch), expected,
+                Instant.now().truncatedTo(ChronoUnit.MILLIS));
+        return new Result(written, origin.file(), store.location());
+    }
+
+    /** A supplier's part. */
+    private record PartKey(String supplier, String part) {
+    }
+
+    private static PartKey key(RecordContent.Lot lot) {
+        return new PartKey(lot.supplier(), lot.part());
     }
 
     /**
@@ -192,33 +431,67 @@ public final class ImportHistory {
      */
     private record Part(Map<String, Long> recorded, SeverityTracker tracker) {
         static Part of(HistoryStore store, RecordContent.Lot lot) {
-            SupplierHistory history = new SupplierHistory(store.rows(lot.supplier(), lot.part()),
-                    SwitchingRules.CURRENT);
+            return of(store.rows(lot.supplier(), lot.part()));
+        }
+
+        private static Part of(List<LotRow> rows) {
+            SupplierHistory history = new SupplierHistory(rows, SwitchingRules.CURRENT);
             Map<String, Long> recorded = new HashMap<>();
             for (SupplierHistory.Entry entry : history.entries()) {
                 recorded.put(entry.row().lot(), entry.row().seq());
             }
             return new Part(recorded, history.continuation());
         }
+
+        /** Every part the store holds lots of, from one reading of all its records. */
+        static Map<PartKey, Part> all(HistoryStore store) {
+            Map<PartKey, List<LotRow>> byPart = new LinkedHashMap<>();
+            for (LotRow row : store.rows(null, null)) {
+                byPart.computeIfAbsent(new PartKey(row.supplier(), row.part()), k -> new ArrayList<>()).add(row);
+            }
+            Map<PartKey, Part> parts = new HashMap<>();
+            byPart.forEach((key, rows) -> parts.put(key, of(rows)));
+            return parts;
+        }
+
+        /** A part the store holds no lot of. */
+        static Part none() {
+            return of(List.of());
+        }
+
+        void refuseRecorded(HistoryStore store, Origin origin, Checked checked) {
+            RecordContent.Lot lot = checked.lot();
+            Long existing = recorded.get(lot.lot());
+            if (existing != null) {
+                throw new SheetException(origin.file(), origin.where(checked.row()) + ": lot " + lot.lot() + " of "
+                        + lot.supplier() + ", part " + lot.part() + " is already recorded as #" + existing + " in "
+                        + store.location() + " (nothing was imported)");
+            }
+        }
     }
 
-    /** Each lot, as it is written, with the severity the switching rules had it under. */
-    private static Iterator<ObjectNode> withSeverities(List<RecordContent.Lot> lots, Map<String, Part> parts,
-            LongConsumer recorded) {
-        Iterator<RecordContent.Lot> each = lots.iterator();
+    /**
+     * Each lot, as it is written, with the severity the switching rules had it under; a part not in {@code parts}
+     * has no lot in the store, and a lot the store holds is refused.
+     */
+    private static Iterator<ObjectNode> withSeverities(Iterator<Checked> lots, Map<PartKey, Part> parts,
+            HistoryStore store, Origin origin, Watch watch) {
         return new Iterator<>() {
             private long done;
 
             @Override
             public boolean hasNext() {
-                return each.hasNext();
+                return lots.hasNext();
             }
 
             @Override
             public ObjectNode next() {
-                RecordContent.Lot lot = each.next();
-                recorded.accept(++done);
-                SeverityTracker tracker = parts.get(key(lot)).tracker();
+                Checked checked = lots.next();
+                RecordContent.Lot lot = checked.lot();
+                Part part = parts.computeIfAbsent(key(lot), k -> Part.none());
+                part.refuseRecorded(store, origin, checked);
+                watch.recorded(++done);
+                SeverityTracker tracker = part.tracker();
                 Severity severity = tracker.severity();
                 if (severity != Severity.DISCONTINUED) {
                     tracker.lot(lot.lot(), "accept".equals(lot.verdict()), lot.nonconforming(),
@@ -234,8 +507,8 @@ public final class ImportHistory {
 
     /**
      * One checked lot. Its names, days and words are taken from {@code shared} where an earlier lot had them
-     * (added there otherwise): a long list repeats each supplier, part, inspector and day many times, and every
-     * lot is held until all are checked.
+     * (added there otherwise): a long list repeats each supplier, part, inspector and day many times, and a short
+     * list is held whole until all of it is checked.
      */
     private static RecordContent.Lot lot(Path file, SheetSource source, String sheetName, int row, List<Cell> cells,
             Map<Object, Object> shared, Map<String, Integer> columns) {

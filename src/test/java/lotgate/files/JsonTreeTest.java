@@ -73,6 +73,24 @@ class JsonTreeTest {
         assertEquals(MAPPER.writeValueAsString(sortedByMapper(tree)), JsonTree.sortedCompact(tree));
     }
 
+    /**
+     * The sorted order of the last object of each size is used again for the next with the same names: objects of
+     * one size with the same names in another order, or with other names, are still written as the mapper writes
+     * them sorted, one after the other.
+     */
+    @Test
+    void objectsOfOneSizeAreEachWrittenInTheirOwnSortedOrder() throws IOException {
+        String[] texts = {"{\"b\":1,\"a\":{\"y\":1,\"x\":2}}", "{\"a\":{\"x\":2,\"y\":1},\"b\":1}",
+            "{\"c\":1,\"a\":{\"z\":3,\"x\":2}}", "{\"b\":1,\"a\":{\"y\":1,\"x\":2}}",
+            "{\"B\":1,\"a\":{\"y\":1,\"\u00e9\":2}}"};
+        for (int round = 0; round < 2; round++) {
+            for (String text : texts) {
+                JsonNode tree = MAPPER.readTree(text);
+                assertEquals(MAPPER.writeValueAsString(sortedByMapper(tree)), JsonTree.sortedCompact(tree), text);
+            }
+        }
+    }
+
     /** A lot key's text, written without a tree, as the mapper writes the array of its texts. */
     @Property(tries = 300)
     void anArrayOfTextsIsWrittenAsTheMapperWritesIt(@ForAll("texts") List<String> texts) throws IOException {

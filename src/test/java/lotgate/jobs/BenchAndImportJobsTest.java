@@ -179,4 +179,111 @@ class BenchAndImportJobsTest {
             }
         }
     }
+
+    private static final String HEADER = "lot,supplier,part,received,lot size,sample size,nonconforming,verdict\n";
+
+    /** Invented past lots L-from to L-(to - 1) of three parts, one in ten rejected. */
+    private static String lots(int from, int to) {
+        StringBuilder rows = new StringBuilder();
+        for (int i = from; i < to; i++) {
+            boolean rejected = i % 10 == 3 || i % 10 == 6;
+            rows.append("L-" + i + ",Invented Supplier,P-" + i % 3 + ","
+                    + java.time.LocalDate.of(2025, 1, 1).plusDays(i / 10) + ",2000,50," + (rejected ? 4 : i % 2) + ","
+                    + (rejected ? "reject" : "accept") + "\n");
+        }
+        return rows.toString();
+    }
+
+    private Path csv(String name, String rows) throws IOException {
+        Path file = folder.resolve(name);
+        Files.writeString(file, HEADER + rows);
+        return file;
+    }
+
+    @Test
+    void aLongListIntoAStoreWithLotsCarriesEachPartsSwitchingStateOnAsShortListsDo() throws Exception {
+        // 600 lots first, then a list of 1,200 (more than the store holds: checked while it is recorded, each
+        // part's history read in one pass); the twin store takes the same lots in lists of 600.
+        Path start = csv("start.csv", lots(0, 600));
+        Path longList = csv("long.csv", lots(600, 1800));
+        String streamed = folder.resolve("streamed.sqlite").toString();
+        String inShortLists = folder.resolve("short.sqlite").toString();
+        HistoryStore.open(streamed).close();
+        HistoryStore.open(inShortLists).close();
+        assertEquals(600, ImportHistory.run(new ImportHistory.Request(start, null, streamed)).recorded());
+        assertEquals(1200, ImportHistory.run(new ImportHistory.Request(longList, null, streamed)).recorded());
+        for (int from = 0; from < 1800; from += 600) {
+            Path part = csv("short-" + from + ".csv", lots(from, from + 600));
+            assertEquals(600, ImportHistory.run(new ImportHistory.Request(part, null, inShortLists)).recorded());
+        }
+        String records = "SELECT seq, supplier, part, lot, verdict, nonconforming, severity, content, lot_key"
+                + " FROM lot_record ORDER BY seq";
+        assertEquals(Stores.rows(inShortLists, records), Stores.rows(streamed, records));
+        assertTrue(Stores.rows(streamed, "SELECT seq FROM lot_record WHERE seq > 600 AND severity <> 'normal'")
+                .size() > 10, "the switching rules moved some parts off normal inspection in the long list");
+    }
+
+    @Test
+    void aBadRowFarDownALongListRecordsNothingAndRemovesTheStoreItCreated() throws Exception {
+        Path file = csv("bad.csv", lots(0, 1500) + "L-1500,Invented Supplier,P-0,2025-13-01,2000,50,0,accept\n"
+                + lots(1501, 1600));
+        Path created = folder.resolve("new").resolve("history.sqlite");
+        SheetException refused = assertThrows(SheetException.class, () -> ImportHistory.run(
+                new ImportHistory.Request(file, null, created.toString()),
+                () -> HistoryStore.open(created.toString(), true), ImportHistory.Watch.NONE));
+        assertTrue(refused.getMessage().contains("row 1502"), refused.getMessage());
+        try (var left = Files.list(created.getParent())) {
+            assertEquals(java.util.List.of(), left.toList(), "the store this import created is removed");
+        }
+        // Into a store that was there: nothing recorded, the store kept.
+        String store = newStore();
+        assertThrows(SheetException.class, () -> ImportHistory.run(new ImportHistory.Request(file, null, store)));
+        try (HistoryStore opened = HistoryStore.open(store, false)) {
+            assertEquals(0, opened.verify().records());
+        }
+    }
+
+    @Test
+    void aLotListedTwiceFarApartOrAlreadyRecordedIsRefusedByItsRowsInALongList() throws Exception {
+        Path twice = csv("twice.csv", lots(0, 1400) + lots(7, 8));
+        String store = newStore();
+        SheetException refused = assertThrows(SheetException.class, () -> ImportHistory.run(
+                new ImportHistory.Request(twice, null, store)));
+        assertEquals(twice + ": row 1402: lot L-7 of Invented Supplier, part P-1 is listed twice (first row 9); a lot"
+                + " is recorded once (nothing was imported)", refused.getMessage());
+        assertEquals(50, ImportHistory.run(new ImportHistory.Request(csv("some.csv", lots(0, 50)), null, store))
+                .recorded());
+        SheetException recorded = assertThrows(SheetException.class, () -> ImportHistory.run(
+                new ImportHistory.Request(csv("again.csv", lots(50, 1300) + lots(20, 21)), null, store)));
+        assertTrue(recorded.getMessage().contains("row 1252: lot L-20 of Invented Supplier, part P-2 is already"
+                + " recorded as #21 in "), recorded.getMessage());
+        try (HistoryStore opened = HistoryStore.open(store, false)) {
+            assertEquals(50, opened.verify().records());
+        }
+    }
+
+    @Test
+    void lotsThatOnlyShareAHashAreAllTakenAndATrueRepeatIsStillFound() throws Exception {
+        // Every lot given the same hash: each is told apart from the earlier ones by reading their rows again.
+        ImportHistory.Request distinct = new ImportHistory.Request(csv("distinct.csv", lots(0, 40)), null, "unused");
+        assertEquals(40, ImportHistory.check(distinct, row -> { }, lot -> 42L).lots().size());
+        ImportHistory.Request repeated = new ImportHistory.Request(csv("repeated.csv", lots(0, 40) + lots(12, 13)),
+                null, "unused");
+        SheetException refused = assertThrows(SheetException.class, () -> ImportHistory.check(repeated, row -> { },
+                lot -> 42L));
+        assertTrue(refused.getMessage().contains("row 42: lot L-12 of Invented Supplier, part P-0 is listed twice"
+                + " (first row 14)"), refused.getMessage());
+    }
+
+    @Test
+    void theTableOfSeenLotsGivesBackTheEarlierRowsOfAHashInOrder() {
+        ImportHistory.SeenLots seen = new ImportHistory.SeenLots();
+        for (int row = 2; row < 20_000; row++) {
+            assertEquals(java.util.List.of(), seen.add(row * 0x9E3779B97F4A7C15L, row));
+        }
+        assertEquals(java.util.List.of(5), seen.add(5 * 0x9E3779B97F4A7C15L, 30_000));
+        assertEquals(java.util.List.of(5, 30_000), seen.add(5 * 0x9E3779B97F4A7C15L, 30_001));
+        assertEquals(java.util.List.of(), seen.add(0, 30_002));
+        assertEquals(java.util.List.of(30_002), seen.add(1, 30_003), "0 is kept as 1: both are one hash");
+    }
 }
