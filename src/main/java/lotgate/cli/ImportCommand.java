@@ -35,7 +35,7 @@ final class ImportCommand implements Runnable {
         HistoryStore[] opened = new HistoryStore[1];
         ImportHistory.Result result;
         try (Shown shown = new Shown()) {
-            result = ImportHistory.run(request, () -> opened[0] = storeOption.openQuietly(),
+            result = ImportHistory.run(request, () -> opened[0] = storeOption.openStagedQuietly(),
                     System.console() == null ? ImportHistory.Watch.NONE : shown);
         }
         storeOption.announceIfCreated(opened[0]);

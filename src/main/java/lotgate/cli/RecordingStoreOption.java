@@ -31,22 +31,32 @@ final class RecordingStoreOption extends StoreOption {
 
     /** Opens the store to record into it, creating it only where allowed, and says when it created it. */
     HistoryStore openForRecording() {
-        HistoryStore store = openQuietly();
+        HistoryStore store;
+        try {
+            store = HistoryStore.open(location(), create || !given());
+        } catch (StoreException.Missing missing) {
+            throw refusal(missing);
+        }
         announceIfCreated(store);
         return store;
     }
 
     /**
-     * Opens the store to record into it, creating it only where allowed, without a word: a job that may remove a
-     * store it created after a failure says so by {@link #announceIfCreated} once it has succeeded.
+     * Opens the store to record into it, creating it only where allowed, without a word, and a new SQLite store
+     * under a hidden name until the job publishes it ({@link HistoryStore#openStaged}): a job that may fail part-way
+     * says that it created the store ({@link #announceIfCreated}) once it has succeeded.
      */
-    HistoryStore openQuietly() {
+    HistoryStore openStagedQuietly() {
         try {
-            return HistoryStore.open(location(), create || !given());
+            return HistoryStore.openStaged(location(), create || !given());
         } catch (StoreException.Missing missing) {
-            throw new StoreException.Missing(missing.getMessage() + "; give --create-store to start a new store there"
-                    + " (nothing was recorded)");
+            throw refusal(missing);
         }
+    }
+
+    private static StoreException.Missing refusal(StoreException.Missing missing) {
+        return new StoreException.Missing(missing.getMessage() + "; give --create-store to start a new store there"
+                + " (nothing was recorded)");
     }
 
     /** Says on stderr that the store was created, when opening it did. */

@@ -20,6 +20,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Properties;
 import java.util.TreeMap;
+import java.util.UUID;
 import lotgate.files.CanonicalJson;
 import lotgate.files.IsoText;
 import lotgate.files.MadeAhead;
@@ -42,6 +43,8 @@ public final class HistoryStore implements AutoCloseable {
     private int version;
     /** Whether this opening created the store. */
     private boolean created;
+    /** The hidden file a new store is made in until it is published ({@link #openStaged}), or null. */
+    private Path stagedFile;
     private String storeId;
     private Instant idRecordedAt;
     /** The hash the first record links to: derived from the store's id, or zeros for a store older than its id. */
@@ -100,11 +103,30 @@ public final class HistoryStore implements AutoCloseable {
         return open(location, true, targetVersion, System.getenv());
     }
 
+    /**
+     * Opens a store as {@link #open(String, boolean)} does, but a SQLite store that does not exist yet is made
+     * under a hidden name beside its place, where no other lotgate can open it, and takes its name only when
+     * {@link #publish} is called: a job that may fail part-way through its writes (a long import) leaves no store
+     * behind, and nobody records into a store that is about to be removed ({@link #discardIfCreated}).
+     */
+    public static HistoryStore openStaged(String location, boolean mayCreate) {
+        return open(location, mayCreate, SCHEMA_VERSION, System.getenv(), true);
+    }
+
     static HistoryStore open(String given, boolean mayCreate, int targetVersion, Map<String, String> environment) {
+        return open(given, mayCreate, targetVersion, environment, false);
+    }
+
+    private static HistoryStore open(String given, boolean mayCreate, int targetVersion,
+            Map<String, String> environment, boolean staged) {
         StoreLocation location = StoreLocation.of(given);
+        Path stagedFile = null;
         if (!location.postgres()) {
             Path file = location.file();
             if (!Files.exists(file)) {
+                if (staged && mayCreate) {
+                    stagedFile = file.resolveSibling("." + file.getFileName() + ".new-" + UUID.randomUUID());
+                }
                 if (!mayCreate) {
                     throw new StoreException.Missing("history store " + location.shown() + " does not exist");
                 }
@@ -124,7 +146,8 @@ public final class HistoryStore implements AutoCloseable {
                 SqliteLibrary.prepare();
                 // The driver itself rather than DriverManager, which would first load and start every JDBC
                 // driver on the class path (PostgreSQL's and its logging: 15 ms of a short command).
-                connection = new org.sqlite.JDBC().connect(location.url(), sqliteSettings());
+                connection = new org.sqlite.JDBC().connect(stagedFile == null ? location.url()
+                        : "jdbc:sqlite:" + stagedFile, sqliteSettings());
                 if (connection != null) {
                     writeAheadLog(connection);
                 }
@@ -140,6 +163,7 @@ public final class HistoryStore implements AutoCloseable {
                     + location.scrub(firstLine(e)) + ")", null);
         }
         HistoryStore store = new HistoryStore(location, connection);
+        store.stagedFile = stagedFile;
         try {
             store.migrate(targetVersion, mayCreate);
         } catch (RuntimeException e) {
@@ -244,24 +268,64 @@ public final class HistoryStore implements AutoCloseable {
     }
 
     /**
-     * Closes a SQLite store that this opening created and removes its file (with its journal or log), when a
-     * failure left it holding nothing: a command that was refused leaves no new store behind. Any other store is
-     * only closed.
+     * Closes the store; a new store made under a hidden name ({@link #openStaged}) is given its place, unless a
+     * store appeared there meanwhile: that one is kept, and this one is removed and refused.
      */
-    public void discardIfCreated() {
+    public void publish() {
         close();
-        if (!created || postgres) {
+        if (stagedFile == null) {
             return;
         }
         Path file = location.file();
+        try {
+            try {
+                // A hard link cannot replace a store that appeared at the place meanwhile; a move could.
+                Files.createLink(file, stagedFile);
+                Files.delete(stagedFile);
+                // The rollback journal of a bulk load is left empty by its commit.
+                Path journal = stagedFile.resolveSibling(stagedFile.getFileName() + "-journal");
+                if (Files.exists(journal) && Files.size(journal) == 0) {
+                    Files.delete(journal);
+                }
+            } catch (UnsupportedOperationException | java.nio.file.FileSystemException e) {
+                if (e instanceof java.nio.file.FileAlreadyExistsException) {
+                    throw e;
+                }
+                Files.move(stagedFile, file);
+            }
+            stagedFile = null;
+        } catch (java.nio.file.FileAlreadyExistsException e) {
+            removeStaged();
+            throw new StoreException("history store " + location.shown() + " was created by another command while"
+                    + " this one ran; nothing was recorded", null);
+        } catch (java.io.IOException e) {
+            removeStaged();
+            throw new StoreException("cannot put the new history store in its place " + location.shown() + " ("
+                    + e.getMessage() + "); nothing was recorded", null);
+        }
+    }
+
+    /**
+     * Closes the store and, when it is a new one made under a hidden name ({@link #openStaged}), removes it: a job
+     * that failed leaves no new store behind. Any other store is only closed.
+     */
+    public void discardIfCreated() {
+        close();
+        removeStaged();
+    }
+
+    private void removeStaged() {
+        if (stagedFile == null) {
+            return;
+        }
         for (String suffix : new String[] {"", "-journal", "-wal", "-shm"}) {
             try {
-                Files.deleteIfExists(file.resolveSibling(file.getFileName() + suffix));
+                Files.deleteIfExists(stagedFile.resolveSibling(stagedFile.getFileName() + suffix));
             } catch (java.io.IOException e) {
-                throw new StoreException("cannot remove the new history store " + location.shown()
-                        + " after the failure (" + e.getMessage() + "); remove it by hand", e);
+                // A hidden file left behind holds nothing anyone records into.
             }
         }
+        stagedFile = null;
     }
 
     /**

@@ -109,8 +109,9 @@ public final class ImportHistory {
     }
 
     /**
-     * Imports the list into the store {@code open} opens (it may create it: a store created here is removed again
-     * when the import fails), telling {@code watch} how far it is.
+     * Imports the list into the store {@code open} opens, telling {@code watch} how far it is. A store it may
+     * create should be opened by {@link HistoryStore#openStaged}: the import publishes it when all is recorded,
+     * and removes it when the import fails.
      */
     public static Result run(Request request, Supplier<HistoryStore> open, Watch watch) {
         Origin[] origin = new Origin[1];
@@ -132,7 +133,7 @@ public final class ImportHistory {
             Result result = lead.size() < bulkFrom
                     ? record(store, origin[0], lead, watch)
                     : recordStreaming(store, origin[0], lead, rows, watch);
-            store.close();
+            store.publish();
             return result;
         } catch (RuntimeException | Error e) {
             if (store != null) {

@@ -230,7 +230,7 @@ class BenchAndImportJobsTest {
         Path created = folder.resolve("new").resolve("history.sqlite");
         SheetException refused = assertThrows(SheetException.class, () -> ImportHistory.run(
                 new ImportHistory.Request(file, null, created.toString()),
-                () -> HistoryStore.open(created.toString(), true), ImportHistory.Watch.NONE));
+                () -> HistoryStore.openStaged(created.toString(), true), ImportHistory.Watch.NONE));
         assertTrue(refused.getMessage().contains("row 1502"), refused.getMessage());
         try (var left = Files.list(created.getParent())) {
             assertEquals(java.util.List.of(), left.toList(), "the store this import created is removed");
@@ -285,5 +285,52 @@ class BenchAndImportJobsTest {
         assertEquals(java.util.List.of(5, 30_000), seen.add(5 * 0x9E3779B97F4A7C15L, 30_001));
         assertEquals(java.util.List.of(), seen.add(0, 30_002));
         assertEquals(java.util.List.of(30_002), seen.add(1, 30_003), "0 is kept as 1: both are one hash");
+    }
+
+    @Test
+    void aNewStoreTakesItsPlaceOnlyOnceTheImportIsDoneAndNeverReplacesOneMadeMeanwhile() throws Exception {
+        Path file = csv("long.csv", lots(0, 1500));
+        Path place = folder.resolve("history.sqlite");
+        boolean[] absentWhileRecording = {false};
+        ImportHistory.Watch looking = new ImportHistory.Watch() {
+            @Override
+            public void recorded(long lots) {
+                if (lots == 700) {
+                    absentWhileRecording[0] = !Files.exists(place);
+                }
+            }
+        };
+        ImportHistory.Result result = ImportHistory.run(new ImportHistory.Request(file, null, place.toString()),
+                () -> HistoryStore.openStaged(place.toString(), true), looking);
+        assertEquals(1500, result.recorded());
+        assertTrue(absentWhileRecording[0], "no other command can open the new store before it is done");
+        try (var files = Files.list(folder)) {
+            assertEquals(java.util.List.of(place.getFileName().toString(), "long.csv"), files.map(f -> f.getFileName()
+                    .toString()).sorted().toList(), "nothing of the hidden store is left");
+        }
+        try (HistoryStore opened = HistoryStore.open(place.toString(), false)) {
+            assertEquals(1500, opened.verify().records());
+        }
+        // Another command makes a store at the place while a second import into a new store runs there.
+        Path other = folder.resolve("other.sqlite");
+        ImportHistory.Watch makingOne = new ImportHistory.Watch() {
+            @Override
+            public void recorded(long lots) {
+                if (lots == 700) {
+                    HistoryStore.open(other.toString(), true).close();
+                }
+            }
+        };
+        lotgate.history.StoreException refused = assertThrows(lotgate.history.StoreException.class,
+                () -> ImportHistory.run(new ImportHistory.Request(file, null, other.toString()),
+                        () -> HistoryStore.openStaged(other.toString(), true), makingOne));
+        assertEquals("history store " + other + " was created by another command while this one ran; nothing was"
+                + " recorded", refused.getMessage());
+        try (HistoryStore kept = HistoryStore.open(other.toString(), false)) {
+            assertEquals(0, kept.verify().records(), "the other command's store is kept as it made it");
+        }
+        try (var files = Files.list(folder)) {
+            assertEquals(3, files.count(), "the refused import left nothing beside the stores and the list");
+        }
     }
 }
