@@ -81,27 +81,33 @@ public final class MadeAhead<R> implements Iterator<R>, AutoCloseable {
         }
     }
 
-    private Thread start(Consumer<Consumer<R>> producer, String name) {
-        Thread started = new Thread(() -> {
-            List<List<R>> made = new ArrayList<>(List.of(new ArrayList<>(BATCH)));
-            Consumer<R> sink = item -> {
-                if (closed) {
+    /** The producer's consumer: gathers the items in batches and queues each full one for the reader. */
+    private final class Batching implements Consumer<R> {
+        private List<R> batch = new ArrayList<>(BATCH);
+
+        @Override
+        public void accept(R item) {
+            if (closed) {
+                throw new Stopped();
+            }
+            batch.add(item);
+            if (batch.size() == BATCH) {
+                try {
+                    batches.put(batch);
+                } catch (InterruptedException e) {
                     throw new Stopped();
                 }
-                List<R> batch = made.get(0);
-                batch.add(item);
-                if (batch.size() == BATCH) {
-                    try {
-                        batches.put(batch);
-                    } catch (InterruptedException e) {
-                        throw new Stopped();
-                    }
-                    made.set(0, new ArrayList<>(BATCH));
-                }
-            };
+                batch = new ArrayList<>(BATCH);
+            }
+        }
+    }
+
+    private Thread start(Consumer<Consumer<R>> producer, String name) {
+        Thread started = new Thread(() -> {
+            Batching sink = new Batching();
             try {
                 producer.accept(sink);
-                batches.put(made.get(0));
+                batches.put(sink.batch);
                 batches.put(END);
             } catch (InterruptedException e) {
                 // Closed by the reader: nothing more is wanted.
@@ -112,7 +118,7 @@ public final class MadeAhead<R> implements Iterator<R>, AutoCloseable {
                 }
                 try {
                     // The items made before the failure come first, in their batch.
-                    batches.put(made.get(0));
+                    batches.put(sink.batch);
                     batches.put(new Failure(thrown));
                 } catch (InterruptedException e) {
                     // Closed by the reader, which no longer reads the failure.

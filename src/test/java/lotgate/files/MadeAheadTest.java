@@ -101,4 +101,48 @@ class MadeAheadTest {
         assertFalse(maker.get().isAlive());
         assertEquals("lotgate-made-ahead", maker.get().getName());
     }
+
+    /** Items a producer pushes come to the reader in order; what it throws comes after the items before it. */
+    @Property(tries = 40)
+    void pushedItemsComeInOrderAndAFailureAfterThem(@ForAll @IntRange(max = 3000) int count, @ForAll boolean fails) {
+        IllegalStateException thrown = new IllegalStateException("row " + count + " is bad (invented)");
+        List<Integer> read = new ArrayList<>();
+        try (MadeAhead<Integer> pushed = MadeAhead.pushed(sink -> {
+            for (int i = 0; i < count; i++) {
+                sink.accept(i);
+            }
+            if (fails) {
+                throw thrown;
+            }
+        }, "lotgate-test-producer")) {
+            if (fails) {
+                assertSame(thrown, assertThrows(IllegalStateException.class, () -> pushed.forEachRemaining(read::add)));
+            } else {
+                pushed.forEachRemaining(read::add);
+                assertFalse(pushed.hasNext());
+            }
+        }
+        assertEquals(IntStream.range(0, count).boxed().toList(), read);
+    }
+
+    /** A reader that stops early ends an endless producer, whatever the producer makes of the consumer's throw. */
+    @Test
+    void closingEarlyEndsAProducerThatWrapsWhatItsConsumerThrows() {
+        AtomicReference<Thread> producer = new AtomicReference<>();
+        MadeAhead<Integer> pushed = MadeAhead.pushed(sink -> {
+            producer.set(Thread.currentThread());
+            for (int i = 0; ; i++) {
+                try {
+                    sink.accept(i);
+                } catch (RuntimeException e) {
+                    throw new IllegalStateException("wrapped by the producer", e);
+                }
+            }
+        }, "lotgate-test-producer");
+        assertEquals(0, pushed.next());
+        assertEquals(1, pushed.next());
+        pushed.close();
+        assertFalse(producer.get().isAlive());
+        assertEquals("lotgate-test-producer", producer.get().getName());
+    }
 }
