@@ -146,8 +146,13 @@ public final class HistoryStore implements AutoCloseable {
                 SqliteLibrary.prepare();
                 // The driver itself rather than DriverManager, which would first load and start every JDBC
                 // driver on the class path (PostgreSQL's and its logging: 15 ms of a short command).
-                connection = new org.sqlite.JDBC().connect(stagedFile == null ? location.url()
-                        : "jdbc:sqlite:" + stagedFile, sqliteSettings());
+                String url = location.url();
+                if (stagedFile != null) {
+                    // The hidden file in the place of the given one, with the settings the address gives.
+                    int query = url.equals("jdbc:sqlite:" + location.file()) ? -1 : url.indexOf('?');
+                    url = "jdbc:sqlite:" + stagedFile + (query < 0 ? "" : url.substring(query));
+                }
+                connection = new org.sqlite.JDBC().connect(url, sqliteSettings());
                 if (connection != null) {
                     writeAheadLog(connection);
                 }
@@ -278,20 +283,24 @@ public final class HistoryStore implements AutoCloseable {
         }
         Path file = location.file();
         try {
+            if (Files.exists(staged("-wal"))) {
+                // Closing folds the log into the store and removes it: one left over would not follow the name.
+                throw new java.io.IOException("its write-ahead log was not folded in");
+            }
             try {
                 // A hard link cannot replace a store that appeared at the place meanwhile; a move could.
                 Files.createLink(file, stagedFile);
                 Files.delete(stagedFile);
-                // The rollback journal of a bulk load is left empty by its commit.
-                Path journal = stagedFile.resolveSibling(stagedFile.getFileName() + "-journal");
-                if (Files.exists(journal) && Files.size(journal) == 0) {
-                    Files.delete(journal);
-                }
             } catch (UnsupportedOperationException | java.nio.file.FileSystemException e) {
                 if (e instanceof java.nio.file.FileAlreadyExistsException) {
                     throw e;
                 }
                 Files.move(stagedFile, file);
+            }
+            // The rollback journal of a bulk load is left empty by its commit.
+            Path journal = staged("-journal");
+            if (Files.exists(journal) && Files.size(journal) == 0) {
+                Files.delete(journal);
             }
             stagedFile = null;
         } catch (java.nio.file.FileAlreadyExistsException e) {
@@ -314,13 +323,18 @@ public final class HistoryStore implements AutoCloseable {
         removeStaged();
     }
 
+    /** The hidden new store's file, or its journal, log or shared memory by their suffix. */
+    private Path staged(String suffix) {
+        return stagedFile.resolveSibling(stagedFile.getFileName() + suffix);
+    }
+
     private void removeStaged() {
         if (stagedFile == null) {
             return;
         }
         for (String suffix : new String[] {"", "-journal", "-wal", "-shm"}) {
             try {
-                Files.deleteIfExists(stagedFile.resolveSibling(stagedFile.getFileName() + suffix));
+                Files.deleteIfExists(staged(suffix));
             } catch (java.io.IOException e) {
                 // A hidden file left behind holds nothing anyone records into.
             }

@@ -332,5 +332,13 @@ class BenchAndImportJobsTest {
         try (var files = Files.list(folder)) {
             assertEquals(3, files.count(), "the refused import left nothing beside the stores and the list");
         }
+        // A store named by its JDBC address, with a setting: made hidden with the setting, published at its path.
+        Path addressed = folder.resolve("addressed.sqlite");
+        String url = "jdbc:sqlite:" + addressed + "?busy_timeout=5000";
+        assertEquals(20, ImportHistory.run(new ImportHistory.Request(csv("short.csv", lots(0, 20)), null, url),
+                () -> HistoryStore.openStaged(url, true), ImportHistory.Watch.NONE).recorded());
+        try (HistoryStore opened = HistoryStore.open(addressed.toString(), false)) {
+            assertEquals(20, opened.verify().records());
+        }
     }
 }
