@@ -147,7 +147,16 @@ public final class Main implements Runnable {
         CommandLine cli = commandLine(args);
         cli.setOut(new PrintWriter(new EscapingWriter(out), true));
         cli.setErr(new PrintWriter(new EscapingWriter(err), true));
-        int code = cli.execute(args);
+        int code;
+        try {
+            code = cli.execute(args);
+        } catch (OutOfMemoryError e) {
+            // What the run held is no longer reachable here, so there is room to say so in one line.
+            cli.getErr().println("lotgate: out of memory: the Java heap of " + Runtime.getRuntime().maxMemory()
+                    / (1024 * 1024) + " MB is full, and the command did not finish (a transaction it began is rolled"
+                    + " back); give Java more, e.g. LOTGATE_JAVA_OPTS=-Xmx2g");
+            code = ExitCode.INTERNAL;
+        }
         cli.getOut().flush();
         cli.getErr().flush();
         return code;
