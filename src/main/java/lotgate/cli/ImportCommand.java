@@ -69,6 +69,17 @@ final class ImportCommand implements Runnable {
         }
 
         @Override
+        public synchronized void committing(long lots) {
+            // Said only where the import has run long enough to show its progress.
+            if (line.shown()) {
+                line.close();
+                line = Progress.onTerminal(String.format(java.util.Locale.ROOT,
+                        "import: %,d lots checked; writing the indexes and committing", lots), 0, true);
+                line.say();
+            }
+        }
+
+        @Override
         public synchronized void close() {
             line.close();
         }

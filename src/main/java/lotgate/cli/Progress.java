@@ -50,6 +50,21 @@ final class Progress implements AutoCloseable {
         width = line.length();
     }
 
+    /** Whether the line is on the terminal now (drawn, and not wiped since). */
+    boolean shown() {
+        return width > 0;
+    }
+
+    /** Draws the line's text alone, at once: a last step with nothing to count (an import's commit). */
+    void say() {
+        if (terminal == null) {
+            return;
+        }
+        terminal.print("\r" + what + " ".repeat(Math.max(0, width - what.length())));
+        terminal.flush();
+        width = what.length();
+    }
+
     /** The line for this much done: "importing lots: 40,000 of 100,000 (40%)", or a count when the total is unknown. */
     String line(long done) {
         if (total > 0) {

@@ -79,6 +79,10 @@ public final class ImportHistory {
         default void recorded(long lots) {
         }
 
+        /** All of the list's lots are on their way to the store: the store's indexes and commit come next. */
+        default void committing(long lots) {
+        }
+
         /** Told nothing. */
         Watch NONE = new Watch() {
         };
@@ -479,10 +483,16 @@ public final class ImportHistory {
             HistoryStore store, Origin origin, Watch watch) {
         return new Iterator<>() {
             private long done;
+            private boolean told;
 
             @Override
             public boolean hasNext() {
-                return lots.hasNext();
+                boolean more = lots.hasNext();
+                if (!more && !told) {
+                    told = true;
+                    watch.committing(done);
+                }
+                return more;
             }
 
             @Override

@@ -56,4 +56,22 @@ class ProgressTest {
         }
         assertEquals("", bytes.toString(StandardCharsets.UTF_8));
     }
+
+    @Test
+    void aLastStepIsSaidAtOnceOverTheLineBeforeAndWipedAtTheEnd() {
+        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+        PrintStream terminal = new PrintStream(bytes, true, StandardCharsets.UTF_8);
+        Progress counting = new Progress(terminal, "import: lots", 0, () -> now);
+        assertEquals(false, counting.shown());
+        now += 200_000_000L;
+        counting.at(1_500);
+        assertEquals(true, counting.shown());
+        counting.close();
+        assertEquals(false, counting.shown());
+        Progress last = new Progress(terminal, "import: committing", 0, () -> now);
+        last.say();
+        last.close();
+        assertEquals("\rimport: lots: 1,500\r" + " ".repeat(19) + "\r\rimport: committing\r" + " ".repeat(18) + "\r",
+                bytes.toString(StandardCharsets.UTF_8));
+    }
 }

@@ -341,4 +341,29 @@ class BenchAndImportJobsTest {
             assertEquals(20, opened.verify().records());
         }
     }
+
+    @Test
+    void theWatchIsToldTheCommitOnceAfterTheLastLotOfALongOrAShortList() throws Exception {
+        for (int count : new int[] {1200, 30}) {
+            String store = folder.resolve("watched-" + count + ".sqlite").toString();
+            HistoryStore.open(store).close();
+            java.util.List<String> told = new java.util.ArrayList<>();
+            ImportHistory.Watch watch = new ImportHistory.Watch() {
+                private long last;
+
+                @Override
+                public synchronized void recorded(long lots) {
+                    last = lots;
+                }
+
+                @Override
+                public synchronized void committing(long lots) {
+                    told.add("committing " + lots + " after " + last);
+                }
+            };
+            ImportHistory.run(new ImportHistory.Request(csv("watched-" + count + ".csv", lots(0, count)), null, store),
+                    () -> HistoryStore.open(store, false), watch);
+            assertEquals(java.util.List.of("committing " + count + " after " + count), told);
+        }
+    }
 }
