@@ -409,7 +409,8 @@ public final class HistoryStore implements AutoCloseable {
                 execute("COMMIT");
             }
             return result;
-        } catch (SQLException | RuntimeException e) {
+        } catch (SQLException | RuntimeException | Error e) {
+            // An Error too (a load's thread out of memory): the transaction ends here, not at the connection's close.
             try {
                 if (postgres) {
                     connection.rollback();
@@ -419,12 +420,15 @@ public final class HistoryStore implements AutoCloseable {
             } catch (SQLException ignored) {
                 // The original failure is the one worth reporting (there may be no transaction to roll back).
             }
+            if (e instanceof Error error) {
+                throw error;
+            }
             if (e instanceof StoreException store) {
                 throw store;
             }
             // The driver's exception is not chained: its message may quote the URL with its password.
             throw new StoreException("history store " + location.shown() + ": cannot " + what + " ("
-                    + location.scrub(firstLine(e)) + ")", null);
+                    + location.scrub(firstLine((Exception) e)) + ")", null);
         }
     }
 
